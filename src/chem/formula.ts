@@ -1,0 +1,105 @@
+/**
+ * Chemical formulas: parsing and molar mass from the CIAAW standard atomic weights.
+ *
+ * Accepted forms: `C3H8`, `CH3OH`, `Ca(OH)2`, `[Co(NH3)6]Cl3`, `CuSO4·5H2O` (also `*` or `.` for the dot),
+ * decimal subscripts for surrogate fuels (`C7.8H15.6`).
+ *
+ * @module
+ */
+import atomicWeights from '../../data/atomic-weights.json';
+import { FormulaError } from '../errors.js';
+
+const WEIGHTS: Readonly<Record<string, number>> = atomicWeights.elements;
+
+/** Standard atomic weight (g/mol) of an element symbol, or `undefined` if heatstate has none. */
+export function atomicWeight(symbol: string): number | undefined {
+  return Object.prototype.hasOwnProperty.call(WEIGHTS, symbol) ? WEIGHTS[symbol] : undefined;
+}
+
+/** Element symbols heatstate has atomic weights for. */
+export function knownElements(): string[] {
+  return Object.keys(WEIGHTS);
+}
+
+/**
+ * Counts the atoms of each element in a formula.
+ * @throws {@link FormulaError} with the position of the first problem
+ * @example
+ * ```ts
+ * parseFormula('Ca(OH)2');      //=> { Ca: 1, O: 2, H: 2 }
+ * parseFormula('CuSO4·5H2O');   //=> { Cu: 1, S: 1, O: 9, H: 10 }
+ * ```
+ */
+export function parseFormula(formula: string): Record<string, number> {
+  const s = formula.trim();
+  if (s === '') throw new FormulaError(formula, 0, 'empty formula');
+  let pos = 0;
+  const fail = (what: string): never => {
+    throw new FormulaError(formula, pos, `cannot read formula "${formula}": ${what} at position ${pos + 1}`);
+  };
+  const readNumber = (): number | undefined => {
+    const m = /^\d+(?:\.\d+)?/.exec(s.slice(pos));
+    if (!m) return undefined;
+    pos += m[0].length;
+    const n = Number(m[0]);
+    if (n === 0) fail('a count of zero');
+    return n;
+  };
+  const add = (into: Record<string, number>, from: Record<string, number>, times: number): void => {
+    for (const [el, n] of Object.entries(from)) into[el] = (into[el] ?? 0) + n * times;
+  };
+  const readGroup = (closing: string | undefined): Record<string, number> => {
+    const counts: Record<string, number> = {};
+    while (pos < s.length) {
+      const c = s[pos]!;
+      if (c === ')' || c === ']') {
+        if (closing !== c) fail(`unexpected "${c}"`);
+        return counts;
+      }
+      if (c === '(' || c === '[') {
+        pos++;
+        const inner = readGroup(c === '(' ? ')' : ']');
+        if (s[pos] === undefined) fail(`missing "${c === '(' ? ')' : ']'}"`);
+        pos++;
+        add(counts, inner, readNumber() ?? 1);
+        continue;
+      }
+      if (c === '·' || c === '*' || c === '.' || c === '•') {
+        if (closing !== undefined) fail('a hydrate dot inside brackets');
+        return counts;
+      }
+      const m = /^[A-Z][a-z]?/.exec(s.slice(pos));
+      if (!m) fail(`unexpected "${c}" (element symbols start with a capital letter)`);
+      // a lower-case letter always belongs to the capital before it: "Co" is cobalt, "CO" carbon + oxygen
+      const el = m![0];
+      if (atomicWeight(el) === undefined) fail(`unknown element "${el}" (heatstate has atomic weights for H to Kr, I, Xe, Hg, Pb and U)`);
+      pos += el.length;
+      counts[el] = (counts[el] ?? 0) + (readNumber() ?? 1);
+    }
+    if (closing !== undefined) fail(`missing "${closing}"`);
+    return counts;
+  };
+
+  const total: Record<string, number> = {};
+  let first = true;
+  while (pos < s.length || first) {
+    if (!first) pos++; // the dot
+    const multiplier = first ? 1 : (readNumber() ?? 1);
+    const start = pos;
+    const part = readGroup(undefined);
+    if (pos === start) fail('an empty part');
+    add(total, part, multiplier);
+    first = false;
+  }
+  return total;
+}
+
+/**
+ * Molar mass of a formula in kg/mol (SI core; see `molarMass` for the quantity form).
+ * @throws {@link FormulaError}
+ */
+export function formulaMolarMass(formula: string): number {
+  let grams = 0;
+  for (const [el, n] of Object.entries(parseFormula(formula))) grams += WEIGHTS[el]! * n;
+  return grams / 1000;
+}

@@ -1,0 +1,45 @@
+/**
+ * The built-in catalogue of incompressible liquids and solids (data/incompressible.json).
+ * Each entry is compiled on first use through the same schema as user definitions.
+ *
+ * @module
+ */
+import catalogue from '../../data/incompressible.json';
+import { UnknownNameError } from '../errors.js';
+import { closestNames, normaliseName } from '../lookup.js';
+import { compileDefinition, type CompiledSubstance, type IncompressibleDefinition } from './schema.js';
+
+const ENTRIES = catalogue.substances as unknown as readonly IncompressibleDefinition[];
+const byName = new Map<string, IncompressibleDefinition>();
+for (const entry of ENTRIES) {
+  for (const name of [entry.name, ...(entry.aliases ?? [])]) byName.set(normaliseName(name), entry);
+}
+const compiled = new Map<IncompressibleDefinition, CompiledSubstance>();
+
+/** Names of the built-in substances. */
+export function incompressibleNames(): string[] {
+  return ENTRIES.map((e) => e.name);
+}
+
+/** The raw definitions of the built-in substances, as stored in data/. */
+export function incompressibleCatalogue(): readonly IncompressibleDefinition[] {
+  return ENTRIES;
+}
+
+/**
+ * The compiled built-in substance with this name or alias (case, spaces and hyphens ignored).
+ * @throws {@link UnknownNameError} with the closest names
+ */
+export function lookupIncompressible(name: string): CompiledSubstance {
+  const entry = byName.get(normaliseName(name));
+  if (!entry) {
+    const all = ENTRIES.flatMap((e) => [e.name, ...(e.aliases ?? [])]);
+    throw new UnknownNameError(name, 'incompressible substance', closestNames(name, all));
+  }
+  let c = compiled.get(entry);
+  if (!c) {
+    c = compileDefinition(entry);
+    compiled.set(entry, c);
+  }
+  return c;
+}

@@ -1,0 +1,81 @@
+/**
+ * Name resolution shared by the run-time registry and the factor generator:
+ * a written name (`kPa`, `degF`, `lb`) becomes a prefix and a registry atom.
+ *
+ * @module
+ */
+import { UnitError } from '../errors.js';
+import type { DimensionVector } from './dimensions.js';
+import type { UnitTerm } from './expression.js';
+
+/** A unit the registry defines directly (not by prefix or composition). */
+export interface AtomRecord {
+  readonly symbol: string;
+  readonly dims: DimensionVector;
+  readonly prefixable: boolean;
+  /** True for temperature scales (K, °C, °F, °R). */
+  readonly scale: boolean;
+}
+
+/** What name resolution needs from a registry. */
+export interface AtomLookup {
+  /** The atom with this symbol or alias. */
+  atom(name: string): AtomRecord | undefined;
+  /** Known SI prefixes, longest first. */
+  readonly prefixes: readonly string[];
+}
+
+/** A resolved term: prefix + atom, raised to a power. */
+export interface ResolvedTerm {
+  readonly prefix: string;
+  readonly atom: AtomRecord;
+  readonly exponent: number;
+}
+
+/** Normalises the two micro signs to one. */
+function normaliseName(name: string): string {
+  return name.replace(/μ/g, 'µ');
+}
+
+/**
+ * Resolves written names to atoms: an exact symbol or alias first, then an SI prefix
+ * on a prefixable atom (`kPa`, `mbar`, `kmol`). Throws `unit.unknown` otherwise.
+ */
+export function resolveTerms(terms: readonly UnitTerm[], lookup: AtomLookup, text: string): ResolvedTerm[] {
+  return terms.map((t) => {
+    const name = normaliseName(t.name);
+    const direct = lookup.atom(name);
+    if (direct) return { prefix: '', atom: direct, exponent: t.exponent };
+    for (const p of lookup.prefixes) {
+      if (name.length > p.length && name.startsWith(p)) {
+        const base = lookup.atom(name.slice(p.length));
+        if (base && base.prefixable) return { prefix: p, atom: base, exponent: t.exponent };
+      }
+    }
+    throw new UnitError('unit.unknown', text, `unknown unit "${t.name}" in "${text}"`);
+  });
+}
+
+/**
+ * The canonical key of a product of terms: prefixed symbols sorted, exponents combined,
+ * zero exponents dropped (`kJ/kg/K` and `kJ/(kg·K)` both give `K^-1·kJ·kg^-1`).
+ */
+export function canonicalKey(terms: readonly ResolvedTerm[]): string {
+  const exps = new Map<string, number>();
+  for (const t of terms) {
+    const key = t.prefix + t.atom.symbol;
+    exps.set(key, (exps.get(key) ?? 0) + t.exponent);
+  }
+  return [...exps.entries()]
+    .filter(([, e]) => e !== 0)
+    .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+    .map(([k, e]) => (e === 1 ? k : `${k}^${e}`))
+    .join('·');
+}
+
+/** Sum of the terms' dimension vectors. */
+export function combinedDims(terms: readonly ResolvedTerm[]): DimensionVector {
+  const v = [0, 0, 0, 0, 0];
+  for (const t of terms) for (let i = 0; i < 5; i++) v[i]! += t.atom.dims[i]! * t.exponent;
+  return v as unknown as DimensionVector;
+}

@@ -1,0 +1,89 @@
+/**
+ * The dimensions heatstate knows, each as exponents of the SI base quantities
+ * [mass, length, time, temperature, amount of substance].
+ *
+ * Temperature and temperature difference share exponents but are different
+ * dimensions: an absolute temperature (50 °F = 283.15 K) converts with an offset,
+ * a difference (a rise of 50 °F = 27.78 K) with the scale factor only.
+ *
+ * @module
+ */
+
+/** Exponents of [mass, length, time, temperature, amount]. */
+export type DimensionVector = readonly [number, number, number, number, number];
+
+/** Every dimension with its base-quantity exponents. */
+export const DIMENSIONS = {
+  dimensionless: [0, 0, 0, 0, 0],
+  temperature: [0, 0, 0, 1, 0],
+  temperatureDifference: [0, 0, 0, 1, 0],
+  pressure: [1, -1, -2, 0, 0],
+  specificEnergy: [0, 2, -2, 0, 0],
+  specificHeat: [0, 2, -2, -1, 0],
+  specificVolume: [-1, 3, 0, 0, 0],
+  density: [1, -3, 0, 0, 0],
+  molarMass: [1, 0, 0, 0, -1],
+  molarEnergy: [1, 2, -2, 0, -1],
+  molarHeatCapacity: [1, 2, -2, -1, -1],
+  mass: [1, 0, 0, 0, 0],
+  amount: [0, 0, 0, 0, 1],
+  energy: [1, 2, -2, 0, 0],
+  entropy: [1, 2, -2, -1, 0],
+  power: [1, 2, -3, 0, 0],
+  massFlow: [1, 0, -1, 0, 0],
+  volume: [0, 3, 0, 0, 0],
+  volumeFlow: [0, 3, -1, 0, 0],
+  length: [0, 1, 0, 0, 0],
+  area: [0, 2, 0, 0, 0],
+  time: [0, 0, 1, 0, 0],
+  velocity: [0, 1, -1, 0, 0],
+  force: [1, 1, -2, 0, 0],
+  dynamicViscosity: [1, -1, -1, 0, 0],
+  thermalConductivity: [1, 1, -3, -1, 0],
+  surfaceTension: [1, 0, -2, 0, 0],
+} as const satisfies Record<string, DimensionVector>;
+
+/** The name of a dimension, for example `'pressure'` or `'specificHeat'`. */
+export type Dimension = keyof typeof DIMENSIONS;
+
+/** The SI unit each dimension's values are stored in. */
+export const SI_UNIT: Readonly<Record<Dimension, string>> = {
+  dimensionless: '1',
+  temperature: 'K',
+  temperatureDifference: 'ΔK',
+  pressure: 'Pa',
+  specificEnergy: 'J/kg',
+  specificHeat: 'J/(kg·K)',
+  specificVolume: 'm³/kg',
+  density: 'kg/m³',
+  molarMass: 'kg/mol',
+  molarEnergy: 'J/mol',
+  molarHeatCapacity: 'J/(mol·K)',
+  mass: 'kg',
+  amount: 'mol',
+  energy: 'J',
+  entropy: 'J/K',
+  power: 'W',
+  massFlow: 'kg/s',
+  volume: 'm³',
+  volumeFlow: 'm³/s',
+  length: 'm',
+  area: 'm²',
+  time: 's',
+  velocity: 'm/s',
+  force: 'N',
+  dynamicViscosity: 'Pa·s',
+  thermalConductivity: 'W/(m·K)',
+  surfaceTension: 'N/m',
+};
+
+const BY_VECTOR = new Map<string, Dimension>();
+for (const [name, vector] of Object.entries(DIMENSIONS) as [Dimension, DimensionVector][]) {
+  // temperature wins for the bare temperature vector; differences are marked explicitly with Δ
+  if (name !== 'temperatureDifference') BY_VECTOR.set(vector.join(','), name);
+}
+
+/** The named dimension with these exponents, or `undefined`. A bare temperature vector is `temperature`. */
+export function dimensionOfVector(vector: DimensionVector): Dimension | undefined {
+  return BY_VECTOR.get(vector.join(','));
+}

@@ -1,0 +1,18 @@
+import { defineConfig } from 'tsup';
+
+/** One entry per public subpath, so a user who imports only `heatstate/units` loads nothing else. */
+export default defineConfig({
+  entry: {
+    index: 'src/index.ts',
+    'units/index': 'src/units/index.ts',
+    'incompressible/index': 'src/incompressible/index.ts',
+  },
+  format: ['esm', 'cjs'],
+  dts: true,
+  sourcemap: true,
+  clean: true,
+  splitting: true,
+  treeshake: true,
+  target: 'node20',
+  outDir: 'dist',
+});
