@@ -40,9 +40,9 @@ export function parseFormula(formula: string): Record<string, number> {
   const readNumber = (): number | undefined => {
     const m = /^\d+(?:\.\d+)?/.exec(s.slice(pos));
     if (!m) return undefined;
-    pos += m[0].length;
     const n = Number(m[0]);
     if (n === 0) fail('a count of zero');
+    pos += m[0].length;
     return n;
   };
   const add = (into: Record<string, number>, from: Record<string, number>, times: number): void => {
