@@ -1,0 +1,67 @@
+/**
+ * `npm run bench`: measures the hot functions with tinybench, prints a table, and writes
+ * bench/results.json with the machine and Node version. Reports figures only; nothing here
+ * asserts a time (machines are small and noisy).
+ *
+ * Each case may name a target (ns per call) and a baseline case measured in the same run;
+ * the table shows the ratio to the baseline and how far a target is missed.
+ */
+import { writeFileSync } from 'node:fs';
+import os from 'node:os';
+import { Bench } from 'tinybench';
+import { cases } from './cases.js';
+
+const quick = process.argv.includes('--quick');
+const bench = new Bench({ time: quick ? 50 : 500, warmupTime: quick ? 20 : 200 });
+for (const c of cases) bench.add(c.name, c.fn);
+await bench.run();
+
+interface Row {
+  name: string;
+  medianNs: number;
+  meanNs: number;
+  samples: number;
+  targetNs?: number;
+  versusTarget?: string;
+  baseline?: string;
+  speedupOverBaseline?: number;
+}
+const rows: Row[] = [];
+const median = (name: string): number => {
+  const t = bench.tasks.find((x) => x.name === name);
+  const r = t?.result as { latency?: { p50?: number; mean?: number } } | undefined;
+  return (r?.latency?.p50 ?? NaN) * 1e6;
+};
+for (const c of cases) {
+  const t = bench.tasks.find((x) => x.name === c.name)!;
+  const r = t.result as { latency?: { p50?: number; mean?: number; samples?: number[] } } | undefined;
+  const perCall = c.perCall ?? 1;
+  const med = (r?.latency?.p50 ?? NaN) * 1e6 / perCall;
+  const row: Row = { name: c.name, medianNs: med, meanNs: ((r?.latency?.mean ?? NaN) * 1e6) / perCall, samples: r?.latency?.samples?.length ?? 0 };
+  if (c.targetNs !== undefined) {
+    row.targetNs = c.targetNs;
+    row.versusTarget = med <= c.targetNs ? 'met' : `missed by ${(med / c.targetNs).toFixed(2)}×`;
+  }
+  if (c.baseline !== undefined) {
+    row.baseline = c.baseline;
+    row.speedupOverBaseline = median(c.baseline) / (c.baselinePerCall ?? 1) / med;
+  }
+  rows.push(row);
+}
+
+console.table(
+  rows.map((r) => ({
+    case: r.name,
+    'median ns/call': Number(r.medianNs.toPrecision(3)),
+    target: r.targetNs ?? '',
+    'vs target': r.versusTarget ?? '',
+    'vs baseline': r.speedupOverBaseline !== undefined ? `${r.speedupOverBaseline.toFixed(1)}× faster than ${r.baseline}` : '',
+  })),
+);
+
+const cpu = os.cpus()[0]?.model ?? 'unknown';
+writeFileSync(
+  new URL('./results.json', import.meta.url),
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, rows }, null, 2)}\n`,
+);
+console.log(`\nwrote bench/results.json (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

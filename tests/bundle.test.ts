@@ -1,0 +1,38 @@
+/**
+ * What a consumer's bundle contains: decimal.js (build-time only) and data a subpath does not
+ * need must never be pulled in. Bundles are built from the source entries with esbuild, minified.
+ */
+import { build } from 'esbuild';
+import { gzipSync } from 'node:zlib';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const root = fileURLToPath(new URL('..', import.meta.url));
+
+async function bundle(code: string): Promise<string> {
+  const result = await build({
+    stdin: { contents: code, resolveDir: root, loader: 'ts' },
+    bundle: true,
+    minify: true,
+    format: 'esm',
+    platform: 'neutral',
+    write: false,
+    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts' },
+  });
+  return result.outputFiles[0]!.text;
+}
+
+describe('consumer bundles', () => {
+  it('heatstate/units carries no decimal.js, zod or substance data', async () => {
+    const js = await bundle(`import { quantity } from 'heatstate/units'; console.log(quantity('1 psia').in('kPa'));`);
+    expect(js).not.toMatch(/decimal\.js|DecimalError|toSignificantDigits/);
+    expect(js).not.toMatch(/ZodError|zod/i);
+    expect(js).not.toContain('stainless steel');
+    const kB = gzipSync(js).length / 1024;
+    expect(kB).toBeLessThan(8);
+  });
+  it('heatstate/incompressible carries no decimal.js', async () => {
+    const js = await bundle(`import { incompressible } from 'heatstate/incompressible'; console.log(incompressible('water'));`);
+    expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
+  });
+});
