@@ -6,6 +6,7 @@ export default defineConfig({
     index: 'src/index.ts',
     'units/index': 'src/units/index.ts',
     'incompressible/index': 'src/incompressible/index.ts',
+    'ideal-gas/index': 'src/ideal-gas/index.ts',
   },
   format: ['esm', 'cjs'],
   dts: true,

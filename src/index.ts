@@ -19,5 +19,20 @@ export {
 } from './chem/constants.js';
 export { incompressible, incompressibleNames, incompressibleCatalogue, incompressibleDefinitionSchema } from './incompressible/index.js';
 export type { IncompressibleSubstance, IncompressibleState, IncompressibleDefinition } from './incompressible/index.js';
+export {
+  idealGas,
+  mixture,
+  dryAir,
+  DRY_AIR_MOLE_FRACTIONS,
+  moleToMassFractions,
+  massToMoleFractions,
+  isentropicEnd,
+  compressor,
+  turbine,
+  polytropic,
+  constantCpDeviation,
+  speciesNames,
+} from './ideal-gas/index.js';
+export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './ideal-gas/index.js';
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from './errors.js';
 export type { ErrorCode, ValidRange, DefinitionIssue } from './errors.js';

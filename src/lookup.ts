@@ -30,7 +30,7 @@ export function closestNames(given: string, known: readonly string[], count = 3)
   return known
     .map((name) => {
       const n = normaliseName(name);
-      const contains = g.length >= 3 && (n.includes(g) || g.includes(n));
+      const contains = g.length >= 3 && n.length >= 3 && (n.includes(g) || g.includes(n));
       return { name, score: contains ? 0 : editDistance(g, n) };
     })
     .filter((x) => x.score <= Math.max(2, Math.ceil(g.length / 2)))

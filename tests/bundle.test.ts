@@ -17,7 +17,7 @@ async function bundle(code: string): Promise<string> {
     format: 'esm',
     platform: 'neutral',
     write: false,
-    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts' },
+    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts', 'heatstate/ideal-gas': './src/ideal-gas/index.ts' },
   });
   return result.outputFiles[0]!.text;
 }
@@ -30,6 +30,15 @@ describe('consumer bundles', () => {
     expect(js).not.toContain('stainless steel');
     const kB = gzipSync(js).length / 1024;
     expect(kB).toBeLessThan(8);
+  });
+  it('heatstate/units + heatstate/ideal-gas: at most 15 kB gzipped, no decimal.js, zod or incompressible data', async () => {
+    const js = await bundle(`import { quantity } from 'heatstate/units'; import { idealGas, mixture, compressor } from 'heatstate/ideal-gas';
+      console.log(quantity('1 psia').in('kPa'), idealGas('N2').cp('300 K'), mixture({ N2: 0.79, O2: 0.21 }), compressor);`);
+    expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
+    expect(js).not.toMatch(/ZodError/);
+    expect(js).not.toContain('stainless steel');
+    const kB = gzipSync(js).length / 1024;
+    expect(kB).toBeLessThan(15);
   });
   it('heatstate/incompressible carries no decimal.js', async () => {
     const js = await bundle(`import { incompressible } from 'heatstate/incompressible'; console.log(incompressible('water'));`);

@@ -68,26 +68,32 @@ export class Quantity<D extends Dimension = Dimension> {
   readonly unit: string;
   /** Ambient pressure in Pa used for gauge units. */
   readonly ambientPa: number;
+  /**
+   * True when the value comes from outside a model's or table's valid range because the caller
+   * asked for extrapolation. Never true unless extrapolation was requested.
+   */
+  readonly extrapolated: boolean;
 
   /** @internal Use {@link quantity} or {@link Quantity.fromSI}. */
-  constructor(dimension: D, si: number, value: number, unit: string, ambient: number) {
+  constructor(dimension: D, si: number, value: number, unit: string, ambient: number, extrapolated = false) {
     this.dimension = dimension;
     this.si = si;
     this.value = value;
     this.unit = unit;
     this.ambientPa = ambient;
+    this.extrapolated = extrapolated;
   }
 
   /**
    * Wraps an SI value (as the SI core returns it) in a quantity, shown in `unit` (default: the SI unit).
    * Checks that the value is finite and that `unit` has dimension `dimension`.
    */
-  static fromSI<D extends Dimension>(si: number, dimension: D, unit?: string): Quantity<D> {
+  static fromSI<D extends Dimension>(si: number, dimension: D, unit?: string, extrapolated = false): Quantity<D> {
     if (!Number.isFinite(si)) throw new InvalidInputError('input.not-finite', describe(dimension), `${describe(dimension)} must be a finite number; got ${si}`);
     const u = unit ?? SI_UNIT[dimension];
-    if (unit === undefined) return new Quantity(dimension, si, si, u, DEFAULT_AMBIENT_PA);
+    if (unit === undefined) return new Quantity(dimension, si, si, u, DEFAULT_AMBIENT_PA, extrapolated);
     const resolved = expectDimension(resolveUnit(u), dimension, 'unit');
-    return new Quantity(dimension, si, fromSI(si, resolved, DEFAULT_AMBIENT_PA), u, DEFAULT_AMBIENT_PA);
+    return new Quantity(dimension, si, fromSI(si, resolved, DEFAULT_AMBIENT_PA), u, DEFAULT_AMBIENT_PA, extrapolated);
   }
 
   /**
@@ -104,7 +110,7 @@ export class Quantity<D extends Dimension = Dimension> {
   to(unit: TargetUnitOf<D> | (string & {}), options?: QuantityOptions): Quantity<D> {
     const amb = ambientPa(options, this.ambientPa);
     const resolved = expectDimension(resolveUnit(unit), this.dimension, 'unit');
-    return new Quantity(this.dimension, this.si, fromSI(this.si, resolved, amb), unit, amb);
+    return new Quantity(this.dimension, this.si, fromSI(this.si, resolved, amb), unit, amb, this.extrapolated);
   }
 
   /**

@@ -1,0 +1,444 @@
+/**
+ * The ideal-gas facade: `idealGas()` and `mixture()`.
+ *
+ * @module
+ */
+import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, STANDARD_STATE_PRESSURE_PA } from '../chem/constants.js';
+import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
+import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
+import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
+import { speciesModel } from './species.js';
+
+/** Mass basis (per kg, the default) or molar basis (per mol). */
+export type Basis = 'mass' | 'molar';
+/** Dimension of cp, cv, s and R on a basis. */
+export type HeatCapacityDimension<B extends Basis> = B extends 'molar' ? 'molarHeatCapacity' : 'specificHeat';
+/** Dimension of h and u on a basis. */
+export type EnergyDimension<B extends Basis> = B extends 'molar' ? 'molarEnergy' : 'specificEnergy';
+
+/** Options of {@link idealGas} and {@link mixture}. */
+export interface IdealGasOptions<B extends Basis = Basis> {
+  /** `'mass'` (default): per kg. `'molar'`: per mol. */
+  readonly basis?: B;
+  /**
+   * `'polynomial'` (default): temperature-dependent cp from the NASA 7-coefficient data.
+   * `'constant-cp'`: cp frozen at `referenceT` (default 298.15 K), or the `cp` given.
+   */
+  readonly model?: 'polynomial' | 'constant-cp';
+  /** Reference temperature of the constant-cp model. Default 298.15 K. */
+  readonly referenceT?: QuantityLike<'temperature'>;
+  /** A constant cp to use instead of the polynomial value (implies `model: 'constant-cp'`). Mass basis. */
+  readonly cp?: QuantityLike<'specificHeat'>;
+  /**
+   * Allow temperatures outside the data's interval. Results there are computed from the nearest
+   * interval's polynomial and carry `extrapolated: true`. Default false: such temperatures throw.
+   */
+  readonly extrapolate?: boolean;
+}
+
+/** A state of an ideal gas: temperature and absolute pressure. */
+export interface GasState {
+  readonly T: QuantityLike<'temperature'>;
+  readonly p: QuantityLike<'pressure'>;
+}
+
+/** A user-defined species: NASA 7-coefficient data, or a constant cp. */
+export type IdealGasDefinition =
+  | {
+      readonly name: string;
+      /** Formula, for display. */
+      readonly formula?: string;
+      /** Molar mass; from a formula with `molarMass('C8H18')` (heatstate root entry). */
+      readonly M: QuantityLike<'molarMass'>;
+      /**
+       * NASA polynomial constants with T in K, below `T.mid` and from `T.mid` up: nine per interval
+       * (a1..a7, b1, b2: the NASA Glenn form) or seven (the older 7-coefficient form).
+       */
+      readonly nasa: { readonly T: { readonly min: number; readonly mid: number; readonly max: number }; readonly low: readonly number[]; readonly high: readonly number[] };
+      readonly source?: string;
+    }
+  | {
+      readonly name: string;
+      /** Formula, for display. */
+      readonly formula?: string;
+      /** Molar mass; from a formula with `molarMass('C8H18')` (heatstate root entry). */
+      readonly M: QuantityLike<'molarMass'>;
+      /** Constant specific heat (mass basis). h is measured from 0 at 298.15 K. */
+      readonly cp: QuantityLike<'specificHeat'>;
+      /** Valid range; default: any positive temperature. */
+      readonly T?: { readonly min: QuantityLike<'temperature'>; readonly max: QuantityLike<'temperature'> };
+      readonly source?: string;
+    };
+
+/**
+ * An ideal gas (a species or a mixture) with its property functions. h and u depend on T only;
+ * s on T and p. Inputs take quantities or unit text; pressures are absolute.
+ *
+ * Enthalpy conventions, stated plainly:
+ * - `h(T)` is the **total** enthalpy: the enthalpy of formation at 298.15 K plus the sensible part.
+ *   It is what energy balances with reactions need. Elements in their reference state (N2, O2, Ar) have h(298.15 K) = 0.
+ * - `hSensible(T)` = h(T) − h(298.15 K): the sensible enthalpy, zero at 298.15 K for every gas.
+ * - Differences (`deltaH`, `deltaU`) are the same either way; for a non-reacting process use them.
+ */
+export interface IdealGas<B extends Basis = 'mass'> {
+  /** Name as catalogued or defined. */
+  readonly name: string;
+  /** Formula, when there is one. */
+  readonly formula: string | undefined;
+  /** `'mass'` or `'molar'`. */
+  readonly basis: B;
+  /** `'polynomial'` or `'constant-cp'`. */
+  readonly model: 'polynomial' | 'constant-cp';
+  /** Where the data come from. */
+  readonly source: string;
+  /** Molar mass. */
+  readonly M: Quantity<'molarMass'>;
+  /** Gas constant: R̄/M on a mass basis, R̄ on a molar basis. */
+  readonly R: Quantity<HeatCapacityDimension<B>>;
+  /** Valid temperature range. */
+  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> } };
+  /** The plain-number SI core, for hot loops and batch use. */
+  readonly core: IdealGasModel;
+  /** cp(T). */
+  cp(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  /** cv(T) = cp(T) − R. */
+  cv(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  /** k(T) = cp/cv, a plain number. */
+  k(T: QuantityLike<'temperature'>): number;
+  /** Total enthalpy h(T), including the enthalpy of formation at 298.15 K. */
+  h(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  /** Sensible enthalpy h(T) − h(298.15 K). */
+  hSensible(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  /** Internal energy u(T) = h(T) − R·T (total, like h). */
+  u(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  /** Entropy s(T, p) = s°(T) − R ln(p/p°), p° = 100 kPa. For a mixture, includes the ideal entropy of mixing. */
+  s(T: QuantityLike<'temperature'>, p: QuantityLike<'pressure'>): Quantity<HeatCapacityDimension<B>>;
+  /** Standard-state entropy s°(T) at p° = 100 kPa. */
+  sStandard(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  /** Δh = h(T2) − h(T1). */
+  deltaH(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  /** Δu = u(T2) − u(T1). */
+  deltaU(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  /** Δs = s(T2, p2) − s(T1, p1). */
+  deltaS(state1: GasState, state2: GasState): Quantity<HeatCapacityDimension<B>>;
+  /** The same gas with cp frozen at `referenceT` (default 298.15 K): the cold-air-standard style estimate. */
+  withConstantCp(referenceT?: QuantityLike<'temperature'>): IdealGas<B>;
+  /** Reads a temperature input, checks it against the range, returns K. For the process functions. */
+  readTemperature(T: QuantityLike<'temperature'>, parameter: string): number;
+}
+
+interface Built {
+  readonly name: string;
+  readonly formula: string | undefined;
+  readonly source: string;
+  readonly core: IdealGasModel;
+  readonly model: 'polynomial' | 'constant-cp';
+}
+
+function checkPressure(input: QuantityLike<'pressure'>, parameter: string): number {
+  const p = readQuantity(input, 'pressure', parameter);
+  if (!(p > 0)) {
+    throw new OutOfRangeError({ quantity: parameter, value: p, min: 0, max: Infinity, unit: 'Pa', scope: 'an ideal gas (absolute pressure must be positive)' });
+  }
+  return p;
+}
+
+function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): IdealGas<B> {
+  const core = built.core;
+  const molar = basis === 'molar';
+  const scale = molar ? MOLAR_GAS_CONSTANT : core.R; // J/(mol·K) or J/(kg·K) per unit of cpR
+  const hc = (molar ? 'molarHeatCapacity' : 'specificHeat') as HeatCapacityDimension<B>;
+  const en = (molar ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
+  const scope = `the data for ${built.name}`;
+
+  let lastFlag = false;
+  const temperature = (input: QuantityLike<'temperature'>, parameter: string): number => {
+    const T = readQuantity(input, 'temperature', parameter);
+    const outside = T < core.Tmin || T > core.Tmax;
+    if (outside && !(extrapolate && T > 0)) {
+      const hint = extrapolate ? '' : '; pass { extrapolate: true } to compute outside it (results are then flagged)';
+      throw new OutOfRangeError(
+        { quantity: parameter, value: T, min: core.Tmin, max: core.Tmax, unit: 'K', scope },
+        `${parameter} = ${Number(T.toPrecision(8))} K is outside ${scope} (${core.Tmin} to ${core.Tmax} K)${hint}`,
+      );
+    }
+    lastFlag = lastFlag || outside;
+    return T;
+  };
+  // each public function resets the flag, reads its temperatures, and marks its result
+  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D): Quantity<D> => {
+    const q = Quantity.fromSI(si, dim, undefined, lastFlag);
+    lastFlag = false;
+    return q;
+  };
+  const T1of = (input: QuantityLike<'temperature'>, parameter = 'T'): number => {
+    lastFlag = false;
+    return temperature(input, parameter);
+  };
+  const hAt = (T: number) => scale * T * core.hRT(T);
+
+  const gas: IdealGas<B> = {
+    name: built.name,
+    formula: built.formula,
+    basis,
+    model: built.model,
+    source: built.source,
+    M: Quantity.fromSI(core.M, 'molarMass', 'g/mol'),
+    R: Quantity.fromSI(scale, hc),
+    range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') } },
+    core,
+    cp: (T) => result(scale * core.cpR(T1of(T)), hc),
+    cv: (T) => result(scale * (core.cpR(T1of(T)) - 1), hc),
+    k: (T) => {
+      const cpR = core.cpR(T1of(T));
+      lastFlag = false;
+      return cpR / (cpR - 1);
+    },
+    h: (T) => result(hAt(T1of(T)), en),
+    hSensible: (T) => result(hAt(T1of(T)) - hAt(REFERENCE_TEMPERATURE_K), en),
+    u: (T) => {
+      const t = T1of(T);
+      return result(scale * t * (core.hRT(t) - 1), en);
+    },
+    s: (T, p) => {
+      const t = T1of(T);
+      return result(scale * (core.sR(t) - Math.log(checkPressure(p, 'p') / STANDARD_STATE_PRESSURE_PA)), hc);
+    },
+    sStandard: (T) => result(scale * core.sR(T1of(T)), hc),
+    deltaH: (T1, T2) => {
+      const a = T1of(T1, 'T1');
+      const b = temperature(T2, 'T2');
+      return result(hAt(b) - hAt(a), en);
+    },
+    deltaU: (T1, T2) => {
+      const a = T1of(T1, 'T1');
+      const b = temperature(T2, 'T2');
+      return result(scale * (b * (core.hRT(b) - 1) - a * (core.hRT(a) - 1)), en);
+    },
+    deltaS: (state1, state2) => {
+      const a = T1of(state1.T, 'state1.T');
+      const b = temperature(state2.T, 'state2.T');
+      const p1 = checkPressure(state1.p, 'state1.p');
+      const p2 = checkPressure(state2.p, 'state2.p');
+      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc);
+    },
+    withConstantCp: (referenceT) => {
+      const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : T1of(referenceT, 'referenceT');
+      lastFlag = false;
+      return wrap({ ...built, core: constantCpFrom(core, T0), model: 'constant-cp' }, basis, extrapolate);
+    },
+    readTemperature: (T, parameter) => T1of(T, parameter),
+  };
+  return gas;
+}
+
+function fromDefinition(def: IdealGasDefinition): Built {
+  const issues: DefinitionIssue[] = [];
+  const guard = <T>(path: (string | number)[], f: () => T): T | undefined => {
+    try {
+      return f();
+    } catch (e) {
+      issues.push({ path, message: e instanceof HeatstateError ? e.message : String(e) });
+      return undefined;
+    }
+  };
+  if (typeof def !== 'object' || def === null) throw new DefinitionError('ideal-gas definition', [{ path: [], message: 'expected an object' }]);
+  if (typeof def.name !== 'string' || def.name === '') issues.push({ path: ['name'], message: 'a name is required' });
+  let M: number | undefined;
+  if (def.M !== undefined) M = guard(['M'], () => readQuantity(def.M, 'molarMass', 'M'));
+  else issues.push({ path: ['M'], message: "a molar mass M is required (from a formula: M: molarMass('C8H18'))" });
+  if (M !== undefined && !(M > 0)) issues.push({ path: ['M'], message: 'molar mass must be positive' });
+
+  let core: IdealGasModel | undefined;
+  let model: Built['model'] = 'polynomial';
+  if ('nasa' in def && def.nasa !== undefined) {
+    const { T, low, high } = def.nasa;
+    if (!T || !(T.min > 0 && T.min < T.mid && T.mid <= T.max)) issues.push({ path: ['nasa', 'T'], message: 'need 0 < T.min < T.mid ≤ T.max (K)' });
+    for (const [key, arr] of [['low', low], ['high', high]] as const) {
+      if (!Array.isArray(arr) || (arr.length !== 7 && arr.length !== 9)) issues.push({ path: ['nasa', key], message: 'need 9 constants (a1..a7, b1, b2) or 7 coefficients (older form)' });
+      else arr.forEach((a, i) => Number.isFinite(a) || issues.push({ path: ['nasa', key, i], message: `constant ${i + 1} must be a finite number` }));
+    }
+    if (issues.length === 0 && low.length !== high.length) issues.push({ path: ['nasa'], message: 'low and high must use the same form (both 9 or both 7 numbers)' });
+    if (issues.length === 0) {
+      const nine = (a: readonly number[]) => (a.length === 7 ? fromSevenCoefficients(a) : a);
+      const m = new NasaPolynomialModel(M!, T.min, T.mid, T.max, nine(low), nine(high));
+      for (let i = 0; i <= 50; i++) {
+        const t = T.min + ((T.max - T.min) * i) / 50;
+        if (!(m.cpR(t) > 1)) {
+          issues.push({ path: ['nasa'], message: `cp°/R must exceed 1 (so that cv > 0); it is ${m.cpR(t)} at ${t} K` });
+          break;
+        }
+      }
+      core = m;
+    }
+  } else if ('cp' in def && def.cp !== undefined) {
+    model = 'constant-cp';
+    const cp = guard(['cp'], () => readQuantity(def.cp, 'specificHeat', 'cp'));
+    const Tmin = def.T ? guard(['T', 'min'], () => readQuantity(def.T!.min, 'temperature', 'T.min')) : Number.MIN_VALUE;
+    const Tmax = def.T ? guard(['T', 'max'], () => readQuantity(def.T!.max, 'temperature', 'T.max')) : Infinity;
+    if (cp !== undefined && M !== undefined && !(cp * M > MOLAR_GAS_CONSTANT)) issues.push({ path: ['cp'], message: `cp must exceed R = ${MOLAR_GAS_CONSTANT / M} J/(kg·K) so that cv > 0` });
+    if (Tmin !== undefined && Tmax !== undefined && !(Tmin < Tmax)) issues.push({ path: ['T'], message: 'T.min must be below T.max' });
+    if (issues.length === 0) core = new ConstantCpModel(M!, (cp! * M!) / MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, 0, 0, Tmin!, Tmax!);
+  } else {
+    issues.push({ path: [], message: 'give either nasa polynomial constants or a constant cp' });
+  }
+  if (issues.length > 0 || !core) throw new DefinitionError(`ideal-gas definition${typeof def.name === 'string' ? ` "${def.name}"` : ''}`, issues);
+  return { name: def.name, formula: def.formula, source: def.source ?? 'user definition', core, model };
+}
+
+function applyOptions(built: Built, options: IdealGasOptions | undefined): Built {
+  if (options?.cp !== undefined) {
+    const cp = readQuantity(options.cp, 'specificHeat', 'cp');
+    const core = built.core;
+    if (!(cp > core.R)) throw new OutOfRangeError({ quantity: 'cp', value: cp, min: core.R, max: Infinity, unit: 'J/(kg·K)', scope: `${built.name} (cp must exceed R)` });
+    const T0 = REFERENCE_TEMPERATURE_K;
+    return { ...built, model: 'constant-cp', core: new ConstantCpModel(core.M, cp / core.R, T0, core.hRT(T0) * T0, core.sR(T0), core.Tmin, core.Tmax) };
+  }
+  if (options?.model === 'constant-cp') {
+    const T0 = options.referenceT === undefined ? REFERENCE_TEMPERATURE_K : readQuantity(options.referenceT, 'temperature', 'referenceT');
+    if (T0 < built.core.Tmin || T0 > built.core.Tmax) {
+      throw new OutOfRangeError({ quantity: 'referenceT', value: T0, min: built.core.Tmin, max: built.core.Tmax, unit: 'K', scope: `the data for ${built.name}` });
+    }
+    return { ...built, model: 'constant-cp', core: constantCpFrom(built.core, T0) };
+  }
+  return built;
+}
+
+/**
+ * An ideal gas from the built-in species data (by formula or common name) or from your own definition.
+ *
+ * Models: NASA polynomials (two intervals, 200–1000–6000 K), or a
+ * constant cp (`{ model: 'constant-cp' }` freezes cp at 298.15 K or `referenceT`; `{ cp }` sets it).
+ * cv = cp − R, k = cp/cv, h and u depend on T only, s(T, p) = s°(T) − R ln(p/p°) with p° = 100 kPa.
+ * Mass basis by default; `{ basis: 'molar' }` for per-mole values.
+ *
+ * Species: N2, O2, Ar, He, Ne, H2, CO, CO2, H2O, CH4, C2H6, C3H8, n-C4H10, C2H4, C2H2, NH3, NO, NO2,
+ * N2O, SO2, H2S (to 1000 K), O3, OH, H, O, N, and dry air as one pseudo-species (`"air"`);
+ * see {@link dryAir} for air as a defined mixture.
+ *
+ * @throws {@link UnknownNameError} unknown species, with the closest names
+ * @throws {@link OutOfRangeError} temperatures outside the data (unless `extrapolate`), p ≤ 0
+ * @throws {@link DefinitionError} an invalid user definition
+ * @example
+ * ```ts
+ * const air = idealGas('air');
+ * air.cp('300 K').in('kJ/(kg·K)');     //=> 1.0061...
+ * air.k('300 K');                      //=> 1.3998...
+ * idealGas('nitrogen').deltaH('300 K', '1000 K').in('Btu/lbm');  //=> 328.5...
+ * idealGas('CO2', { basis: 'molar' }).h('298.15 K').in('kJ/mol');  //=> -393.5... (formation)
+ * idealGas('N2').cp('7000 K');   // throws OutOfRangeError: T = 7000 K is outside the data for N2 (200 to 6000 K)
+ * ```
+ */
+export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?: IdealGasOptions<'mass'>): IdealGas<'mass'>;
+export function idealGas(nameOrDefinition: string | IdealGasDefinition, options: IdealGasOptions<'molar'> & { readonly basis: 'molar' }): IdealGas<'molar'>;
+export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?: IdealGasOptions): IdealGas<Basis> {
+  let built: Built;
+  if (typeof nameOrDefinition === 'string') {
+    const { record, model } = speciesModel(nameOrDefinition);
+    built = { name: record.id, formula: record.formula, source: `${record.source}${record.note ? `; ${record.note}` : ''}`, core: model, model: 'polynomial' };
+  } else {
+    built = fromDefinition(nameOrDefinition);
+  }
+  return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true);
+}
+
+/** Composition: species name or formula → fraction. */
+export type Composition = Readonly<Record<string, number>>;
+
+/** Options of {@link mixture}. */
+export interface MixtureOptions<B extends Basis = Basis> extends IdealGasOptions<B> {
+  /** Whether the fractions are mole (default) or mass fractions. */
+  readonly fractions?: 'mole' | 'mass';
+  /** Scale fractions that do not sum to 1 instead of throwing. */
+  readonly normalize?: boolean;
+  /** A name for the mixture (default: its composition). */
+  readonly name?: string;
+}
+
+function checkFractions(composition: Composition, normalize: boolean): [string[], number[]] {
+  if (typeof composition !== 'object' || composition === null) throw new InvalidInputError('input.invalid', 'composition', 'a composition is an object such as { N2: 0.79, O2: 0.21 }');
+  const names = Object.keys(composition);
+  if (names.length === 0) throw new InvalidInputError('input.invalid', 'composition', 'a mixture needs at least one component');
+  const values = names.map((n) => composition[n]!);
+  values.forEach((v, i) => {
+    if (!Number.isFinite(v) || v < 0) throw new InvalidInputError('input.invalid', `composition.${names[i]}`, `fraction of ${names[i]} must be a finite number ≥ 0; got ${v}`);
+  });
+  const sum = values.reduce((a, b) => a + b, 0);
+  if (!(sum > 0)) throw new InvalidInputError('input.invalid', 'composition', 'fractions sum to 0');
+  if (Math.abs(sum - 1) > 1e-6) {
+    if (!normalize) {
+      throw new OutOfRangeError(
+        { quantity: 'sum of fractions', value: sum, min: 1 - 1e-6, max: 1 + 1e-6, unit: '1', scope: 'a composition' },
+        `fractions sum to ${sum}, not 1 (within 1e-6); fix them or pass { normalize: true }`,
+      );
+    }
+  }
+  return [names, values.map((v) => v / sum)];
+}
+
+/**
+ * Converts mole fractions to mass fractions: wᵢ = yᵢ Mᵢ / Σ yⱼ Mⱼ. Keys are species names or formulas.
+ * @example
+ * ```ts
+ * moleToMassFractions({ N2: 0.79, O2: 0.21 }); //=> { N2: 0.7671..., O2: 0.2329... }
+ * ```
+ */
+export function moleToMassFractions(composition: Composition, options?: { readonly normalize?: boolean }): Record<string, number> {
+  const [names, y] = checkFractions(composition, options?.normalize === true);
+  const M = names.map((n) => speciesModel(n).model.M);
+  const total = y.reduce((acc, yi, i) => acc + yi * M[i]!, 0);
+  return Object.fromEntries(names.map((n, i) => [n, (y[i]! * M[i]!) / total]));
+}
+
+/** Converts mass fractions to mole fractions: yᵢ = (wᵢ/Mᵢ) / Σ (wⱼ/Mⱼ). */
+export function massToMoleFractions(composition: Composition, options?: { readonly normalize?: boolean }): Record<string, number> {
+  const [names, w] = checkFractions(composition, options?.normalize === true);
+  const M = names.map((n) => speciesModel(n).model.M);
+  const total = w.reduce((acc, wi, i) => acc + wi / M[i]!, 0);
+  return Object.fromEntries(names.map((n, i) => [n, w[i]! / M[i]! / total]));
+}
+
+/**
+ * An ideal-gas mixture that behaves like a gas (same interface as {@link idealGas}). Per mole of
+ * mixture, cp = Σ yᵢ cpᵢ and h = Σ yᵢ hᵢ; s includes the ideal entropy of mixing −R̄ Σ yᵢ ln yᵢ.
+ * The valid range is the overlap of the components' ranges.
+ *
+ * @param composition species name or formula → fraction, summing to 1 within 1e-6
+ * @param options `fractions: 'mole' | 'mass'` (default mole), `normalize`, and the {@link IdealGasOptions}
+ * @throws {@link OutOfRangeError} fractions that do not sum to 1 (unless `normalize`)
+ * @throws {@link UnknownNameError} an unknown component
+ * @example
+ * ```ts
+ * const flue = mixture({ N2: 0.72, CO2: 0.09, H2O: 0.17, O2: 0.02 });
+ * flue.cp('600 K').in('kJ/(kg·K)');   //=> 1.16...
+ * mixture({ N2: 0.8, O2: 0.3 });      // throws OutOfRangeError: fractions sum to 1.1
+ * ```
+ */
+export function mixture(composition: Composition, options?: MixtureOptions<'mass'>): IdealGas<'mass'>;
+export function mixture(composition: Composition, options: MixtureOptions<'molar'> & { readonly basis: 'molar' }): IdealGas<'molar'>;
+export function mixture(composition: Composition, options?: MixtureOptions): IdealGas<Basis> {
+  const normalize = options?.normalize === true;
+  const moleFractions = options?.fractions === 'mass' ? massToMoleFractions(composition, { normalize }) : Object.fromEntries(zip(...checkFractions(composition, normalize)));
+  const names = Object.keys(moleFractions);
+  const y = names.map((n) => moleFractions[n]!);
+  const parts = names.map((n) => speciesModel(n).model);
+  const core = mixNasa(parts, y) ?? new MixtureModel(parts, y);
+  const name = options?.name ?? names.map((n, i) => `${n} ${Number((y[i]! * 100).toPrecision(4))}%`).join(', ');
+  const built: Built = { name, formula: undefined, source: `ideal mixture of ${names.map((n) => speciesModel(n).record.id).join(', ')}`, core, model: 'polynomial' };
+  return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true);
+}
+
+function zip(names: string[], values: number[]): [string, number][] {
+  return names.map((n, i) => [n, values[i]!]);
+}
+
+/** Dry air by mole fraction: N2 78.08 %, O2 20.95 %, Ar 0.93 %, CO2 0.04 % (common practice; sums to 1). */
+export const DRY_AIR_MOLE_FRACTIONS: Composition = Object.freeze({ N2: 0.7808, O2: 0.2095, Ar: 0.0093, CO2: 0.0004 });
+
+/**
+ * Dry air as a defined mixture of N2, O2, Ar and CO2 ({@link DRY_AIR_MOLE_FRACTIONS}).
+ * Compare `idealGas('air')`, the same air as one pseudo-species.
+ */
+export function dryAir(options?: IdealGasOptions<'mass'>): IdealGas<'mass'> {
+  return mixture(DRY_AIR_MOLE_FRACTIONS, { ...options, name: 'dry air (mixture)' });
+}

@@ -1,0 +1,14 @@
+/**
+ * `heatstate/ideal-gas`: ideal gases with temperature-dependent cp from NASA polynomials
+ * (fitted to NIST-JANAF, or the published 7-coefficient sets), the constant-cp model, mixtures, and process relations.
+ *
+ * @packageDocumentation
+ */
+export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
+export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, Basis, HeatCapacityDimension, EnergyDimension } from './gas.js';
+export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation, isentropicTemperature, temperatureAtEnthalpy, isentropicTemperatureConstantCp } from './processes.js';
+export type { MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './processes.js';
+export { NasaPolynomialModel, ConstantCpModel, MixtureModel, constantCpFrom, mixNasa, fromSevenCoefficients } from './model.js';
+export type { IdealGasModel } from './model.js';
+export { speciesNames, speciesRecords, findSpecies } from './species.js';
+export type { SpeciesRecord } from './species.js';

@@ -1,0 +1,87 @@
+/**
+ * The built-in ideal-gas species, compiled on first use. The run-time data are generated
+ * (scripts/generate-species.ts) from two data files:
+ * - data/ideal-gas/janaf-fits.json: N2, O2, Ar, H2, CO, CO2, H2O, CH4, NH3, fitted to NIST-JANAF in
+ *   the NASA Glenn 9-constant form by scripts/fit-nasa-glenn.ts (fit errors recorded per species);
+ * - data/ideal-gas/nasa7.json: the other species in the older NASA 7-coefficient form (recalled).
+ *
+ * @module
+ */
+import { UnknownNameError } from '../errors.js';
+import { closestNames, normaliseName } from '../lookup.js';
+import { NasaPolynomialModel } from './model.js';
+import { SOURCES, SPECIES } from './species.generated.js';
+
+/** One built-in species, with its constants in the 9-constant form. */
+export interface SpeciesRecord {
+  /** Short identifier, usually the formula (`"N2"`, `"n-C4H10"`, `"air"`). */
+  readonly id: string;
+  /** Chemical formula, when the species has one. */
+  readonly formula?: string;
+  /** Common names (`"nitrogen"`). */
+  readonly names: readonly string[];
+  /** Interval limits in K: min, mid (the break), max. */
+  readonly T: { readonly min: number; readonly mid: number; readonly max: number };
+  /** [a1..a7, b1, b2] below T.mid, and from T.mid up. */
+  readonly low: readonly number[];
+  readonly high: readonly number[];
+  /** Molar mass, kg/mol. */
+  readonly M: number;
+  /** Where the constants come from, and how they were checked. */
+  readonly source: string;
+  readonly note?: string;
+}
+
+const RECORDS: readonly SpeciesRecord[] = SPECIES.map(([id, formula, names, min, mid, max, low, high, M, source, note]) => ({
+  id,
+  ...(formula === '' ? {} : { formula }),
+  names,
+  T: { min, mid, max },
+  low,
+  high,
+  M,
+  source: SOURCES[source]!,
+  ...(note === '' ? {} : { note }),
+}));
+
+const byKey = new Map<string, SpeciesRecord>();
+const byFormula = new Map<string, SpeciesRecord>();
+for (const r of RECORDS) {
+  byFormula.set(r.id, r);
+  if (r.formula !== undefined && !byFormula.has(r.formula)) byFormula.set(r.formula, r);
+  for (const n of [r.id, ...r.names]) byKey.set(normaliseName(n), r);
+}
+const compiled = new Map<SpeciesRecord, NasaPolynomialModel>();
+
+/** The records of all built-in species. */
+export function speciesRecords(): readonly SpeciesRecord[] {
+  return RECORDS;
+}
+
+/** Identifiers of all built-in species. */
+export function speciesNames(): string[] {
+  return RECORDS.map((r) => r.id);
+}
+
+/** The record for a formula (exact case: `CO` is carbon monoxide, `Co` is not a gas here) or a name (any case). */
+export function findSpecies(nameOrFormula: string): SpeciesRecord | undefined {
+  return byFormula.get(nameOrFormula.trim()) ?? byKey.get(normaliseName(nameOrFormula));
+}
+
+/**
+ * The compiled model of a built-in species.
+ * @throws {@link UnknownNameError} with the closest known names
+ */
+export function speciesModel(nameOrFormula: string): { record: SpeciesRecord; model: NasaPolynomialModel } {
+  const record = findSpecies(nameOrFormula);
+  if (!record) {
+    const all = RECORDS.flatMap((r) => [r.id, ...r.names]);
+    throw new UnknownNameError(nameOrFormula, 'ideal-gas species', closestNames(nameOrFormula, all));
+  }
+  let model = compiled.get(record);
+  if (!model) {
+    model = new NasaPolynomialModel(record.M, record.T.min, record.T.mid, record.T.max, record.low, record.high);
+    compiled.set(record, model);
+  }
+  return { record, model };
+}
