@@ -1,0 +1,59 @@
+/**
+ * IF97 region 1 (compressed liquid): the basic equation g(p, T).
+ * IAPWS R7-97(2012), Section 5.1: Eq. 7 (dimensionless Gibbs free energy γ(π, τ), π = p/16.53 MPa,
+ * τ = 1386 K/T), coefficients Table 2, property relations Table 3, derivatives Table 4.
+ * Verification: Table 5. Range: 273.15 K ≤ T ≤ 623.15 K, p_s(T) ≤ p ≤ 100 MPa.
+ *
+ * @module
+ */
+import data from '../../../data/if97/region1.json';
+import { R_IF97 } from './constants.js';
+import type { WaterProperties } from './properties.js';
+import { compileTerms, sumTerms } from './terms.js';
+
+const TERMS = compileTerms(data.I, data.J, data.n);
+const P_STAR = data.pStar;
+const T_STAR = data.TStar;
+const g = new Float64Array(6);
+
+/** Fills `out` with all properties at (p [Pa], T [K]) from the region 1 equation. */
+export function region1(p: number, T: number, out: WaterProperties): WaterProperties {
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  sumTerms(TERMS, 7.1 - pi, tau - 1.222, g);
+  const gamma = g[0]!;
+  const gPi = -g[1]!;
+  const gPiPi = g[2]!;
+  const gTau = g[3]!;
+  const gTauTau = g[4]!;
+  const gPiTau = -g[5]!;
+  const RT = R_IF97 * T;
+  out.T = T;
+  out.p = p;
+  out.v = (pi * gPi * RT) / p;
+  out.rho = 1 / out.v;
+  out.h = RT * tau * gTau;
+  out.u = RT * (tau * gTau - pi * gPi);
+  out.s = R_IF97 * (tau * gTau - gamma);
+  out.cp = -R_IF97 * tau * tau * gTauTau;
+  const a = gPi - tau * gPiTau;
+  out.cv = R_IF97 * (-tau * tau * gTauTau + (a * a) / gPiPi);
+  out.w = Math.sqrt((RT * gPi * gPi) / ((a * a) / (tau * tau * gTauTau) - gPiPi));
+  return out;
+}
+
+/** Specific enthalpy h(p, T) in J/kg and cp in J/(kg·K) from region 1, written to out.h and out.cp only. */
+export function region1HCp(p: number, T: number, out: WaterProperties): void {
+  const tau = T_STAR / T;
+  sumTerms(TERMS, 7.1 - p / P_STAR, tau - 1.222, g);
+  out.h = R_IF97 * T * tau * g[3]!;
+  out.cp = -R_IF97 * tau * tau * g[4]!;
+}
+
+/** Specific entropy s(p, T) in J/(kg·K) and cp in J/(kg·K), written to out.s and out.cp only. */
+export function region1SCp(p: number, T: number, out: WaterProperties): void {
+  const tau = T_STAR / T;
+  sumTerms(TERMS, 7.1 - p / P_STAR, tau - 1.222, g);
+  out.s = R_IF97 * (tau * g[3]! - g[0]!);
+  out.cp = -R_IF97 * tau * tau * g[4]!;
+}

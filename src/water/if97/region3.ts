@@ -1,0 +1,59 @@
+/**
+ * IF97 region 3 (near-critical): the basic equation f(ρ, T).
+ * IAPWS R7-97(2012), Section 7: Eq. 28 (dimensionless Helmholtz free energy φ(δ, τ), δ = ρ/322 kg/m³,
+ * τ = 647.096 K/T), coefficients Table 30, relations Table 31, derivatives Table 32,
+ * verification Table 33. Range: 623.15 K ≤ T ≤ T_B23(p), p_B23(T) ≤ p ≤ 100 MPa.
+ *
+ * @module
+ */
+import data from '../../../data/if97/region3.json';
+import { R_IF97 } from './constants.js';
+import type { WaterProperties } from './properties.js';
+import { compileTerms, sumTerms } from './terms.js';
+
+const TERMS = compileTerms(data.I, data.J, data.n);
+const N1 = data.n1;
+const RHO_STAR = data.rhoStar;
+const T_STAR = data.TStar;
+const f = new Float64Array(6);
+
+/** Fills `out` with all properties at (ρ [kg/m³], T [K]) from the region 3 equation. */
+export function region3(rho: number, T: number, out: WaterProperties): WaterProperties {
+  const delta = rho / RHO_STAR;
+  const tau = T_STAR / T;
+  sumTerms(TERMS, delta, tau, f);
+  const phi = N1 * Math.log(delta) + f[0]!;
+  const pD = N1 / delta + f[1]!;
+  const pDD = -N1 / (delta * delta) + f[2]!;
+  const pT = f[3]!;
+  const pTT = f[4]!;
+  const pDT = f[5]!;
+  const RT = R_IF97 * T;
+  out.T = T;
+  out.rho = rho;
+  out.v = 1 / rho;
+  out.p = rho * RT * delta * pD;
+  out.u = RT * tau * pT;
+  out.h = RT * (tau * pT + delta * pD);
+  out.s = R_IF97 * (tau * pT - phi);
+  out.cv = -R_IF97 * tau * tau * pTT;
+  const a = delta * pD - delta * tau * pDT;
+  const b = 2 * delta * pD + delta * delta * pDD;
+  out.cp = R_IF97 * (-tau * tau * pTT + (a * a) / b);
+  out.w = Math.sqrt(RT * (b - (a * a) / (tau * tau * pTT)));
+  return out;
+}
+
+/**
+ * Pressure p(ρ, T) in Pa and its derivative (∂p/∂ρ)_T in Pa·m³/kg, written to out[0], out[1]
+ * (for density solves).
+ */
+export function region3Pressure(rho: number, T: number, out: Float64Array): void {
+  const delta = rho / RHO_STAR;
+  sumTerms(TERMS, delta, T_STAR / T, f);
+  const pD = N1 / delta + f[1]!;
+  const pDD = -N1 / (delta * delta) + f[2]!;
+  const RT = R_IF97 * T;
+  out[0] = rho * RT * delta * pD;
+  out[1] = RT * (2 * delta * pD + delta * delta * pDD);
+}

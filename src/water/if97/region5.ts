@@ -1,0 +1,61 @@
+/**
+ * IF97 region 5 (high-temperature steam): the basic equation g(p, T), 2007 revision valid to 50 MPa.
+ * IAPWS R7-97(2012), Section 9: Eqs. 32-34 (γ = γ° + γʳ, π = p/1 MPa, τ = 1000 K/T), coefficients
+ * Tables 37 and 38, relations Table 39, derivatives Tables 40-41, verification Table 42.
+ * Range: 1073.15 K ≤ T ≤ 2273.15 K, 0 < p ≤ 50 MPa.
+ *
+ * @module
+ */
+import data from '../../../data/if97/region5.json';
+import { R_IF97 } from './constants.js';
+import type { WaterProperties } from './properties.js';
+import { compileTerms, fillLadder, sumTerms } from './terms.js';
+
+const RESIDUAL = compileTerms(data.I, data.J, data.n);
+const J0 = Int32Array.from(data.J0);
+const N0 = Float64Array.from(data.n0);
+const P_STAR = data.pStar;
+const T_STAR = data.TStar;
+const J0_MIN = -5;
+const ladder0 = new Float64Array(2 - J0_MIN + 1);
+const r = new Float64Array(6);
+
+/** Fills `out` with all properties at (p [Pa], T [K]) from the region 5 equation. */
+export function region5(p: number, T: number, out: WaterProperties): WaterProperties {
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  fillLadder(ladder0, J0_MIN, tau);
+  let g0 = Math.log(pi);
+  let g0Tau = 0;
+  let g0TauTau = 0;
+  const off = -J0_MIN;
+  for (let i = 0; i < J0.length; i++) {
+    const J = J0[i]!;
+    const n = N0[i]!;
+    g0 += n * ladder0[off + J]!;
+    g0Tau += n * J * ladder0[off + J - 1]!;
+    g0TauTau += n * J * (J - 1) * ladder0[off + J - 2]!;
+  }
+  sumTerms(RESIDUAL, pi, tau, r);
+  const grPi = r[1]!;
+  const grPiPi = r[2]!;
+  const grPiTau = r[5]!;
+  const RT = R_IF97 * T;
+  const gPi = 1 / pi + grPi;
+  const gTau = g0Tau + r[3]!;
+  const gTauTau = g0TauTau + r[4]!;
+  out.T = T;
+  out.p = p;
+  out.v = (pi * gPi * RT) / p;
+  out.rho = 1 / out.v;
+  out.h = RT * tau * gTau;
+  out.u = RT * (tau * gTau - pi * gPi);
+  out.s = R_IF97 * (tau * gTau - (g0 + r[0]!));
+  out.cp = -R_IF97 * tau * tau * gTauTau;
+  const a = 1 + pi * grPi - tau * pi * grPiTau;
+  const b = 1 - pi * pi * grPiPi;
+  out.cv = R_IF97 * (-tau * tau * gTauTau - (a * a) / b);
+  const c = 1 + pi * grPi;
+  out.w = Math.sqrt((RT * c * c) / (b + (a * a) / (tau * tau * gTauTau)));
+  return out;
+}
