@@ -42,3 +42,74 @@ export function solveBracketed(f: (x: number) => number, df: (x: number) => numb
   }
   throw new ConvergenceError(`no convergence in 100 iterations on [${lo}, ${hi}]`, 100);
 }
+
+/**
+ * Brent's method (inverse quadratic interpolation with bisection safeguards) on [lo, hi] where
+ * f(lo) and f(hi) differ in sign. For functions without a cheap derivative.
+ *
+ * @returns the root, or NaN when f does not change sign on the bracket or 200 iterations pass
+ *   (callers in the SI core report NaN as a status; the facade turns it into an error)
+ */
+export function brentRoot(f: (x: number) => number, lo: number, hi: number, relTolerance = 1e-14): number {
+  let a = lo;
+  let b = hi;
+  let fa = f(a);
+  let fb = f(b);
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  if (!(fa * fb < 0)) return NaN;
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  for (let i = 0; i < 200; i++) {
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b;
+      b = c;
+      c = a;
+      fa = fb;
+      fb = fc;
+      fc = fa;
+    }
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * relTolerance * Math.abs(b);
+    const m = 0.5 * (c - b);
+    if (Math.abs(m) <= tol || fb === 0) return b;
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      const s = fb / fa;
+      let p: number;
+      let q: number;
+      if (a === c) {
+        p = 2 * m * s;
+        q = 1 - s;
+      } else {
+        const qq = fa / fc;
+        const r = fb / fc;
+        p = s * (2 * m * qq * (qq - r) - (b - a) * (r - 1));
+        q = (qq - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = m;
+        e = m;
+      }
+    } else {
+      d = m;
+      e = m;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
+    fb = f(b);
+  }
+  return NaN;
+}

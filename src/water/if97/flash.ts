@@ -1,0 +1,558 @@
+/**
+ * IF97 states from any usual pair: the plain-number SI core of `water.state`.
+ *
+ * Region selection follows IAPWS R7-97(2012) Section 4 and Figure 1 (regions 1 to 5, the B23 line,
+ * the saturation line of region 4). Backward equations give starting values; Newton steps on the
+ * basic equations polish them to about 1e-12 relative. Region 3 densities at given (p, T) come from
+ * a bracketed search on the region 3 pressure (the solve the release allows in place of SR5-05),
+ * choosing the liquid or vapour branch by the saturation pressure of Eq. 30.
+ *
+ * Every function fills a caller-owned {@link WaterState} and returns a status code (0 = ok); it
+ * never throws and never allocates on the paths through regions 1, 2 and 5.
+ *
+ * @module
+ */
+import satData from '../../../data/if97/saturation-densities.json';
+import { brentRoot } from '../../numeric/root.js';
+import { b23Pressure, b23Temperature } from './b23.js';
+import { region1TemperaturePH } from './backward-ph.js';
+import { region2TemperaturePH } from './backward-ph.js';
+import { region1TemperaturePS, region2TemperaturePS } from './backward-ps.js';
+import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
+import { WaterProperties } from './properties.js';
+import { region1, region1HCp, region1SCp } from './region1.js';
+import { region2 } from './region2.js';
+import { region3, region3Pressure } from './region3.js';
+import { saturationPressure, saturationTemperature } from './region4.js';
+import { region5 } from './region5.js';
+
+/** Status codes of the SI core (also used by the batch API). */
+export const STATUS = {
+  ok: 0,
+  /** The inputs are valid numbers but no IF97 state exists for them in range. */
+  outOfRange: 1,
+  /** An iteration did not reach its tolerance. */
+  noConvergence: 2,
+  /** NaN, infinite, or otherwise unusable input. */
+  invalidInput: 3,
+} as const;
+
+/** Phase codes. */
+export const PHASE = { liquid: 0, vapor: 1, twoPhase: 2, supercritical: 3 } as const;
+
+/** A full state: properties plus quality, IF97 region and phase. In two-phase states cp, cv and w are NaN (not defined). */
+export class WaterState extends WaterProperties {
+  /** Vapour mass fraction; NaN outside the two-phase region. */
+  x = NaN;
+  /** IF97 region 1-5 (4 = two-phase). */
+  region = 0;
+  /** One of {@link PHASE}. */
+  phase = 0;
+}
+
+/** Pressure at the saturation line's lower end, p_s(273.15 K), Pa. */
+export const P_SAT_MIN = saturationPressure(T_MIN);
+/** Pressure on the B23 line at 623.15 K (16.529 MPa): above it saturation lies in region 3. */
+export const P_SAT_13 = saturationPressure(T_13);
+
+const scratch = new WaterProperties();
+const scratchB = new WaterProperties();
+const satLiquid = new WaterProperties();
+const satVapor = new WaterProperties();
+const pr = new Float64Array(2);
+
+// ---------------------------------------------------------------- classification
+
+/**
+ * The IF97 region of (p [Pa], T [K]): 1, 2, 3 or 5; 0 outside the range of IF97.
+ * On the saturation line itself (p = p_s(T)), the liquid (region 1) is returned.
+ */
+export function regionOfPT(p: number, T: number): number {
+  if (!(p > 0) || !(T >= T_MIN) || !(T <= T_MAX_5) || !(p <= P_MAX)) return 0;
+  if (T > T_MAX_2) return p <= P_MAX_5 ? 5 : 0;
+  if (T <= T_13) return p >= saturationPressure(T) ? 1 : 2;
+  if (T <= 863.15 && p > b23Pressure(T)) return 3;
+  return 2;
+}
+
+/** Phase of a single-phase state: supercritical above both critical values, otherwise liquid or vapour by the saturation pressure. */
+function phaseOf(p: number, T: number, region: number): number {
+  if (T >= T_CRITICAL) return p >= P_CRITICAL ? PHASE.supercritical : PHASE.vapor;
+  if (region === 1) return PHASE.liquid;
+  if (region === 2 || region === 5) return PHASE.vapor;
+  return p >= saturationPressure(T) ? PHASE.liquid : PHASE.vapor;
+}
+
+function finish(out: WaterState, region: number): number {
+  out.region = region;
+  out.x = NaN;
+  out.phase = phaseOf(out.p, out.T, region);
+  return STATUS.ok;
+}
+
+// ---------------------------------------------------------------- region 3 densities
+
+const SAT_B = satData.liquid.b;
+const SAT_BE = satData.liquid.exponents;
+const SAT_C = satData.vapour.c;
+const SAT_CE = satData.vapour.exponents;
+
+/** Approximate saturated-liquid density (SR1-86 Eq. 2.3), for search step sizes only. */
+function approxLiquidDensity(T: number): number {
+  const th = 1 - T / T_CRITICAL;
+  let s = 1;
+  for (let i = 0; i < 6; i++) s += SAT_B[i]! * th ** SAT_BE[i]!;
+  return s * RHO_CRITICAL;
+}
+
+/** Approximate saturated-vapour density (SR1-86 Eq. 2.4), for search step sizes only. */
+function approxVaporDensity(T: number): number {
+  const th = 1 - T / T_CRITICAL;
+  let s = 0;
+  for (let i = 0; i < 6; i++) s += SAT_C[i]! * th ** SAT_CE[i]!;
+  return Math.exp(s) * RHO_CRITICAL;
+}
+
+function pressure3(rho: number, T: number): number {
+  region3Pressure(rho, T, pr);
+  return pr[0]!;
+}
+
+const RHO_LOW = 5;
+// the region 3 equation peaks in pressure near 800 kg/m³ (above 200 MPa on every isotherm of region 3) and is not valid beyond
+const RHO_HIGH = 800;
+
+/** Newton steps kept inside [a, b] where p3(a) < p < p3(b) (or the reverse). */
+function polishDensity(p: number, T: number, a: number, b: number): number {
+  let lo = a;
+  let hi = b;
+  let rho = 0.5 * (lo + hi);
+  for (let i = 0; i < 100; i++) {
+    region3Pressure(rho, T, pr);
+    const f = pr[0]! - p;
+    if (f === 0) return rho;
+    if (f < 0) lo = rho;
+    else hi = rho;
+    let next = pr[1]! > 0 ? rho - f / pr[1]! : NaN;
+    if (!(next > Math.min(lo, hi) && next < Math.max(lo, hi))) next = 0.5 * (lo + hi);
+    if (Math.abs(next - rho) <= 1e-14 * rho) return next;
+    rho = next;
+  }
+  return NaN;
+}
+
+/**
+ * Density (kg/m³) in region 3 at (p [Pa], T [K]), by a bracketed search on the region 3 pressure.
+ * `branch`: 1 = liquid (the largest root), 2 = vapour (the smallest root), 0 = choose by p_s(T)
+ * below the critical temperature. Returns NaN when no root is found.
+ */
+export function region3Density(p: number, T: number, branch: 0 | 1 | 2 = 0): number {
+  if (T >= T_CRITICAL) {
+    // supercritical isotherms rise monotonically: scan upward
+    let prev = RHO_LOW;
+    if (pressure3(prev, T) >= p) return NaN;
+    for (let rho = prev + 20; rho <= RHO_HIGH; prev = rho, rho += 20) {
+      if (pressure3(rho, T) >= p) return polishDensity(p, T, prev, rho);
+    }
+    return NaN;
+  }
+  const b = branch === 0 ? (p >= saturationPressure(T) ? 1 : 2) : branch;
+  const rl = approxLiquidDensity(T);
+  const rv = approxVaporDensity(T);
+  const fine = Math.max(0.02, (rl - rv) / 12);
+  if (b === 1) {
+    let prev = RHO_HIGH;
+    if (pressure3(prev, T) <= p) return NaN;
+    while (prev > rv) {
+      const step = prev > rl + 40 ? 25 : fine;
+      const rho = prev - step;
+      if (pressure3(rho, T) <= p) return polishDensity(p, T, rho, prev);
+      prev = rho;
+    }
+    return NaN;
+  }
+  let prev = RHO_LOW;
+  if (pressure3(prev, T) >= p) return NaN;
+  while (prev < rl) {
+    const step = prev < rv - 40 ? 20 : fine;
+    const rho = prev + step;
+    if (pressure3(rho, T) >= p) return polishDensity(p, T, prev, rho);
+    prev = rho;
+  }
+  return NaN;
+}
+
+// ---------------------------------------------------------------- forward (p, T)
+
+/**
+ * All properties at (p [Pa], T [K]). Status `outOfRange` outside IF97. On the saturation line the
+ * liquid is returned (use the saturation functions for both phases).
+ */
+export function stateFromPT(p: number, T: number, out: WaterState): number {
+  if (!Number.isFinite(p) || !Number.isFinite(T)) return STATUS.invalidInput;
+  const region = regionOfPT(p, T);
+  switch (region) {
+    case 1:
+      region1(p, T, out);
+      break;
+    case 2:
+      region2(p, T, out);
+      break;
+    case 5:
+      region5(p, T, out);
+      break;
+    case 3: {
+      const rho = region3Density(p, T);
+      if (Number.isNaN(rho)) return STATUS.noConvergence;
+      region3(rho, T, out);
+      out.p = p;
+      break;
+    }
+    default:
+      return STATUS.outOfRange;
+  }
+  return finish(out, region);
+}
+
+// ---------------------------------------------------------------- saturation
+
+/**
+ * Saturated liquid and vapour at T (K), 273.15 K ≤ T ≤ 647.096 K. Below 623.15 K from regions 1
+ * and 2 at p_s(T); above, from region 3 at the two densities where its pressure equals p_s(T).
+ */
+export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterProperties): number {
+  if (!Number.isFinite(T)) return STATUS.invalidInput;
+  if (!(T >= T_MIN && T <= T_CRITICAL)) return STATUS.outOfRange;
+  const p = T === T_CRITICAL ? P_CRITICAL : saturationPressure(T);
+  if (T <= T_13) {
+    region1(p, T, liquid);
+    region2(p, T, vapor);
+    return STATUS.ok;
+  }
+  if (T === T_CRITICAL) {
+    region3(RHO_CRITICAL, T, liquid);
+    region3(RHO_CRITICAL, T, vapor);
+  } else {
+    const rl = region3Density(p, T, 1);
+    const rv = region3Density(p, T, 2);
+    if (Number.isNaN(rl) || Number.isNaN(rv)) return STATUS.noConvergence;
+    region3(rl, T, liquid);
+    region3(rv, T, vapor);
+  }
+  liquid.p = p;
+  vapor.p = p;
+  return STATUS.ok;
+}
+
+/** Saturated liquid and vapour at p (Pa), 611.213 Pa ≤ p ≤ 22.064 MPa. */
+export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterProperties): number {
+  if (!Number.isFinite(p)) return STATUS.invalidInput;
+  if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) return STATUS.outOfRange;
+  const T = p === P_CRITICAL ? T_CRITICAL : Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(p)));
+  if (T <= T_13) {
+    region1(p, T, liquid);
+    region2(p, T, vapor);
+    return STATUS.ok;
+  }
+  const status = saturationAtT(T, liquid, vapor);
+  liquid.p = p;
+  vapor.p = p;
+  return status;
+}
+
+function mix(x: number, liquid: WaterProperties, vapor: WaterProperties, out: WaterState): number {
+  out.T = liquid.T;
+  out.p = liquid.p;
+  out.v = liquid.v + x * (vapor.v - liquid.v);
+  out.rho = 1 / out.v;
+  out.u = liquid.u + x * (vapor.u - liquid.u);
+  out.h = liquid.h + x * (vapor.h - liquid.h);
+  out.s = liquid.s + x * (vapor.s - liquid.s);
+  out.cp = NaN;
+  out.cv = NaN;
+  out.w = NaN;
+  out.x = x;
+  out.region = 4;
+  out.phase = PHASE.twoPhase;
+  return STATUS.ok;
+}
+
+/** The two-phase mixture of quality x (0 ≤ x ≤ 1) at T (K). */
+export function stateFromTX(T: number, x: number, out: WaterState): number {
+  if (!Number.isFinite(T) || !Number.isFinite(x)) return STATUS.invalidInput;
+  if (!(x >= 0 && x <= 1)) return STATUS.outOfRange;
+  const status = saturationAtT(T, scratch, scratchB);
+  return status === STATUS.ok ? mix(x, scratch, scratchB, out) : status;
+}
+
+/** The two-phase mixture of quality x (0 ≤ x ≤ 1) at p (Pa). */
+export function stateFromPX(p: number, x: number, out: WaterState): number {
+  if (!Number.isFinite(p) || !Number.isFinite(x)) return STATUS.invalidInput;
+  if (!(x >= 0 && x <= 1)) return STATUS.outOfRange;
+  const status = saturationAtP(p, scratch, scratchB);
+  return status === STATUS.ok ? mix(x, scratch, scratchB, out) : status;
+}
+
+// ---------------------------------------------------------------- (p, h) and (p, s)
+
+/** Which property a flash matches: enthalpy or entropy. */
+const BY_H = 0;
+const BY_S = 1;
+
+function valueOf(props: WaterProperties, by: number): number {
+  return by === BY_H ? props.h : props.s;
+}
+
+/**
+ * Newton polish of T at fixed p in region 1, 2 or 5 so that h (or s) matches `target`:
+ * dh/dT = cp, ds/dT = cp/T. Kept inside [Tlo, Thi].
+ */
+function polishT(region: number, p: number, target: number, by: number, T0: number, Tlo: number, Thi: number, out: WaterState): number {
+  let T = Math.min(Thi, Math.max(Tlo, T0));
+  for (let i = 0; i < 30; i++) {
+    if (region === 1) {
+      if (by === BY_H) region1HCp(p, T, scratch);
+      else region1SCp(p, T, scratch);
+    } else if (region === 2) region2(p, T, scratch);
+    else region5(p, T, scratch);
+    const f = valueOf(scratch, by) - target;
+    const slope = by === BY_H ? scratch.cp : scratch.cp / T;
+    let next = T - f / slope;
+    if (!(next >= Tlo)) next = 0.5 * (T + Tlo);
+    if (!(next <= Thi)) next = 0.5 * (T + Thi);
+    if (Math.abs(next - T) <= 1e-13 * T) {
+      T = next;
+      if (region === 1) region1(p, T, out);
+      else if (region === 2) region2(p, T, out);
+      else region5(p, T, out);
+      return finish(out, region);
+    }
+    T = next;
+  }
+  return STATUS.noConvergence;
+}
+
+/** h or s at (p, T) in region 1, 2 or 5 (full evaluation into scratch). */
+function valueAt(region: number, p: number, T: number, by: number): number {
+  if (region === 1) region1(p, T, scratchB);
+  else if (region === 2) region2(p, T, scratchB);
+  else region5(p, T, scratchB);
+  return valueOf(scratchB, by);
+}
+
+/** h or s on the region 3 isobar at T (density by search), evaluated into `into`. */
+function region3At(p: number, T: number, branch: 0 | 1 | 2, into: WaterProperties): boolean {
+  const rho = region3Density(p, T, branch);
+  if (Number.isNaN(rho)) return false;
+  region3(rho, T, into);
+  into.p = p;
+  return true;
+}
+
+/** Solves T on a region 3 isobar between Tlo and Thi so that h (or s) matches. */
+function solveRegion3(p: number, target: number, by: number, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState): number {
+  let failed = false;
+  const T = brentRoot(
+    (t) => {
+      if (!region3At(p, t, branch, scratchB)) {
+        failed = true;
+        return NaN;
+      }
+      return valueOf(scratchB, by) - target;
+    },
+    Tlo,
+    Thi,
+    1e-14,
+  );
+  if (failed || Number.isNaN(T)) return STATUS.noConvergence;
+  if (!region3At(p, T, branch, out)) return STATUS.noConvergence;
+  return finish(out, 3);
+}
+
+/**
+ * The state at p (Pa) with enthalpy h (J/kg, by = 0) or entropy s (J/(kg·K), by = 1).
+ */
+function stateFromPAnd(p: number, target: number, by: number, out: WaterState): number {
+  if (!Number.isFinite(p) || !Number.isFinite(target)) return STATUS.invalidInput;
+  if (!(p > 0 && p <= P_MAX)) return STATUS.outOfRange;
+  const backward1 = by === BY_H ? region1TemperaturePH : region1TemperaturePS;
+  const backward2 = by === BY_H ? region2TemperaturePH : region2TemperaturePS;
+
+  // the gas side above the liquid, saturation and region 3: regions 2 and 5
+  const gasSide = (Tlo: number): number => {
+    const T2max = T_MAX_2;
+    const v2max = valueAt(2, p, T2max, by);
+    if (target <= v2max) {
+      const vlo = valueAt(2, p, Tlo, by);
+      if (target < vlo) return STATUS.outOfRange;
+      return polishT(2, p, target, by, backward2(p, target), Tlo, T2max, out);
+    }
+    if (p > P_MAX_5) return STATUS.outOfRange;
+    const v5max = valueAt(5, p, T_MAX_5, by);
+    if (target > v5max) return STATUS.outOfRange;
+    const v5min = valueAt(5, p, T_MAX_2, by);
+    // a linear first guess between the region 5 end values
+    const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
+    return polishT(5, p, target, by, T0, T_MAX_2, T_MAX_5, out);
+  };
+
+  if (p < P_SAT_MIN) {
+    // below the triple-point pressure every state in range is vapour
+    return gasSide(T_MIN);
+  }
+  const vMin = valueAt(1, p, T_MIN, by);
+  if (target < vMin) return STATUS.outOfRange;
+
+  if (p <= P_SAT_13) {
+    const Ts = saturationTemperature(p);
+    const liquidEnd = valueAt(1, p, Ts, by);
+    if (target <= liquidEnd) return polishT(1, p, target, by, backward1(p, target), T_MIN, Ts, out);
+    const vaporEnd = valueAt(2, p, Ts, by);
+    if (target < vaporEnd) {
+      region1(p, Ts, scratch);
+      region2(p, Ts, scratchB);
+      const x = (target - valueOf(scratch, by)) / (valueOf(scratchB, by) - valueOf(scratch, by));
+      return mix(x, scratch, scratchB, out);
+    }
+    return gasSide(Ts);
+  }
+
+  const end1 = valueAt(1, p, T_13, by);
+  if (target <= end1) return polishT(1, p, target, by, backward1(p, target), T_MIN, T_13, out);
+  if (p < P_CRITICAL) {
+    const Ts = saturationTemperature(p);
+    const liq = satLiquid;
+    const vap = satVapor;
+    const status = saturationAtP(p, liq, vap);
+    if (status !== STATUS.ok) return status;
+    if (target <= valueOf(liq, by)) return solveRegion3(p, target, by, T_13, Ts, 1, out);
+    if (target < valueOf(vap, by)) return mix((target - valueOf(liq, by)) / (valueOf(vap, by) - valueOf(liq, by)), liq, vap, out);
+    const TB = b23Temperature(p);
+    if (target <= valueAt(2, p, TB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out);
+    return gasSide(TB);
+  }
+  const TB = b23Temperature(p);
+  if (target <= valueAt(2, p, TB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out);
+  return gasSide(TB);
+}
+
+/** The state at p (Pa) and specific enthalpy h (J/kg). */
+export function stateFromPH(p: number, h: number, out: WaterState): number {
+  return stateFromPAnd(p, h, BY_H, out);
+}
+
+/** The state at p (Pa) and specific entropy s (J/(kg·K)). */
+export function stateFromPS(p: number, s: number, out: WaterState): number {
+  return stateFromPAnd(p, s, BY_S, out);
+}
+
+// ---------------------------------------------------------------- (h, s)
+
+const hsState = new WaterState();
+
+/** Lowest pressure the (h, s) search considers, Pa. */
+export const P_HS_MIN = 1e-3;
+
+/** Largest pressure at which an (p, h) state exists for this h, by bisection on the range limits. */
+function highestPressureFor(h: number): number {
+  // h must lie between h(p, 273.15 K) (rising with p) and the hottest state (falling with p)
+  const valid = (p: number): boolean => stateFromPH(p, h, hsState) === STATUS.ok;
+  if (valid(P_MAX)) return P_MAX;
+  let lo = P_SAT_MIN;
+  if (!valid(lo)) {
+    lo = P_HS_MIN;
+    if (!valid(lo)) return NaN;
+  }
+  let hi = P_MAX;
+  for (let i = 0; i < 80; i++) {
+    const mid = Math.sqrt(lo * hi);
+    if (valid(mid)) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/**
+ * The state with specific enthalpy h (J/kg) and entropy s (J/(kg·K)). At fixed h, entropy falls
+ * strictly with pressure ((∂s/∂p)_h = −v/T), in every region and across the saturation dome, so p
+ * follows from a bracketed one-dimensional search on the (p, h) flash.
+ */
+export function stateFromHS(h: number, s: number, out: WaterState): number {
+  if (!Number.isFinite(h) || !Number.isFinite(s)) return STATUS.invalidInput;
+  const pHi = highestPressureFor(h);
+  if (Number.isNaN(pHi)) return STATUS.outOfRange;
+  const pLo = stateFromPH(P_HS_MIN, h, hsState) === STATUS.ok ? P_HS_MIN : P_SAT_MIN;
+  let failed = false;
+  // exp(log(p)) may round below pLo: clamp to the bracket
+  const pressureOf = (lnp: number): number => Math.min(pHi, Math.max(pLo, Math.exp(lnp)));
+  const f = (lnp: number): number => {
+    const st = stateFromPH(pressureOf(lnp), h, hsState);
+    if (st !== STATUS.ok) {
+      failed = true;
+      return NaN;
+    }
+    return hsState.s - s;
+  };
+  const fLo = f(Math.log(pLo));
+  const fHi = f(Math.log(pHi));
+  if (failed) return STATUS.outOfRange;
+  if (fLo < 0 || fHi > 0) return STATUS.outOfRange;
+  const lnp = brentRoot(f, Math.log(pLo), Math.log(pHi), 1e-15);
+  if (failed || Number.isNaN(lnp)) return STATUS.noConvergence;
+  return stateFromPH(pressureOf(lnp), h, out);
+}
+
+// ---------------------------------------------------------------- (T, v)
+
+/**
+ * The state at T (K) and specific volume v (m³/kg). Inside the dome, the two-phase mixture with
+ * x = (v − v′)/(v″ − v′); in region 3 directly from f(ρ, T); elsewhere p from a bracketed search
+ * on v(p, T), which falls strictly with p.
+ */
+export function stateFromTV(T: number, v: number, out: WaterState): number {
+  if (!Number.isFinite(T) || !Number.isFinite(v)) return STATUS.invalidInput;
+  if (!(v > 0) || !(T >= T_MIN && T <= T_MAX_5)) return STATUS.outOfRange;
+  const liq = scratch;
+  const vap = scratchB;
+  let pLiquidMin = 0;
+  let pVaporMax = P_MAX;
+  if (T <= T_CRITICAL) {
+    const status = saturationAtT(T, liq, vap);
+    if (status !== STATUS.ok) return status;
+    if (v >= liq.v && v <= vap.v) return mix(vap.v === liq.v ? 0 : (v - liq.v) / (vap.v - liq.v), liq, vap, out);
+    pLiquidMin = liq.p;
+    pVaporMax = vap.p;
+  }
+  // region 3 is a function of (ρ, T): use it where (1/v, T) falls inside it: the liquid side of the
+  // dome, or densities above the region 3 vapour density on the B23 line
+  if (T > T_13 && T <= 863.15) {
+    const rho = 1 / v;
+    const pB = b23Pressure(T);
+    const rhoB = region3Density(pB, T, 2);
+    if (Number.isNaN(rhoB)) return STATUS.noConvergence;
+    if ((T < T_CRITICAL && v < liq.v) || rho >= rhoB) {
+      region3(rho, T, out);
+      if (!(out.p <= P_MAX)) return STATUS.outOfRange;
+      return finish(out, 3);
+    }
+    pVaporMax = Math.min(pVaporMax, pB);
+  }
+  const region = T > T_MAX_2 ? 5 : T <= T_13 && v < liq.v ? 1 : 2;
+  const pTop = region === 5 ? P_MAX_5 : region === 1 ? P_MAX : pVaporMax;
+  const pBottom = region === 1 ? pLiquidMin : P_HS_MIN;
+  const vAt = (lnp: number): number => {
+    const p = Math.exp(lnp);
+    if (region === 1) region1(p, T, scratchB);
+    else if (region === 2) region2(p, T, scratchB);
+    else region5(p, T, scratchB);
+    return Math.log(scratchB.v) - Math.log(v);
+  };
+  if (vAt(Math.log(pBottom)) < 0 || vAt(Math.log(pTop)) > 0) return STATUS.outOfRange;
+  const lnp = brentRoot(vAt, Math.log(pBottom), Math.log(pTop), 1e-15);
+  if (Number.isNaN(lnp)) return STATUS.noConvergence;
+  const p = Math.exp(lnp);
+  if (region === 1) region1(p, T, out);
+  else if (region === 2) region2(p, T, out);
+  else region5(p, T, out);
+  return finish(out, region);
+}
