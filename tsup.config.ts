@@ -7,6 +7,7 @@ export default defineConfig({
     'units/index': 'src/units/index.ts',
     'incompressible/index': 'src/incompressible/index.ts',
     'ideal-gas/index': 'src/ideal-gas/index.ts',
+    'water/index': 'src/water/index.ts',
   },
   format: ['esm', 'cjs'],
   dts: true,

@@ -17,7 +17,7 @@ async function bundle(code: string): Promise<string> {
     format: 'esm',
     platform: 'neutral',
     write: false,
-    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts', 'heatstate/ideal-gas': './src/ideal-gas/index.ts' },
+    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts', 'heatstate/ideal-gas': './src/ideal-gas/index.ts', 'heatstate/water': './src/water/index.ts' },
   });
   return result.outputFiles[0]!.text;
 }

@@ -249,9 +249,11 @@ export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterPr
   if (!Number.isFinite(p)) return STATUS.invalidInput;
   if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) return STATUS.outOfRange;
   const T = p === P_CRITICAL ? T_CRITICAL : Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(p)));
-  if (T <= T_13) {
-    region1(p, T, liquid);
-    region2(p, T, vapor);
+  if (p <= P_SAT_13) {
+    // by pressure, so that p_s(623.15 K) itself stays with regions 1 and 2 as saturationAtT does
+    const Tl = Math.min(T, T_13);
+    region1(p, Tl, liquid);
+    region2(p, Tl, vapor);
     return STATUS.ok;
   }
   const status = saturationAtT(T, liquid, vapor);
@@ -325,6 +327,8 @@ function polishT(region: number, p: number, target: number, by: number, T0: numb
       if (region === 1) region1(p, T, out);
       else if (region === 2) region2(p, T, out);
       else region5(p, T, out);
+      // a step pinned at a bound converges without matching: never report that as a state
+      if (Math.abs(valueOf(out, by) - target) > 1e-9 * Math.abs(target) + 1e-9) return STATUS.noConvergence;
       return finish(out, region);
     }
     T = next;
@@ -349,8 +353,16 @@ function region3At(p: number, T: number, branch: 0 | 1 | 2, into: WaterPropertie
   return true;
 }
 
-/** Solves T on a region 3 isobar between Tlo and Thi so that h (or s) matches. */
+/**
+ * Solves T on a region 3 isobar between Tlo and Thi so that h (or s) matches. The basic equations
+ * differ slightly at the region boundaries (IF97 Section 10): a target that falls in that gap at the
+ * 1/3 boundary (Tlo = 623.15 K) is solved on region 1 just above 623.15 K (at the B23 line the gas
+ * side does the same on region 2), so the flash still matches it exactly.
+ */
 function solveRegion3(p: number, target: number, by: number, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState): number {
+  if (Tlo === T_13 && region3At(p, Tlo, branch, scratchB) && valueOf(scratchB, by) > target) {
+    return polishT(1, p, target, by, T_13, T_MIN, T_13 + 5, out);
+  }
   let failed = false;
   const T = brentRoot(
     (t) => {
@@ -378,30 +390,32 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
   const backward1 = by === BY_H ? region1TemperaturePH : region1TemperaturePS;
   const backward2 = by === BY_H ? region2TemperaturePH : region2TemperaturePS;
 
-  // the gas side above the liquid, saturation and region 3: regions 2 and 5
-  const gasSide = (Tlo: number): number => {
-    const T2max = T_MAX_2;
-    const v2max = valueAt(2, p, T2max, by);
+  // the gas side above the liquid, saturation and region 3: regions 2 and 5. `below` lets region 2
+  // reach a few kelvin under Tlo, for targets in the small gap IF97 leaves at the B23 line.
+  const gasSide = (Tlo: number, below: number): number => {
+    const v2max = valueAt(2, p, T_MAX_2, by);
     if (target <= v2max) {
-      const vlo = valueAt(2, p, Tlo, by);
-      if (target < vlo) return STATUS.outOfRange;
-      return polishT(2, p, target, by, backward2(p, target), Tlo, T2max, out);
+      const floor = Tlo - below;
+      const vlo = valueAt(2, p, floor, by);
+      if (target < vlo - 1e-12 * Math.abs(vlo) - 1e-9) return STATUS.outOfRange;
+      return polishT(2, p, target, by, backward2(p, target), floor, T_MAX_2, out);
     }
     if (p > P_MAX_5) return STATUS.outOfRange;
     const v5max = valueAt(5, p, T_MAX_5, by);
     if (target > v5max) return STATUS.outOfRange;
     const v5min = valueAt(5, p, T_MAX_2, by);
-    // a linear first guess between the region 5 end values
+    // a linear first guess between the region 5 end values; region 5 may reach a few kelvin under
+    // 1073.15 K for targets in the gap between the region 2 and 5 values there
     const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
-    return polishT(5, p, target, by, T0, T_MAX_2, T_MAX_5, out);
+    return polishT(5, p, target, by, T0, T_MAX_2 - 5, T_MAX_5, out);
   };
 
   if (p < P_SAT_MIN) {
     // below the triple-point pressure every state in range is vapour
-    return gasSide(T_MIN);
+    return gasSide(T_MIN, 0);
   }
   const vMin = valueAt(1, p, T_MIN, by);
-  if (target < vMin) return STATUS.outOfRange;
+  if (target < vMin - 1e-12 * Math.abs(vMin) - 1e-9) return STATUS.outOfRange;
 
   if (p <= P_SAT_13) {
     const Ts = saturationTemperature(p);
@@ -414,7 +428,7 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
       const x = (target - valueOf(scratch, by)) / (valueOf(scratchB, by) - valueOf(scratch, by));
       return mix(x, scratch, scratchB, out);
     }
-    return gasSide(Ts);
+    return gasSide(Ts, 0);
   }
 
   const end1 = valueAt(1, p, T_13, by);
@@ -428,12 +442,15 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
     if (target <= valueOf(liq, by)) return solveRegion3(p, target, by, T_13, Ts, 1, out);
     if (target < valueOf(vap, by)) return mix((target - valueOf(liq, by)) / (valueOf(vap, by) - valueOf(liq, by)), liq, vap, out);
     const TB = b23Temperature(p);
-    if (target <= valueAt(2, p, TB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out);
-    return gasSide(TB);
+    // region 3 owns T ≤ T_B23(p): divide by its value there (IF97's regions differ slightly on the line)
+    if (!region3At(p, TB, 2, scratchB)) return STATUS.noConvergence;
+    if (target <= valueOf(scratchB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out);
+    return gasSide(TB, 5);
   }
   const TB = b23Temperature(p);
-  if (target <= valueAt(2, p, TB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out);
-  return gasSide(TB);
+  if (!region3At(p, TB, 0, scratchB)) return STATUS.noConvergence;
+  if (target <= valueOf(scratchB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out);
+  return gasSide(TB, 5);
 }
 
 /** The state at p (Pa) and specific enthalpy h (J/kg). */
@@ -453,37 +470,53 @@ const hsState = new WaterState();
 /** Lowest pressure the (h, s) search considers, Pa. */
 export const P_HS_MIN = 1e-3;
 
-/** Largest pressure at which an (p, h) state exists for this h, by bisection on the range limits. */
-function highestPressureFor(h: number): number {
-  // h must lie between h(p, 273.15 K) (rising with p) and the hottest state (falling with p)
-  const valid = (p: number): boolean => stateFromPH(p, h, hsState) === STATUS.ok;
-  if (valid(P_MAX)) return P_MAX;
-  let lo = P_SAT_MIN;
-  if (!valid(lo)) {
-    lo = P_HS_MIN;
-    if (!valid(lo)) return NaN;
+function validPH(p: number, h: number): boolean {
+  return stateFromPH(p, h, hsState) === STATUS.ok;
+}
+
+/**
+ * The pressures between which (p, h) states exist for this h: an interval, since h(p, 273.15 K)
+ * rises with p and the hottest state's h falls with p. Found by bisection in ln p.
+ * Returns false when no pressure works.
+ */
+const span = new Float64Array(2);
+function pressureSpanFor(h: number): boolean {
+  let inside = NaN;
+  for (const p of [P_MAX, 1e6, P_SAT_MIN, 1e3, P_HS_MIN]) {
+    if (validPH(p, h)) {
+      inside = p;
+      break;
+    }
   }
-  let hi = P_MAX;
-  for (let i = 0; i < 80; i++) {
-    const mid = Math.sqrt(lo * hi);
-    if (valid(mid)) lo = mid;
-    else hi = mid;
-  }
-  return lo;
+  if (Number.isNaN(inside)) return false;
+  const edge = (valid: number, invalid: number): number => {
+    let a = valid;
+    let b = invalid;
+    for (let i = 0; i < 100 && Math.abs(Math.log(b / a)) > 1e-15; i++) {
+      const mid = Math.sqrt(a * b);
+      if (validPH(mid, h)) a = mid;
+      else b = mid;
+    }
+    return a;
+  };
+  span[0] = validPH(P_HS_MIN, h) ? P_HS_MIN : edge(inside, P_HS_MIN);
+  span[1] = validPH(P_MAX, h) ? P_MAX : edge(inside, P_MAX);
+  return true;
 }
 
 /**
  * The state with specific enthalpy h (J/kg) and entropy s (J/(kg·K)). At fixed h, entropy falls
  * strictly with pressure ((∂s/∂p)_h = −v/T), in every region and across the saturation dome, so p
- * follows from a bracketed one-dimensional search on the (p, h) flash.
+ * follows from a bracketed one-dimensional search on the (p, h) flash. Pressures below 1 mPa are
+ * not searched.
  */
 export function stateFromHS(h: number, s: number, out: WaterState): number {
   if (!Number.isFinite(h) || !Number.isFinite(s)) return STATUS.invalidInput;
-  const pHi = highestPressureFor(h);
-  if (Number.isNaN(pHi)) return STATUS.outOfRange;
-  const pLo = stateFromPH(P_HS_MIN, h, hsState) === STATUS.ok ? P_HS_MIN : P_SAT_MIN;
+  if (!pressureSpanFor(h)) return STATUS.outOfRange;
+  const pLo = span[0]!;
+  const pHi = span[1]!;
   let failed = false;
-  // exp(log(p)) may round below pLo: clamp to the bracket
+  // exp(log(p)) may round outside the span: clamp to it
   const pressureOf = (lnp: number): number => Math.min(pHi, Math.max(pLo, Math.exp(lnp)));
   const f = (lnp: number): number => {
     const st = stateFromPH(pressureOf(lnp), h, hsState);
@@ -496,7 +529,10 @@ export function stateFromHS(h: number, s: number, out: WaterState): number {
   const fLo = f(Math.log(pLo));
   const fHi = f(Math.log(pHi));
   if (failed) return STATUS.outOfRange;
-  if (fLo < 0 || fHi > 0) return STATUS.outOfRange;
+  // at the ends of the span, accept a miss within the (p, h) flash tolerance
+  const roundoff = 1e-9 * Math.abs(s) + 1e-9;
+  if (fLo < 0) return fLo >= -roundoff ? stateFromPH(pLo, h, out) : STATUS.outOfRange;
+  if (fHi > 0) return fHi <= roundoff ? stateFromPH(pHi, h, out) : STATUS.outOfRange;
   const lnp = brentRoot(f, Math.log(pLo), Math.log(pHi), 1e-15);
   if (failed || Number.isNaN(lnp)) return STATUS.noConvergence;
   return stateFromPH(pressureOf(lnp), h, out);
@@ -532,7 +568,7 @@ export function stateFromTV(T: number, v: number, out: WaterState): number {
     if (Number.isNaN(rhoB)) return STATUS.noConvergence;
     if ((T < T_CRITICAL && v < liq.v) || rho >= rhoB) {
       region3(rho, T, out);
-      if (!(out.p <= P_MAX)) return STATUS.outOfRange;
+      if (!(out.p <= P_MAX * (1 + 1e-9))) return STATUS.outOfRange;
       return finish(out, 3);
     }
     pVaporMax = Math.min(pVaporMax, pB);
@@ -547,10 +583,13 @@ export function stateFromTV(T: number, v: number, out: WaterState): number {
     else region5(p, T, scratchB);
     return Math.log(scratchB.v) - Math.log(v);
   };
-  if (vAt(Math.log(pBottom)) < 0 || vAt(Math.log(pTop)) > 0) return STATUS.outOfRange;
-  const lnp = brentRoot(vAt, Math.log(pBottom), Math.log(pTop), 1e-15);
+  const fBottom = vAt(Math.log(pBottom));
+  const fTop = vAt(Math.log(pTop));
+  // ln v may miss by rounding at the ends of the span: accept 1e-12 there
+  if (fBottom < -1e-12 || fTop > 1e-12) return STATUS.outOfRange;
+  const lnp = fBottom <= 0 ? Math.log(pBottom) : fTop >= 0 ? Math.log(pTop) : brentRoot(vAt, Math.log(pBottom), Math.log(pTop), 1e-15);
   if (Number.isNaN(lnp)) return STATUS.noConvergence;
-  const p = Math.exp(lnp);
+  const p = Math.min(pTop, Math.max(pBottom, Math.exp(lnp)));
   if (region === 1) region1(p, T, out);
   else if (region === 2) region2(p, T, out);
   else region5(p, T, out);
