@@ -6,6 +6,11 @@ import { idealGas, incompressible, quantity } from '../src/index.js';
 import { enthalpyChange } from '../src/incompressible/model.js';
 import { lookupIncompressible } from '../src/incompressible/catalogue.js';
 import { fromSI, resolveUnit, toSI } from '../src/units/registry.js';
+import r1data from '../data/if97/region1.json';
+import { saturationAtP, stateFromHS, stateFromPH, stateFromPS, stateFromPT, WaterState } from '../src/water/if97/flash.js';
+import { WaterProperties } from '../src/water/if97/properties.js';
+import { region1 } from '../src/water/if97/region1.js';
+import { water } from '../src/water/index.js';
 
 export interface BenchCase {
   name: string;
@@ -27,7 +32,7 @@ export function sinkValue(): number {
 
 const psia = resolveUnit('psia');
 const kPa = resolveUnit('kPa');
-const water = incompressible('water');
+const liquidWater = incompressible('water');
 const waterModel = lookupIncompressible('water').model;
 const N = 1000;
 const temps = Float64Array.from({ length: N }, (_, i) => 280 + (i % 80));
@@ -45,7 +50,139 @@ function naiveCpR(T: number): number {
   return acc;
 }
 
+// water: a spread of liquid (region 1) and vapour (region 2) states
+const WN = 1000;
+const wp = new Float64Array(WN);
+const wT = new Float64Array(WN);
+const wh = new Float64Array(WN);
+const ws = new Float64Array(WN);
+{
+  const st = new WaterState();
+  for (let i = 0; i < WN; i++) {
+    const liquid = i % 2 === 0;
+    wp[i] = liquid ? 1e5 + ((i * 7919) % 997) * 5e4 : 1e4 + ((i * 104729) % 991) * 5e3;
+    wT[i] = liquid ? 280 + ((i * 31) % 70) : 480 + ((i * 17) % 500);
+    stateFromPT(wp[i]!, wT[i]!, st);
+    wh[i] = st.h;
+    ws[i] = st.s;
+  }
+}
+const wOut = new WaterState();
+const wProps = new WaterProperties();
+const satL = new WaterProperties();
+const satV = new WaterProperties();
+
+/** Naive baseline: region 1 with Math.pow per term, as often hand-written from the release's tables. */
+function naiveRegion1(p: number, T: number, out: WaterProperties): void {
+  const pi = p / 16.53e6;
+  const tau = 1386 / T;
+  let g = 0, gp = 0, gpp = 0, gt = 0, gtt = 0, gpt = 0;
+  for (let i = 0; i < r1data.n.length; i++) {
+    const n = r1data.n[i]!;
+    const I = r1data.I[i]!;
+    const J = r1data.J[i]!;
+    const a = 7.1 - pi;
+    const b = tau - 1.222;
+    g += n * Math.pow(a, I) * Math.pow(b, J);
+    gp += -n * I * Math.pow(a, I - 1) * Math.pow(b, J);
+    gpp += n * I * (I - 1) * Math.pow(a, I - 2) * Math.pow(b, J);
+    gt += n * Math.pow(a, I) * J * Math.pow(b, J - 1);
+    gtt += n * Math.pow(a, I) * J * (J - 1) * Math.pow(b, J - 2);
+    gpt += -n * I * Math.pow(a, I - 1) * J * Math.pow(b, J - 1);
+  }
+  const RT = 461.526 * T;
+  out.v = (pi * gp * RT) / p;
+  out.h = RT * tau * gt;
+  out.u = RT * (tau * gt - pi * gp);
+  out.s = 461.526 * (tau * gt - g);
+  out.cp = -461.526 * tau * tau * gtt;
+  const c = gp - tau * gpt;
+  out.cv = 461.526 * (-tau * tau * gtt + (c * c) / gpp);
+  out.w = Math.sqrt((RT * gp * gp) / ((c * c) / (tau * tau * gtt) - gpp));
+}
+
 export const cases: BenchCase[] = [
+  {
+    name: 'water: naive Math.pow region 1, full set (baseline)',
+    fn: () => {
+      for (let i = 0; i < WN; i += 2) {
+        naiveRegion1(wp[i]!, wT[i]!, wProps);
+        consume(wProps.h);
+      }
+    },
+    perCall: WN / 2,
+  },
+  {
+    name: 'water: region 1 (p, T) full set, core',
+    fn: () => {
+      for (let i = 0; i < WN; i += 2) {
+        region1(wp[i]!, wT[i]!, wProps);
+        consume(wProps.h);
+      }
+    },
+    perCall: WN / 2,
+    targetNs: 250,
+    baseline: 'water: naive Math.pow region 1, full set (baseline)',
+    baselinePerCall: WN / 2,
+  },
+  {
+    name: 'water: (p, T) full set with region selection, core (liquid and vapour)',
+    fn: () => {
+      for (let i = 0; i < WN; i++) {
+        stateFromPT(wp[i]!, wT[i]!, wOut);
+        consume(wOut.h);
+      }
+    },
+    perCall: WN,
+    targetNs: 250,
+  },
+  {
+    name: 'water: (p, h) flash, core',
+    fn: () => {
+      for (let i = 0; i < WN; i++) {
+        stateFromPH(wp[i]!, wh[i]!, wOut);
+        consume(wOut.T);
+      }
+    },
+    perCall: WN,
+    targetNs: 2000,
+  },
+  {
+    name: 'water: (p, s) flash, core',
+    fn: () => {
+      for (let i = 0; i < WN; i++) {
+        stateFromPS(wp[i]!, ws[i]!, wOut);
+        consume(wOut.T);
+      }
+    },
+    perCall: WN,
+    targetNs: 2000,
+  },
+  {
+    name: 'water: (h, s) flash, core',
+    fn: () => {
+      for (let i = 0; i < 50; i++) {
+        stateFromHS(wh[i]!, ws[i]!, wOut);
+        consume(wOut.p);
+      }
+    },
+    perCall: 50,
+    targetNs: 5000,
+  },
+  {
+    name: 'water: saturation at p, core',
+    fn: () => {
+      for (let i = 0; i < WN; i += 2) {
+        saturationAtP(1e3 + wp[i]! * 0.15, satL, satV);
+        consume(satV.h);
+      }
+    },
+    perCall: WN / 2,
+  },
+  {
+    name: 'water: water.state({ p, T }) facade with unit text',
+    fn: () => consume(water.state({ p: '10 MPa', T: '500 °C' }).h.si),
+  },
   {
     name: 'ideal gas: naive Math.pow cp(T) of N2 (baseline)',
     fn: () => {
@@ -111,6 +248,6 @@ export const cases: BenchCase[] = [
   },
   {
     name: 'incompressible: water.deltaH facade with unit text',
-    fn: () => consume(water.deltaH({ T: '20 °C', p: '1 bar' }, { T: '30 °C', p: '5 bar' }).si),
+    fn: () => consume(liquidWater.deltaH({ T: '20 °C', p: '1 bar' }, { T: '30 °C', p: '5 bar' }).si),
   },
 ];

@@ -3,7 +3,7 @@
  * Each value is marked with where it comes from; "from memory" means recalled from handbook
  * tables, not transcribed.
  */
-import { describe, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { gasConstant } from '../../src/chem/index.js';
 import { incompressible } from '../../src/incompressible/index.js';
 import { expectClose } from '../helpers/tolerance.js';
@@ -100,5 +100,47 @@ describe('ideal gases at 298.15 K without a JANAF table here: ΔfH°, S°, cp° 
     expectClose(g.h('298.15 K').in('kJ/mol'), fH, { abs: 1.5 });
     expectClose(g.sStandard('298.15 K').in('J/(mol·K)'), S, { rel: 2e-3 });
     expectClose(g.cp('298.15 K').in('J/(mol·K)'), cp, { rel: 1e-2 });
+  });
+});
+
+import { water } from '../../src/water/index.js';
+
+describe('steam tables (handbook values, from memory; IF97 agrees with the IAPWS-95-based tables to the last printed digit)', () => {
+  it('saturated water at 1 atm (14.696 psia): T = 211.95 °F, h_g = 1150.3 Btu/lbm, h_fg = 970.1 Btu/lbm, s_f = 0.3121, s_g = 1.7566 Btu/(lbm·°R), v_g = 26.80 ft³/lbm', () => {
+    const sat = water.saturation({ p: '14.695948775513449 psia' });
+    expectClose(sat.T.in('°F'), 211.95, { abs: 0.005 });
+    expectClose(sat.vapor.h.in('Btu/lbm'), 1150.3, { abs: 0.05 });
+    expectClose(sat.hfg.in('Btu/lbm'), 970.1, { abs: 0.05 });
+    expectClose(sat.liquid.s.in('Btu/(lbm·°R)'), 0.3121, { abs: 0.00005 });
+    expectClose(sat.vapor.s.in('Btu/(lbm·°R)'), 1.7566, { abs: 0.00005 });
+    expectClose(sat.vapor.v.in('ft³/lbm'), 26.8, { abs: 0.005 });
+  });
+  it('saturated water at 100 °C: p = 101.42 kPa, h_f = 419.10 kJ/kg, h_fg = 2256.5 kJ/kg, s_g = 7.3541 kJ/(kg·K)', () => {
+    const sat = water.saturation({ T: '100 °C' });
+    expectClose(sat.p.in('kPa'), 101.42, { abs: 0.005 });
+    expectClose(sat.liquid.h.in('kJ/kg'), 419.1, { abs: 0.005 });
+    expectClose(sat.hfg.in('kJ/kg'), 2256.5, { abs: 0.05 });
+    expectClose(sat.vapor.s.in('kJ/(kg·K)'), 7.3541, { abs: 0.0001 });
+  });
+  it('superheated steam at 100 psia, 500 °F: v = 5.5875 ft³/lbm, h = 1279.3 Btu/lbm, s = 1.7089 Btu/(lbm·°R)', () => {
+    const st = water.state({ p: '100 psia', T: '500 °F' });
+    expectClose(st.v.in('ft³/lbm'), 5.5875, { abs: 0.00005 });
+    expectClose(st.h.in('Btu/lbm'), 1279.3, { abs: 0.05 });
+    expectClose(st.s.in('Btu/(lbm·°R)'), 1.7089, { abs: 0.00005 });
+  });
+  it('superheated steam at 1 MPa, 300 °C: v = 0.25799 m³/kg, h = 3051.6 kJ/kg, s = 7.1246 kJ/(kg·K) (±1 in the last digit: tables from IAPWS-95)', () => {
+    const st = water.state({ p: '1 MPa', T: '300 °C' });
+    expectClose(st.v.in('m³/kg'), 0.25799, { abs: 0.000015 });
+    expectClose(st.h.in('kJ/kg'), 3051.6, { abs: 0.15 });
+    expectClose(st.s.in('kJ/(kg·K)'), 7.1246, { abs: 0.00015 });
+  });
+  it('compressed liquid at 500 psia, 200 °F: above h_f(200 °F), below h_f + v_f·(p − p_sat) since (∂h/∂p)_T = v(1 − βT) < v (common practice)', () => {
+    const st = water.state({ p: '500 psia', T: '200 °F' });
+    const sat = water.saturation({ T: '200 °F' });
+    expect(st.phase).toBe('liquid');
+    expectClose(sat.p.in('psia'), 11.538, { abs: 0.002 }); // saturation pressure at 200 °F, 11.538 psia (from memory)
+    expect(st.h.si).toBeGreaterThan(sat.liquid.h.si);
+    expect(st.h.si).toBeLessThan(sat.liquid.h.si + sat.liquid.v.si * (st.p.si - sat.p.si));
+    expectClose(st.v.in('ft³/lbm'), 0.01661, { abs: 0.00001 }); // v ≈ 0.01661 ft³/lbm (from memory)
   });
 });

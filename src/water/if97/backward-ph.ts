@@ -6,19 +6,14 @@
  *
  * @module
  */
-import data1 from '../../../data/if97/backward-region1.json';
 import data2 from '../../../data/if97/backward-region2.json';
-import { compileTerms, sumValue } from './terms.js';
+import { backward1PH, backward2aPH, backward2bPH, backward2cPH } from './kernels.generated.js';
 
-const R1 = compileTerms(data1.ph.I, data1.ph.J, data1.ph.n);
-const R2A = compileTerms(data2.ph2a.I, data2.ph2a.J, data2.ph2a.n);
-const R2B = compileTerms(data2.ph2b.I, data2.ph2b.J, data2.ph2b.n);
-const R2C = compileTerms(data2.ph2c.I, data2.ph2c.J, data2.ph2c.n);
 const [b1, b2, b3, b4, b5] = data2.b2bc as [number, number, number, number, number];
 
 /** Region 1: T(p, h) in K, p in Pa, h in J/kg (Eq. 11). */
 export function region1TemperaturePH(p: number, h: number): number {
-  return sumValue(R1, p / 1e6, h / 2500e3 + 1);
+  return backward1PH(p / 1e6, h / 2500e3 + 1);
 }
 
 /** B2bc: pressure on the 2b/2c boundary at h (J/kg), in Pa (Eq. 20). */
@@ -36,7 +31,7 @@ export function b2bcEnthalpy(p: number): number {
 export function region2TemperaturePH(p: number, h: number): number {
   const pi = p / 1e6;
   const eta = h / 2000e3;
-  if (p <= 4e6) return sumValue(R2A, pi, eta - 2.1);
-  if (h >= b2bcEnthalpy(p)) return sumValue(R2B, pi - 2, eta - 2.6);
-  return sumValue(R2C, pi + 25, eta - 1.8);
+  if (p <= 4e6) return backward2aPH(pi, eta - 2.1);
+  if (h >= b2bcEnthalpy(p)) return backward2bPH(pi - 2, eta - 2.6);
+  return backward2cPH(pi + 25, eta - 1.8);
 }

@@ -9,9 +9,8 @@
 import data from '../../../data/if97/region1.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { compileTerms, sumTerms } from './terms.js';
+import { region1Sums } from './kernels.generated.js';
 
-const TERMS = compileTerms(data.I, data.J, data.n);
 const P_STAR = data.pStar;
 const T_STAR = data.TStar;
 const g = new Float64Array(6);
@@ -20,7 +19,7 @@ const g = new Float64Array(6);
 export function region1(p: number, T: number, out: WaterProperties): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
-  sumTerms(TERMS, 7.1 - pi, tau - 1.222, g);
+  region1Sums(7.1 - pi, tau - 1.222, g);
   const gamma = g[0]!;
   const gPi = -g[1]!;
   const gPiPi = g[2]!;
@@ -45,7 +44,7 @@ export function region1(p: number, T: number, out: WaterProperties): WaterProper
 /** Specific enthalpy h(p, T) in J/kg and cp in J/(kg·K) from region 1, written to out.h and out.cp only. */
 export function region1HCp(p: number, T: number, out: WaterProperties): void {
   const tau = T_STAR / T;
-  sumTerms(TERMS, 7.1 - p / P_STAR, tau - 1.222, g);
+  region1Sums(7.1 - p / P_STAR, tau - 1.222, g);
   out.h = R_IF97 * T * tau * g[3]!;
   out.cp = -R_IF97 * tau * tau * g[4]!;
 }
@@ -53,7 +52,7 @@ export function region1HCp(p: number, T: number, out: WaterProperties): void {
 /** Specific entropy s(p, T) in J/(kg·K) and cp in J/(kg·K), written to out.s and out.cp only. */
 export function region1SCp(p: number, T: number, out: WaterProperties): void {
   const tau = T_STAR / T;
-  sumTerms(TERMS, 7.1 - p / P_STAR, tau - 1.222, g);
+  region1Sums(7.1 - p / P_STAR, tau - 1.222, g);
   out.s = R_IF97 * (tau * g[3]! - g[0]!);
   out.cp = -R_IF97 * tau * tau * g[4]!;
 }

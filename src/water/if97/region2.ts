@@ -12,36 +12,45 @@
 import data from '../../../data/if97/region2.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { compileTerms, fillLadder, sumTerms, type TermSet } from './terms.js';
+import { region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
 
-const RESIDUAL = compileTerms(data.I, data.J, data.n);
-const META = compileTerms(data.metastable.I, data.metastable.J, data.metastable.n);
 const J0 = Int32Array.from(data.J0);
 const N0 = Float64Array.from(data.n0);
 const N0_META = Float64Array.from(data.n0, (v, i) => (i === 0 ? data.metastable.n0_1 : i === 1 ? data.metastable.n0_2 : v));
 const P_STAR = data.pStar;
 const T_STAR = data.TStar;
-const J0_MIN = -7;
-const ladder0 = new Float64Array(3 - J0_MIN + 1);
 const r = new Float64Array(6);
 
-function evaluate(p: number, T: number, out: WaterProperties, residual: TermSet, n0: Float64Array): WaterProperties {
+/** x^k for a small integer k (the ideal-gas parts' exponents, −5 … 3). */
+export function powInt(x: number, k: number): number {
+  let b = k < 0 ? 1 / x : x;
+  let e = k < 0 ? -k : k;
+  let acc = 1;
+  while (e > 0) {
+    if (e & 1) acc *= b;
+    b *= b;
+    e >>= 1;
+  }
+  return acc;
+}
+
+function evaluate(p: number, T: number, out: WaterProperties, residual: (x: number, y: number, out: Float64Array) => void, n0: Float64Array): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
   // ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ
-  fillLadder(ladder0, J0_MIN, tau);
   let g0 = Math.log(pi);
   let g0Tau = 0;
   let g0TauTau = 0;
-  const off = -J0_MIN;
   for (let i = 0; i < J0.length; i++) {
     const J = J0[i]!;
-    const n = n0[i]!;
-    g0 += n * ladder0[off + J]!;
-    g0Tau += n * J * ladder0[off + J - 1]!;
-    g0TauTau += n * J * (J - 1) * ladder0[off + J - 2]!;
+    const t = n0[i]! * powInt(tau, J);
+    g0 += t;
+    g0Tau += J * t;
+    g0TauTau += J * (J - 1) * t;
   }
-  sumTerms(residual, pi, tau - 0.5, r);
+  g0Tau /= tau;
+  g0TauTau /= tau * tau;
+  residual(pi, tau - 0.5, r);
   const gr = r[0]!;
   const grPi = r[1]!;
   const grPiPi = r[2]!;
@@ -70,7 +79,7 @@ function evaluate(p: number, T: number, out: WaterProperties, residual: TermSet,
 
 /** Fills `out` with all properties at (p [Pa], T [K]) from the region 2 equation. */
 export function region2(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, RESIDUAL, N0);
+  return evaluate(p, T, out, region2ResidualSums, N0);
 }
 
 /**
@@ -78,5 +87,5 @@ export function region2(p: number, T: number, out: WaterProperties): WaterProper
  * to the 5 % equilibrium-moisture line for 0 < p ≤ 10 MPa.
  */
 export function region2Metastable(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, META, N0_META);
+  return evaluate(p, T, out, region2MetastableSums, N0_META);
 }

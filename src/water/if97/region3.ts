@@ -9,9 +9,8 @@
 import data from '../../../data/if97/region3.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { compileTerms, sumTerms } from './terms.js';
+import { region3Sums } from './kernels.generated.js';
 
-const TERMS = compileTerms(data.I, data.J, data.n);
 const N1 = data.n1;
 const RHO_STAR = data.rhoStar;
 const T_STAR = data.TStar;
@@ -21,7 +20,7 @@ const f = new Float64Array(6);
 export function region3(rho: number, T: number, out: WaterProperties): WaterProperties {
   const delta = rho / RHO_STAR;
   const tau = T_STAR / T;
-  sumTerms(TERMS, delta, tau, f);
+  region3Sums(delta, tau, f);
   const phi = N1 * Math.log(delta) + f[0]!;
   const pD = N1 / delta + f[1]!;
   const pDD = -N1 / (delta * delta) + f[2]!;
@@ -50,7 +49,7 @@ export function region3(rho: number, T: number, out: WaterProperties): WaterProp
  */
 export function region3Pressure(rho: number, T: number, out: Float64Array): void {
   const delta = rho / RHO_STAR;
-  sumTerms(TERMS, delta, T_STAR / T, f);
+  region3Sums(delta, T_STAR / T, f);
   const pD = N1 / delta + f[1]!;
   const pDD = -N1 / (delta * delta) + f[2]!;
   const RT = R_IF97 * T;

@@ -9,34 +9,32 @@
 import data from '../../../data/if97/region5.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { compileTerms, fillLadder, sumTerms } from './terms.js';
+import { region5ResidualSums } from './kernels.generated.js';
+import { powInt } from './region2.js';
 
-const RESIDUAL = compileTerms(data.I, data.J, data.n);
 const J0 = Int32Array.from(data.J0);
 const N0 = Float64Array.from(data.n0);
 const P_STAR = data.pStar;
 const T_STAR = data.TStar;
-const J0_MIN = -5;
-const ladder0 = new Float64Array(2 - J0_MIN + 1);
 const r = new Float64Array(6);
 
 /** Fills `out` with all properties at (p [Pa], T [K]) from the region 5 equation. */
 export function region5(p: number, T: number, out: WaterProperties): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
-  fillLadder(ladder0, J0_MIN, tau);
   let g0 = Math.log(pi);
   let g0Tau = 0;
   let g0TauTau = 0;
-  const off = -J0_MIN;
   for (let i = 0; i < J0.length; i++) {
     const J = J0[i]!;
-    const n = N0[i]!;
-    g0 += n * ladder0[off + J]!;
-    g0Tau += n * J * ladder0[off + J - 1]!;
-    g0TauTau += n * J * (J - 1) * ladder0[off + J - 2]!;
+    const t = N0[i]! * powInt(tau, J);
+    g0 += t;
+    g0Tau += J * t;
+    g0TauTau += J * (J - 1) * t;
   }
-  sumTerms(RESIDUAL, pi, tau, r);
+  g0Tau /= tau;
+  g0TauTau /= tau * tau;
+  region5ResidualSums(pi, tau, r);
   const grPi = r[1]!;
   const grPiPi = r[2]!;
   const grPiTau = r[5]!;

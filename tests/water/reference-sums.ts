@@ -1,6 +1,6 @@
 /**
- * The shared term kernel of the IF97 basic and backward equations: sums of nᵢ·xᴵⁱ·yᴶⁱ and their
- * first and second derivatives, from precomputed power ladders (no Math.pow per term, no allocation).
+ * A plain loop evaluation of IF97 term sums nᵢ·xᴵⁱ·yᴶⁱ and their derivatives: the test oracle for the
+ * generated straight-line kernels (src/water/if97/kernels.generated.ts), from power ladders.
  *
  * @module
  */
@@ -17,7 +17,7 @@ export interface TermSet {
   readonly nJ: Float64Array;
   readonly nJJ: Float64Array;
   readonly nIJ: Float64Array;
-  /** Lowest exponent stored in the ladders (min − 2) and ladder lengths. */
+  /** Lowest exponent stored in the ladders, and the ladders. */
   readonly xMin: number;
   readonly yMin: number;
   readonly xLadder: Float64Array;
@@ -27,10 +27,10 @@ export interface TermSet {
 /** Compiles integer-exponent terms. */
 export function compileTerms(I: readonly number[], J: readonly number[], n: readonly number[]): TermSet {
   const count = n.length;
-  const xMin = Math.min(...I) - 2;
-  const yMin = Math.min(...J) - 2;
-  const xMax = Math.max(...I);
-  const yMax = Math.max(...J);
+  const xMin = Math.min(0, ...I);
+  const yMin = Math.min(0, ...J);
+  const xMax = Math.max(0, ...I);
+  const yMax = Math.max(0, ...J);
   const t: TermSet = {
     count,
     I: Int32Array.from(I),
@@ -61,6 +61,8 @@ export function fillLadder(ladder: Float64Array, min: number, x: number): void {
 /**
  * The sums of a term set at (x, y), written to out[0..5]:
  * S = Σ n xᴵ yᴶ, Sx = ∂S/∂x, Sxx, Sy, Syy, Sxy.
+ * Each term's xᴵ·yᴶ is formed once; the derivative sums use n·I, n·I·(I−1), … and are divided by
+ * x, x², y, y², x·y at the end (x, y ≠ 0 everywhere IF97 uses them).
  */
 export function sumTerms(t: TermSet, x: number, y: number, out: Float64Array): void {
   const xl = t.xLadder;
@@ -75,26 +77,25 @@ export function sumTerms(t: TermSet, x: number, y: number, out: Float64Array): v
   let sxy = 0;
   const xo = -t.xMin;
   const yo = -t.yMin;
+  const I = t.I;
+  const J = t.J;
   for (let i = 0; i < t.count; i++) {
-    const a = xo + t.I[i]!;
-    const b = yo + t.J[i]!;
-    const xa = xl[a]!;
-    const xa1 = xl[a - 1]!;
-    const yb = yl[b]!;
-    const yb1 = yl[b - 1]!;
-    s += t.n[i]! * xa * yb;
-    sx += t.nI[i]! * xa1 * yb;
-    sxx += t.nII[i]! * xl[a - 2]! * yb;
-    sy += t.nJ[i]! * xa * yb1;
-    syy += t.nJJ[i]! * xa * yl[b - 2]!;
-    sxy += t.nIJ[i]! * xa1 * yb1;
+    const v = xl[xo + I[i]!]! * yl[yo + J[i]!]!;
+    s += t.n[i]! * v;
+    sx += t.nI[i]! * v;
+    sxx += t.nII[i]! * v;
+    sy += t.nJ[i]! * v;
+    syy += t.nJJ[i]! * v;
+    sxy += t.nIJ[i]! * v;
   }
+  const ix = 1 / x;
+  const iy = 1 / y;
   out[0] = s;
-  out[1] = sx;
-  out[2] = sxx;
-  out[3] = sy;
-  out[4] = syy;
-  out[5] = sxy;
+  out[1] = sx * ix;
+  out[2] = sxx * ix * ix;
+  out[3] = sy * iy;
+  out[4] = syy * iy * iy;
+  out[5] = sxy * ix * iy;
 }
 
 /** Σ n xᴵ yᴶ only (for backward equations). */
