@@ -87,6 +87,21 @@ function sumsFunction(fn: string, doc: string, t: Terms): string {
   return lines.join('\n');
 }
 
+/** A function filling out[0..2] with G = Σ n τᴶ, Gτ and Gττ (the ideal-gas parts of regions 2 and 5). */
+function idealFunction(fn: string, doc: string, J: number[], n: number[]): string {
+  const lines: string[] = [];
+  lines.push(`/** ${doc} */`);
+  lines.push(`export function ${fn}(y: number, out: Float64Array): void {`);
+  lines.push('  const iy = 1 / y;');
+  for (const l of powerChain('y', J)) lines.push(`  ${l}`);
+  const terms = J.map((j) => product(0, j));
+  lines.push(`  out[0] =\n    ${sum(n, terms)};`);
+  lines.push(`  out[1] =\n    (${sum(n.map((c, i) => c * J[i]!), terms)}) * iy;`);
+  lines.push(`  out[2] =\n    (${sum(n.map((c, i) => c * J[i]! * (J[i]! - 1)), terms)}) * iy * iy;`);
+  lines.push('}');
+  return lines.join('\n');
+}
+
 /** A function returning S = Σ n xᴵ yᴶ only. */
 function valueFunction(fn: string, doc: string, t: Terms): string {
   const lines: string[] = [];
@@ -103,9 +118,9 @@ function valueFunction(fn: string, doc: string, t: Terms): string {
 
 export function renderKernels(): string {
   const r1 = read('region1') as unknown as Terms;
-  const r2 = read('region2') as unknown as Terms & { metastable: Terms };
+  const r2 = read('region2') as unknown as Terms & { metastable: Terms; J0: number[]; n0: number[] };
   const r3 = read('region3') as unknown as Terms;
-  const r5 = read('region5') as unknown as Terms;
+  const r5 = read('region5') as unknown as Terms & { J0: number[]; n0: number[] };
   const b1 = read('backward-region1') as unknown as { ph: Terms; ps: Terms };
   const b2 = read('backward-region2') as unknown as Record<string, Terms>;
   const quarter = (t: Terms): Terms => ({ I: t.I.map((i) => Math.round(4 * i)), J: t.J, n: t.n });
@@ -115,11 +130,15 @@ export function renderKernels(): string {
     '',
     sumsFunction('region1Sums', 'Region 1 (Table 2): x = 7.1 − π, y = τ − 1.222.', r1),
     '',
+    idealFunction('region2IdealSums', 'Region 2 ideal-gas part (Table 10) without ln π: y = τ.', r2.J0, r2.n0),
+    '',
     sumsFunction('region2ResidualSums', 'Region 2 residual part (Table 11): x = π, y = τ − 0.5.', r2),
     '',
     sumsFunction('region2MetastableSums', 'Metastable-vapour residual part (Table 16): x = π, y = τ − 0.5.', r2.metastable),
     '',
     sumsFunction('region3Sums', 'Region 3 (Table 30, without the n1·ln δ term): x = δ, y = τ.', r3),
+    '',
+    idealFunction('region5IdealSums', 'Region 5 ideal-gas part (Table 37) without ln π: y = τ.', r5.J0, r5.n0),
     '',
     sumsFunction('region5ResidualSums', 'Region 5 residual part (Table 38): x = π, y = τ.', r5),
     '',

@@ -307,30 +307,24 @@ function valueOf(props: WaterProperties, by: number): number {
 
 /**
  * Newton polish of T at fixed p in region 1, 2 or 5 so that h (or s) matches `target`:
- * dh/dT = cp, ds/dT = cp/T. Kept inside [Tlo, Thi].
+ * dh/dT = cp, ds/dT = cp/T. Kept inside [Tlo, Thi]. Returns the state at the last evaluated T once
+ * the next step is below 1e-13·T; a step pinned at a bound without a match is not a solution.
  */
 function polishT(region: number, p: number, target: number, by: number, T0: number, Tlo: number, Thi: number, out: WaterState): number {
   let T = Math.min(Thi, Math.max(Tlo, T0));
   for (let i = 0; i < 30; i++) {
-    if (region === 1) {
-      if (by === BY_H) region1HCp(p, T, scratch);
-      else region1SCp(p, T, scratch);
-    } else if (region === 2) region2(p, T, scratch);
-    else region5(p, T, scratch);
-    const f = valueOf(scratch, by) - target;
-    const slope = by === BY_H ? scratch.cp : scratch.cp / T;
-    let next = T - f / slope;
-    if (!(next >= Tlo)) next = 0.5 * (T + Tlo);
-    if (!(next <= Thi)) next = 0.5 * (T + Thi);
-    if (Math.abs(next - T) <= 1e-13 * T) {
-      T = next;
-      if (region === 1) region1(p, T, out);
-      else if (region === 2) region2(p, T, out);
-      else region5(p, T, out);
-      // a step pinned at a bound converges without matching: never report that as a state
-      if (Math.abs(valueOf(out, by) - target) > 1e-9 * Math.abs(target) + 1e-9) return STATUS.noConvergence;
+    if (region === 1) region1(p, T, out);
+    else if (region === 2) region2(p, T, out);
+    else region5(p, T, out);
+    const f = valueOf(out, by) - target;
+    const step = by === BY_H ? f / out.cp : (f * T) / out.cp;
+    if (Math.abs(step) <= 1e-13 * T) {
       return finish(out, region);
     }
+    let next = T - step;
+    if (!(next >= Tlo)) next = 0.5 * (T + Tlo);
+    if (!(next <= Thi)) next = 0.5 * (T + Thi);
+    if (next === T) return STATUS.noConvergence; // pinned at a bound: no solution inside
     T = next;
   }
   return STATUS.noConvergence;
@@ -381,46 +375,59 @@ function solveRegion3(p: number, target: number, by: number, Tlo: number, Thi: n
   return finish(out, 3);
 }
 
+function backwardRegion1(p: number, target: number, by: number): number {
+  return by === BY_H ? region1TemperaturePH(p, target) : region1TemperaturePS(p, target);
+}
+
+function backwardRegion2(p: number, target: number, by: number): number {
+  return by === BY_H ? region2TemperaturePH(p, target) : region2TemperaturePS(p, target);
+}
+
+/**
+ * The gas side above the liquid, saturation and region 3: regions 2 and 5, from Tlo up. `below`
+ * lets region 2 reach a few kelvin under Tlo, for targets in the small gap IF97 leaves at the B23 line.
+ */
+function gasSide(p: number, target: number, by: number, Tlo: number, below: number, out: WaterState): number {
+  const v2max = valueAt(2, p, T_MAX_2, by);
+  if (target <= v2max) {
+    const floor = Tlo - below;
+    const vlo = valueAt(2, p, floor, by);
+    if (target < vlo - 1e-12 * Math.abs(vlo) - 1e-9) return STATUS.outOfRange;
+    return polishT(2, p, target, by, backwardRegion2(p, target, by), floor, T_MAX_2, out);
+  }
+  if (p > P_MAX_5) return STATUS.outOfRange;
+  const v5max = valueAt(5, p, T_MAX_5, by);
+  if (target > v5max) return STATUS.outOfRange;
+  const v5min = valueAt(5, p, T_MAX_2, by);
+  // a linear first guess between the region 5 end values; region 5 may reach a few kelvin under
+  // 1073.15 K for targets in the gap between the region 2 and 5 values there
+  const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
+  return polishT(5, p, target, by, T0, T_MAX_2 - 5, T_MAX_5, out);
+}
+
 /**
  * The state at p (Pa) with enthalpy h (J/kg, by = 0) or entropy s (J/(kg·K), by = 1).
  */
 function stateFromPAnd(p: number, target: number, by: number, out: WaterState): number {
   if (!Number.isFinite(p) || !Number.isFinite(target)) return STATUS.invalidInput;
   if (!(p > 0 && p <= P_MAX)) return STATUS.outOfRange;
-  const backward1 = by === BY_H ? region1TemperaturePH : region1TemperaturePS;
-  const backward2 = by === BY_H ? region2TemperaturePH : region2TemperaturePS;
-
-  // the gas side above the liquid, saturation and region 3: regions 2 and 5. `below` lets region 2
-  // reach a few kelvin under Tlo, for targets in the small gap IF97 leaves at the B23 line.
-  const gasSide = (Tlo: number, below: number): number => {
-    const v2max = valueAt(2, p, T_MAX_2, by);
-    if (target <= v2max) {
-      const floor = Tlo - below;
-      const vlo = valueAt(2, p, floor, by);
-      if (target < vlo - 1e-12 * Math.abs(vlo) - 1e-9) return STATUS.outOfRange;
-      return polishT(2, p, target, by, backward2(p, target), floor, T_MAX_2, out);
-    }
-    if (p > P_MAX_5) return STATUS.outOfRange;
-    const v5max = valueAt(5, p, T_MAX_5, by);
-    if (target > v5max) return STATUS.outOfRange;
-    const v5min = valueAt(5, p, T_MAX_2, by);
-    // a linear first guess between the region 5 end values; region 5 may reach a few kelvin under
-    // 1073.15 K for targets in the gap between the region 2 and 5 values there
-    const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
-    return polishT(5, p, target, by, T0, T_MAX_2 - 5, T_MAX_5, out);
-  };
-
-  if (p < P_SAT_MIN) {
-    // below the triple-point pressure every state in range is vapour
-    return gasSide(T_MIN, 0);
-  }
-  const vMin = valueAt(1, p, T_MIN, by);
-  if (target < vMin - 1e-12 * Math.abs(vMin) - 1e-9) return STATUS.outOfRange;
+  // below the triple-point pressure every state in range is vapour
+  if (p < P_SAT_MIN) return gasSide(p, target, by, T_MIN, 0, out);
 
   if (p <= P_SAT_13) {
     const Ts = saturationTemperature(p);
+    // fast paths: the backward equations are within 25 mK of the true temperature in their regions
+    // (IF97 Sections 5.2 and 6.3), so a guess 0.1 K clear of T_s settles the phase once the polish
+    // converges inside [273.15 K, T_s] or [T_s, 1073.15 K]
+    const T1 = backwardRegion1(p, target, by);
+    if (T1 < Ts - 0.1 && T1 > T_MIN && polishT(1, p, target, by, T1, T_MIN, Ts, out) === STATUS.ok) return STATUS.ok;
+    const T2 = backwardRegion2(p, target, by);
+    if (T2 > Ts + 0.1 && T2 < T_MAX_2 && polishT(2, p, target, by, T2, Ts, T_MAX_2, out) === STATUS.ok) return STATUS.ok;
+    // near the dome, near the range limits, or in it: decide by the saturated and limiting values
+    const vMin = valueAt(1, p, T_MIN, by);
+    if (target < vMin - 1e-12 * Math.abs(vMin) - 1e-9) return STATUS.outOfRange;
     const liquidEnd = valueAt(1, p, Ts, by);
-    if (target <= liquidEnd) return polishT(1, p, target, by, backward1(p, target), T_MIN, Ts, out);
+    if (target <= liquidEnd) return polishT(1, p, target, by, T1, T_MIN, Ts, out);
     const vaporEnd = valueAt(2, p, Ts, by);
     if (target < vaporEnd) {
       region1(p, Ts, scratch);
@@ -428,11 +435,13 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
       const x = (target - valueOf(scratch, by)) / (valueOf(scratchB, by) - valueOf(scratch, by));
       return mix(x, scratch, scratchB, out);
     }
-    return gasSide(Ts, 0);
+    return gasSide(p, target, by, Ts, 0, out);
   }
 
+  const vMin = valueAt(1, p, T_MIN, by);
+  if (target < vMin - 1e-12 * Math.abs(vMin) - 1e-9) return STATUS.outOfRange;
   const end1 = valueAt(1, p, T_13, by);
-  if (target <= end1) return polishT(1, p, target, by, backward1(p, target), T_MIN, T_13, out);
+  if (target <= end1) return polishT(1, p, target, by, backwardRegion1(p, target, by), T_MIN, T_13, out);
   if (p < P_CRITICAL) {
     const Ts = saturationTemperature(p);
     const liq = satLiquid;
@@ -445,12 +454,12 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
     // region 3 owns T ≤ T_B23(p): divide by its value there (IF97's regions differ slightly on the line)
     if (!region3At(p, TB, 2, scratchB)) return STATUS.noConvergence;
     if (target <= valueOf(scratchB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out);
-    return gasSide(TB, 5);
+    return gasSide(p, target, by, TB, 5, out);
   }
   const TB = b23Temperature(p);
   if (!region3At(p, TB, 0, scratchB)) return STATUS.noConvergence;
   if (target <= valueOf(scratchB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out);
-  return gasSide(TB, 5);
+  return gasSide(p, target, by, TB, 5, out);
 }
 
 /** The state at p (Pa) and specific enthalpy h (J/kg). */

@@ -246,6 +246,44 @@ export function region1Sums(x: number, y: number, out: Float64Array): void {
     1.227206585277049e-22 * t33) * ix * iy;
 }
 
+/** Region 2 ideal-gas part (Table 10) without ln π: y = τ. */
+export function region2IdealSums(y: number, out: Float64Array): void {
+  const iy = 1 / y;
+  const ym2 = iy * iy;
+  const y2 = y * y;
+  const ym3 = ym2 * iy;
+  const y3 = y2 * y;
+  const ym4 = ym3 * iy;
+  const ym5 = ym4 * iy;
+  out[0] =
+    -9.6927686500217 * 1 +
+    10.086655968018 * y +
+    -0.005608791128302 * ym5 +
+    0.071452738081455 * ym4 +
+    -0.40710498223928 * ym3 +
+    1.4240819171444 * ym2 +
+    -4.383951131945 * iy +
+    -0.28408632460772 * y2 +
+    0.021268463753307 * y3;
+  out[1] =
+    (10.086655968018 * y +
+    0.02804395564151 * ym5 +
+    -0.28581095232582 * ym4 +
+    1.22131494671784 * ym3 +
+    -2.8481638342888 * ym2 +
+    4.383951131945 * iy +
+    -0.56817264921544 * y2 +
+    0.063805391259921 * y3) * iy;
+  out[2] =
+    (-0.16826373384906002 * ym5 +
+    1.4290547616291 * ym4 +
+    -4.88525978687136 * ym3 +
+    8.5444915028664 * ym2 +
+    -8.76790226389 * iy +
+    -0.56817264921544 * y2 +
+    0.127610782519842 * y3) * iy * iy;
+}
+
 /** Region 2 residual part (Table 11): x = π, y = τ − 0.5. */
 export function region2ResidualSums(x: number, y: number, out: Float64Array): void {
   const ix = 1 / x;
@@ -951,6 +989,32 @@ export function region3Sums(x: number, y: number, out: Float64Array): void {
     0.7560283700668373 * t35 +
     -0.0016557679795037 * t37 +
     -0.012848235131679087 * t38) * ix * iy;
+}
+
+/** Region 5 ideal-gas part (Table 37) without ln π: y = τ. */
+export function region5IdealSums(y: number, out: Float64Array): void {
+  const iy = 1 / y;
+  const ym2 = iy * iy;
+  const y2 = y * y;
+  const ym3 = ym2 * iy;
+  out[0] =
+    -13.179983674201 * 1 +
+    6.8540841634434 * y +
+    -0.024805148933466 * ym3 +
+    0.36901534980333 * ym2 +
+    -3.1161318213925 * iy +
+    -0.32961626538917 * y2;
+  out[1] =
+    (6.8540841634434 * y +
+    0.07441544680039801 * ym3 +
+    -0.73803069960666 * ym2 +
+    3.1161318213925 * iy +
+    -0.65923253077834 * y2) * iy;
+  out[2] =
+    (-0.29766178720159203 * ym3 +
+    2.21409209881998 * ym2 +
+    -6.232263642785 * iy +
+    -0.65923253077834 * y2) * iy * iy;
 }
 
 /** Region 5 residual part (Table 38): x = π, y = τ. */

@@ -12,45 +12,31 @@
 import data from '../../../data/if97/region2.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
+import { region2IdealSums, region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
 
-const J0 = Int32Array.from(data.J0);
-const N0 = Float64Array.from(data.n0);
-const N0_META = Float64Array.from(data.n0, (v, i) => (i === 0 ? data.metastable.n0_1 : i === 1 ? data.metastable.n0_2 : v));
 const P_STAR = data.pStar;
 const T_STAR = data.TStar;
+// the metastable-vapour equation replaces n°1 and n°2 (the τ⁰ and τ¹ terms) of the ideal-gas part
+const META_DN1 = data.metastable.n0_1 - data.n0[0]!;
+const META_DN2 = data.metastable.n0_2 - data.n0[1]!;
+const g = new Float64Array(3);
 const r = new Float64Array(6);
 
-/** x^k for a small integer k (the ideal-gas parts' exponents, −5 … 3). */
-export function powInt(x: number, k: number): number {
-  let b = k < 0 ? 1 / x : x;
-  let e = k < 0 ? -k : k;
-  let acc = 1;
-  while (e > 0) {
-    if (e & 1) acc *= b;
-    b *= b;
-    e >>= 1;
-  }
-  return acc;
-}
-
-function evaluate(p: number, T: number, out: WaterProperties, residual: (x: number, y: number, out: Float64Array) => void, n0: Float64Array): WaterProperties {
+function evaluate(p: number, T: number, out: WaterProperties, metastable: boolean): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
   // ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ
-  let g0 = Math.log(pi);
-  let g0Tau = 0;
-  let g0TauTau = 0;
-  for (let i = 0; i < J0.length; i++) {
-    const J = J0[i]!;
-    const t = n0[i]! * powInt(tau, J);
-    g0 += t;
-    g0Tau += J * t;
-    g0TauTau += J * (J - 1) * t;
+  region2IdealSums(tau, g);
+  let g0 = Math.log(pi) + g[0]!;
+  let g0Tau = g[1]!;
+  const g0TauTau = g[2]!;
+  if (metastable) {
+    g0 += META_DN1 + META_DN2 * tau;
+    g0Tau += META_DN2;
+    region2MetastableSums(pi, tau - 0.5, r);
+  } else {
+    region2ResidualSums(pi, tau - 0.5, r);
   }
-  g0Tau /= tau;
-  g0TauTau /= tau * tau;
-  residual(pi, tau - 0.5, r);
   const gr = r[0]!;
   const grPi = r[1]!;
   const grPiPi = r[2]!;
@@ -79,7 +65,7 @@ function evaluate(p: number, T: number, out: WaterProperties, residual: (x: numb
 
 /** Fills `out` with all properties at (p [Pa], T [K]) from the region 2 equation. */
 export function region2(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, region2ResidualSums, N0);
+  return evaluate(p, T, out, false);
 }
 
 /**
@@ -87,5 +73,5 @@ export function region2(p: number, T: number, out: WaterProperties): WaterProper
  * to the 5 % equilibrium-moisture line for 0 < p ≤ 10 MPa.
  */
 export function region2Metastable(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, region2MetastableSums, N0_META);
+  return evaluate(p, T, out, true);
 }

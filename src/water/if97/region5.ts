@@ -9,31 +9,21 @@
 import data from '../../../data/if97/region5.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { region5ResidualSums } from './kernels.generated.js';
-import { powInt } from './region2.js';
+import { region5IdealSums, region5ResidualSums } from './kernels.generated.js';
 
-const J0 = Int32Array.from(data.J0);
-const N0 = Float64Array.from(data.n0);
 const P_STAR = data.pStar;
 const T_STAR = data.TStar;
+const g = new Float64Array(3);
 const r = new Float64Array(6);
 
 /** Fills `out` with all properties at (p [Pa], T [K]) from the region 5 equation. */
 export function region5(p: number, T: number, out: WaterProperties): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;
-  let g0 = Math.log(pi);
-  let g0Tau = 0;
-  let g0TauTau = 0;
-  for (let i = 0; i < J0.length; i++) {
-    const J = J0[i]!;
-    const t = N0[i]! * powInt(tau, J);
-    g0 += t;
-    g0Tau += J * t;
-    g0TauTau += J * (J - 1) * t;
-  }
-  g0Tau /= tau;
-  g0TauTau /= tau * tau;
+  region5IdealSums(tau, g);
+  const g0 = Math.log(pi) + g[0]!;
+  const g0Tau = g[1]!;
+  const g0TauTau = g[2]!;
   region5ResidualSums(pi, tau, r);
   const grPi = r[1]!;
   const grPiPi = r[2]!;
