@@ -152,3 +152,31 @@ describe('Section 4: the B23 check value', () => {
     nine(b23Temperature(0.165291643e2 * 1e6), 0.62315e3);
   });
 });
+
+import { region1PressureHS, region2PressureHS } from '../../src/water/if97/backward-hs.js';
+
+/**
+ * IAPWS SR2-01(2014), Revised Supplementary Release on Backward Equations p(h, s) for Regions 1 and 2:
+ * verification Tables 3 (region 1) and 10 (regions 2a, 2b, 2c), to the printed 10 significant digits.
+ */
+describe('SR2-01 Table 3: region 1 p(h, s)', () => {
+  it.each([
+    [0.001, 0, 9.800980612e-4],
+    [90, 0, 9.192954727e1],
+    [1500, 3.4, 5.868294423e1],
+  ])('h = %d kJ/kg, s = %d kJ/(kg·K)', (h, s, p) => expectClose(region1PressureHS(h * 1e3, s * 1e3) / 1e6, p, { rel: 5.0001e-10 }));
+});
+
+describe('SR2-01 Table 10: region 2 p(h, s)', () => {
+  it.each([
+    [2800, 6.5, 1.371012767],
+    [2800, 9.5, 1.879743844e-3],
+    [4100, 9.5, 1.024788997e-1],
+    [2800, 6, 4.793911442],
+    [3600, 6, 8.395519209e1],
+    [3600, 7, 7.527161441],
+    [2800, 5.1, 9.439202060e1],
+    [2800, 5.8, 8.414574124],
+    [3400, 5.8, 8.376903879e1],
+  ])('h = %d kJ/kg, s = %d kJ/(kg·K)', (h, s, p) => expectClose(region2PressureHS(h * 1e3, s * 1e3) / 1e6, p, { rel: 5.0001e-10 }));
+});

@@ -18,6 +18,7 @@ import { b23Pressure, b23Temperature } from './b23.js';
 import { region1TemperaturePH } from './backward-ph.js';
 import { region2TemperaturePH } from './backward-ph.js';
 import { region1TemperaturePS, region2TemperaturePS } from './backward-ps.js';
+import { region1PressureHS, region2PressureHS } from './backward-hs.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
 import { WaterProperties } from './properties.js';
 import { region1, region1HCp, region1SCp } from './region1.js';
@@ -521,6 +522,32 @@ function pressureSpanFor(h: number): boolean {
  */
 export function stateFromHS(h: number, s: number, out: WaterState): number {
   if (!Number.isFinite(h) || !Number.isFinite(s)) return STATUS.invalidInput;
+  if (newtonHS(h, s, out) === STATUS.ok) return STATUS.ok;
+  return bracketHS(h, s, out);
+}
+
+/**
+ * Fast path of the (h, s) flash: the SR2-01 backward equation p(h, s) of region 1 (liquid-like h and
+ * s, below the values at 623.15 K) or region 2 starts Newton steps on ln p, with
+ * (∂s/∂ln p)_h = −p·v/T, each step a (p, h) flash. Any failed step hands over to the bracketed search.
+ */
+function newtonHS(h: number, s: number, out: WaterState): number {
+  const liquidLike = h < 1670e3 && s < 3.78e3;
+  let p = liquidLike ? region1PressureHS(h, s) : region2PressureHS(h, s);
+  if (!(p > P_HS_MIN && p <= P_MAX)) return STATUS.outOfRange;
+  for (let i = 0; i < 12; i++) {
+    if (stateFromPH(p, h, out) !== STATUS.ok) return STATUS.noConvergence;
+    const step = ((out.s - s) * out.T) / (p * out.v);
+    if (Math.abs(step) <= 1e-14) return STATUS.ok;
+    const next = p * Math.exp(Math.max(-1, Math.min(1, step)));
+    if (!(next > P_HS_MIN && next <= P_MAX)) return STATUS.noConvergence;
+    p = next;
+  }
+  return STATUS.noConvergence;
+}
+
+/** The bracketed search of the (h, s) flash over the whole pressure span of h. */
+function bracketHS(h: number, s: number, out: WaterState): number {
   if (!pressureSpanFor(h)) return STATUS.outOfRange;
   const pLo = span[0]!;
   const pHi = span[1]!;
