@@ -180,3 +180,40 @@ describe('SR2-01 Table 10: region 2 p(h, s)', () => {
     [3400, 5.8, 8.376903879e1],
   ])('h = %d kJ/kg, s = %d kJ/(kg·K)', (h, s, p) => expectClose(region2PressureHS(h * 1e3, s * 1e3) / 1e6, p, { rel: 5.0001e-10 }));
 });
+
+import { h3abEnthalpy, region3TemperaturePH, region3TemperaturePS, region3VolumePH, region3VolumePS } from '../../src/water/if97/backward-region3.js';
+
+/**
+ * IAPWS SR3-03(2014), Revised Supplementary Release on Backward Equations T(p,h), v(p,h), T(p,s),
+ * v(p,s) for Region 3: verification Tables 5 and 12, to the printed 10 significant digits.
+ */
+describe('SR3-03 Table 5: region 3 T(p, h) and v(p, h)', () => {
+  it.each([
+    [20, 1700, 6.293083892e2, 1.749903962e-3],
+    [50, 2000, 6.905718338e2, 1.908139035e-3],
+    [100, 2100, 7.336163014e2, 1.676229776e-3],
+    [20, 2500, 6.418418053e2, 6.670547043e-3],
+    [50, 2400, 7.351848618e2, 2.801244590e-3],
+    [100, 2700, 8.420460876e2, 2.404234998e-3],
+  ])('p = %d MPa, h = %d kJ/kg', (p, h, T, v) => {
+    expectClose(region3TemperaturePH(p * 1e6, h * 1e3), T, { rel: 5.0001e-10 });
+    expectClose(region3VolumePH(p * 1e6, h * 1e3), v, { rel: 5.0001e-10 });
+  });
+  it('the 3a/3b boundary passes through the critical point: h_3ab(22.064 MPa) = 2087.5468 kJ/kg', () => {
+    expectClose(h3abEnthalpy(22.064e6) / 1e3, 2087.5468, { abs: 0.0005 }); // h at the critical point, IF97 region 3 (from memory)
+  });
+});
+
+describe('SR3-03 Table 12: region 3 T(p, s) and v(p, s)', () => {
+  it.each([
+    [20, 3.8, 6.282959869e2, 1.733791463e-3],
+    [50, 3.6, 6.297158726e2, 1.469680170e-3],
+    [100, 4.0, 7.056880237e2, 1.555893131e-3],
+    [20, 5.0, 6.401176443e2, 6.262101987e-3],
+    [50, 4.5, 7.163687517e2, 2.332634294e-3],
+    [100, 5.0, 8.474332825e2, 2.449610757e-3],
+  ])('p = %d MPa, s = %d kJ/(kg·K)', (p, s, T, v) => {
+    expectClose(region3TemperaturePS(p * 1e6, s * 1e3), T, { rel: 5.0001e-10 });
+    expectClose(region3VolumePS(p * 1e6, s * 1e3), v, { rel: 5.0001e-10 });
+  });
+});

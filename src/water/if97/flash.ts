@@ -23,7 +23,8 @@ import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_
 import { WaterProperties } from './properties.js';
 import { region1, region1HCp, region1SCp } from './region1.js';
 import { region2 } from './region2.js';
-import { region3, region3Pressure } from './region3.js';
+import { region3, region3Derivatives, region3Pressure } from './region3.js';
+import { region3TemperaturePH, region3TemperaturePS, region3VolumePH, region3VolumePS } from './backward-region3.js';
 import { saturationPressure, saturationTemperature } from './region4.js';
 import { region5 } from './region5.js';
 
@@ -123,62 +124,54 @@ const RHO_LOW = 5;
 // the region 3 equation peaks in pressure near 800 kg/m³ (above 200 MPa on every isotherm of region 3) and is not valid beyond
 const RHO_HIGH = 800;
 
-/** Newton steps kept inside [a, b] where p3(a) < p < p3(b) (or the reverse). */
+let densityTarget = 0;
+let densityT = 0;
+function densityResidual(rho: number): number {
+  return pressure3(rho, densityT) - densityTarget;
+}
+
+/** The root of p3(ρ, T) = p inside [a, b], where the pressure difference changes sign (Brent). */
 function polishDensity(p: number, T: number, a: number, b: number): number {
-  let lo = a;
-  let hi = b;
-  let rho = 0.5 * (lo + hi);
-  for (let i = 0; i < 100; i++) {
-    region3Pressure(rho, T, pr);
-    const f = pr[0]! - p;
-    if (f === 0) return rho;
-    if (f < 0) lo = rho;
-    else hi = rho;
-    let next = pr[1]! > 0 ? rho - f / pr[1]! : NaN;
-    if (!(next > Math.min(lo, hi) && next < Math.max(lo, hi))) next = 0.5 * (lo + hi);
-    if (Math.abs(next - rho) <= 1e-14 * rho) return next;
-    rho = next;
-  }
-  return NaN;
+  densityTarget = p;
+  densityT = T;
+  return brentRoot(densityResidual, a, b, 1e-15);
 }
 
 /**
  * Density (kg/m³) in region 3 at (p [Pa], T [K]), by a bracketed search on the region 3 pressure.
  * `branch`: 1 = liquid (the largest root), 2 = vapour (the smallest root), 0 = choose by p_s(T)
- * below the critical temperature. Returns NaN when no root is found.
+ * below the critical temperature. Above the critical temperature the isotherm rises monotonically
+ * and one bracket suffices. Below it, the search stays on its branch: from the high-density end down
+ * for the liquid, from the low-density end up for the vapour, in steps a tenth of the width of the
+ * two-phase loop (sized by the SR1-86 saturated densities) wherever the loop could be crossed.
+ * Returns NaN when no root is found.
  */
 export function region3Density(p: number, T: number, branch: 0 | 1 | 2 = 0): number {
   if (T >= T_CRITICAL) {
-    // supercritical isotherms rise monotonically: scan upward
-    let prev = RHO_LOW;
-    if (pressure3(prev, T) >= p) return NaN;
-    for (let rho = prev + 20; rho <= RHO_HIGH; prev = rho, rho += 20) {
-      if (pressure3(rho, T) >= p) return polishDensity(p, T, prev, rho);
-    }
-    return NaN;
+    if (!(pressure3(RHO_LOW, T) < p && pressure3(RHO_HIGH, T) > p)) return NaN;
+    return polishDensity(p, T, RHO_LOW, RHO_HIGH);
   }
   const b = branch === 0 ? (p >= saturationPressure(T) ? 1 : 2) : branch;
   const rl = approxLiquidDensity(T);
   const rv = approxVaporDensity(T);
   const fine = Math.max(0.02, (rl - rv) / 12);
   if (b === 1) {
-    let prev = RHO_HIGH;
-    if (pressure3(prev, T) <= p) return NaN;
-    while (prev > rv) {
-      const step = prev > rl + 40 ? 25 : fine;
-      const rho = prev - step;
+    if (!(pressure3(RHO_HIGH, T) > p)) return NaN;
+    // clear of the loop, the liquid isotherm rises monotonically: bracket directly
+    const safe = Math.min(RHO_HIGH, rl + 40);
+    if (pressure3(safe, T) <= p) return polishDensity(p, T, safe, RHO_HIGH);
+    for (let prev = safe; prev > rv; prev -= fine) {
+      const rho = prev - fine;
       if (pressure3(rho, T) <= p) return polishDensity(p, T, rho, prev);
-      prev = rho;
     }
     return NaN;
   }
-  let prev = RHO_LOW;
-  if (pressure3(prev, T) >= p) return NaN;
-  while (prev < rl) {
-    const step = prev < rv - 40 ? 20 : fine;
-    const rho = prev + step;
+  if (!(pressure3(RHO_LOW, T) < p)) return NaN;
+  const safe = Math.max(RHO_LOW, rv - 40);
+  if (pressure3(safe, T) >= p) return polishDensity(p, T, RHO_LOW, safe);
+  for (let prev = safe; prev < rl; prev += fine) {
+    const rho = prev + fine;
     if (pressure3(rho, T) >= p) return polishDensity(p, T, prev, rho);
-    prev = rho;
   }
   return NaN;
 }
@@ -358,6 +351,7 @@ function solveRegion3(p: number, target: number, by: number, Tlo: number, Thi: n
   if (Tlo === T_13 && region3At(p, Tlo, branch, scratchB) && valueOf(scratchB, by) > target) {
     return polishT(1, p, target, by, T_13, T_MIN, T_13 + 5, out);
   }
+  if (newtonRegion3(p, target, by, Tlo, Thi, branch, out) === STATUS.ok) return STATUS.ok;
   let failed = false;
   const T = brentRoot(
     (t) => {
@@ -404,6 +398,45 @@ function gasSide(p: number, target: number, by: number, Tlo: number, below: numb
   // 1073.15 K for targets in the gap between the region 2 and 5 values there
   const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
   return polishT(5, p, target, by, T0, T_MAX_2 - 5, T_MAX_5, out);
+}
+
+const d3 = new Float64Array(9);
+
+/**
+ * Fast path of region 3 flashes: the SR3-03 backward equations give (v, T); Newton steps in (ρ, T) on
+ * the region 3 equation match p and h (or s). The answer is kept only if it lies in [Tlo, Thi], on a
+ * mechanically stable branch ((∂p/∂ρ)_T > 0) and, below the critical temperature, on the requested side
+ * of the critical density; otherwise the bracketed search takes over.
+ */
+function newtonRegion3(p: number, target: number, by: number, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState): number {
+  let T = by === BY_H ? region3TemperaturePH(p, target) : region3TemperaturePS(p, target);
+  let rho = 1 / (by === BY_H ? region3VolumePH(p, target) : region3VolumePS(p, target));
+  if (!(T > 0 && rho > 0)) return STATUS.noConvergence;
+  const k = by === BY_H ? 3 : 6;
+  for (let i = 0; i < 20; i++) {
+    region3Derivatives(rho, T, d3);
+    const f1 = d3[0]! - p;
+    const f2 = d3[k]! - target;
+    const a = d3[1]!;
+    const b = d3[2]!;
+    const c = d3[k + 1]!;
+    const e = d3[k + 2]!;
+    const det = a * e - b * c;
+    if (!(det !== 0 && Number.isFinite(det))) return STATUS.noConvergence;
+    const dRho = (f1 * e - b * f2) / det;
+    const dT = (a * f2 - c * f1) / det;
+    rho -= dRho;
+    T -= dT;
+    if (!(rho > 0 && T > 0)) return STATUS.noConvergence;
+    if (Math.abs(dRho) <= 1e-13 * rho && Math.abs(dT) <= 1e-13 * T) {
+      if (!(T >= Tlo - 1e-9 && T <= Thi + 1e-9) || !(d3[1]! > 0)) return STATUS.noConvergence;
+      if (T < T_CRITICAL && branch !== 0 && (branch === 1) !== rho >= RHO_CRITICAL) return STATUS.noConvergence;
+      region3(rho, T, out);
+      out.p = p;
+      return finish(out, 3);
+    }
+  }
+  return STATUS.noConvergence;
 }
 
 /**

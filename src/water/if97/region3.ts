@@ -56,3 +56,32 @@ export function region3Pressure(rho: number, T: number, out: Float64Array): void
   out[0] = rho * RT * delta * pD;
   out[1] = RT * (2 * delta * pD + delta * delta * pDD);
 }
+
+/**
+ * Values and first derivatives in (ρ, T) for region 3 Newton steps, written to out:
+ * [p, ∂p/∂ρ, ∂p/∂T, h, ∂h/∂ρ, ∂h/∂T, s, ∂s/∂ρ, ∂s/∂T] (SI units).
+ * From IAPWS R7-97(2012) Table 31: p = ρRTδφδ, h = RT(τφτ + δφδ), s = R(τφτ − φ); the derivatives
+ * follow by differentiation, with (∂s/∂ρ)_T = −(∂p/∂T)_ρ/ρ² (a Maxwell relation).
+ */
+export function region3Derivatives(rho: number, T: number, out: Float64Array): void {
+  const delta = rho / RHO_STAR;
+  const tau = T_STAR / T;
+  region3Sums(delta, tau, f);
+  const phi = N1 * Math.log(delta) + f[0]!;
+  const pD = N1 / delta + f[1]!;
+  const pDD = -N1 / (delta * delta) + f[2]!;
+  const pT = f[3]!;
+  const pTT = f[4]!;
+  const pDT = f[5]!;
+  const RT = R_IF97 * T;
+  const dpdT = rho * R_IF97 * delta * (pD - tau * pDT);
+  out[0] = rho * RT * delta * pD;
+  out[1] = RT * (2 * delta * pD + delta * delta * pDD);
+  out[2] = dpdT;
+  out[3] = RT * (tau * pT + delta * pD);
+  out[4] = (RT / rho) * (tau * delta * pDT + delta * pD + delta * delta * pDD);
+  out[5] = R_IF97 * (delta * pD - tau * tau * pTT - tau * delta * pDT);
+  out[6] = R_IF97 * (tau * pT - phi);
+  out[7] = -dpdT / (rho * rho);
+  out[8] = (-R_IF97 * tau * tau * pTT) / T;
+}
