@@ -8,6 +8,8 @@ export default defineConfig({
     'incompressible/index': 'src/incompressible/index.ts',
     'ideal-gas/index': 'src/ideal-gas/index.ts',
     'water/index': 'src/water/index.ts',
+    'tables/index': 'src/tables/index.ts',
+    'tables/water/index': 'src/tables/water.ts',
   },
   format: ['esm', 'cjs'],
   dts: true,

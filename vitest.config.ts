@@ -8,6 +8,7 @@ export default defineConfig({
     // examples import 'heatstate' as users do; in tests that is the source tree
     alias: [
       { find: /^heatstate$/, replacement: `${src}index.ts` },
+      { find: /^heatstate\/tables\/water$/, replacement: `${src}tables/water.ts` },
       { find: /^heatstate\/(.*)$/, replacement: `${src}$1/index.ts` },
     ],
   },

@@ -11,6 +11,7 @@ import { saturationAtP, stateFromHS, stateFromPH, stateFromPS, stateFromPT, Wate
 import { WaterProperties } from '../src/water/if97/properties.js';
 import { region1 } from '../src/water/if97/region1.js';
 import { water } from '../src/water/index.js';
+import { waterTables } from '../src/tables/water.js';
 
 export interface BenchCase {
   name: string;
@@ -101,7 +102,37 @@ function naiveRegion1(p: number, T: number, out: WaterProperties): void {
   out.w = Math.sqrt((RT * gp * gp) / ((c * c) / (tau * tau * gtt) - gpp));
 }
 
+const satTable = waterTables.saturationByT();
+const superGrid = waterTables.superheated();
+const tableKeys = Float64Array.from({ length: N }, (_, i) => 280 + ((i * 7919) % 3500) / 10);
+const gridT = Float64Array.from({ length: N }, (_, i) => 700 + ((i * 7919) % 5000) / 10);
+const gridP = Float64Array.from({ length: N }, (_, i) => 1e5 + ((i * 104729) % 9000) * 1e3);
+
 export const cases: BenchCase[] = [
+  {
+    name: 'tables: 1-D lookup, saturation by T, linear (core valueAt)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(satTable.valueAt('hg', tableKeys[i]!));
+    },
+    perCall: N,
+    targetNs: 60,
+  },
+  {
+    name: 'tables: 1-D lookup, monotone cubic (core valueAt)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(satTable.valueAt('hg', tableKeys[i]!, 'monotone-cubic'));
+    },
+    perCall: N,
+    targetNs: 60,
+  },
+  {
+    name: 'tables: 2-D lookup, superheated grid, bilinear (core valueAt)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(superGrid.valueAt('h', gridT[i]!, gridP[i]!));
+    },
+    perCall: N,
+    targetNs: 150,
+  },
   {
     name: 'water: naive Math.pow region 1, full set (baseline)',
     fn: () => {

@@ -34,7 +34,9 @@ export {
   speciesNames,
 } from './ideal-gas/index.js';
 export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './ideal-gas/index.js';
-export { water } from './water/index.js';
+export { water, approximateLiquid, compareLiquidProcess } from './water/index.js';
 export type { WaterStateResult, SaturationResult, WaterPair, WaterPhase } from './water/index.js';
+export { defineTable, defineGrid, tableFromCSV, tableFromJSON, gridFromJSON, PropertyTable, PropertyGrid } from './tables/index.js';
+export type { InterpolationMethod, LookupOptions, LookupResult, TableData, GridData } from './tables/index.js';
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from './errors.js';
 export type { ErrorCode, ValidRange, DefinitionIssue } from './errors.js';

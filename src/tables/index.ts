@@ -1,0 +1,13 @@
+/**
+ * `heatstate/tables`: typed property tables with checked interpolation (linear, monotone cubic,
+ * log-linear, bilinear), inverse lookup, and loaders for JSON and CSV. The generated water tables
+ * are in `heatstate/tables/water`, so this entry carries no table data.
+ *
+ * @packageDocumentation
+ */
+export { PropertyTable, PropertyGrid, defineTable, defineGrid } from './table.js';
+export type { InterpolationMethod, LookupOptions, LookupResult } from './table.js';
+export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';
+export type { CsvOptions } from './load.js';
+export { tableSchema, gridSchema, columnSchema, axisSchema, tableSourceSchema } from './schema.js';
+export type { TableData, GridData } from './schema.js';
