@@ -10,7 +10,8 @@ import r1data from '../data/if97/region1.json';
 import { saturationAtP, stateFromHS, stateFromPH, stateFromPS, stateFromPT, WaterState } from '../src/water/if97/flash.js';
 import { WaterProperties } from '../src/water/if97/properties.js';
 import { region1 } from '../src/water/if97/region1.js';
-import { water } from '../src/water/index.js';
+import { water, waterBatch } from '../src/water/index.js';
+import { idealGasBatch } from '../src/ideal-gas/index.js';
 import { waterTables } from '../src/tables/water.js';
 
 export interface BenchCase {
@@ -38,7 +39,8 @@ const waterModel = lookupIncompressible('water').model;
 const N = 1000;
 const temps = Float64Array.from({ length: N }, (_, i) => 280 + (i % 80));
 const gasTemps = Float64Array.from({ length: N }, (_, i) => 250 + ((i * 37) % 2500));
-const air = idealGas('air').core;
+const idealGasAir = idealGas('air');
+const air = idealGasAir.core;
 const idealGasN2 = idealGas('N2');
 const n2 = idealGasN2.core;
 
@@ -108,7 +110,36 @@ const tableKeys = Float64Array.from({ length: N }, (_, i) => 280 + ((i * 7919) %
 const gridT = Float64Array.from({ length: N }, (_, i) => 700 + ((i * 7919) % 5000) / 10);
 const gridP = Float64Array.from({ length: N }, (_, i) => 1e5 + ((i * 104729) % 9000) * 1e3);
 
+const BATCH = 1_000_000;
+const batchP = new Float64Array(BATCH);
+const batchT = new Float64Array(BATCH);
+for (let i = 0; i < BATCH; i++) {
+  batchP[i] = 2e5 + (i % 1000) * 2.3e3;
+  batchT[i] = 313.15 + ((i * 7919) % 14000) / 100;
+}
+const batchOut = { h: new Float64Array(BATCH), rho: new Float64Array(BATCH), status: new Uint8Array(BATCH) };
+const gasT = Float64Array.from({ length: BATCH }, (_, i) => 250 + (i % 2500));
+const gasOut = { cp: new Float64Array(BATCH), h: new Float64Array(BATCH), status: new Uint8Array(BATCH) };
+
 export const cases: BenchCase[] = [
+  {
+    name: 'batch: waterBatch (p, T) → h, ρ, 10⁶ states (per state)',
+    fn: () => {
+      waterBatch({ p: batchP, T: batchT }, ['h', 'rho'], batchOut);
+      consume(batchOut.h[7]!);
+    },
+    perCall: BATCH,
+    targetNs: 200,
+  },
+  {
+    name: 'batch: idealGasBatch air cp, h, 10⁶ states (per state)',
+    fn: () => {
+      idealGasBatch(idealGasAir, { T: gasT }, ['cp', 'h'], gasOut);
+      consume(gasOut.h[7]!);
+    },
+    perCall: BATCH,
+    targetNs: 30,
+  },
   {
     name: 'tables: 1-D lookup, saturation by T, linear (core valueAt)',
     fn: () => {

@@ -6,13 +6,15 @@
  * Each case may name a target (ns per call) and a baseline case measured in the same run;
  * the table shows the ratio to the baseline and how far a target is missed.
  */
-import { writeFileSync } from 'node:fs';
+import { execFileSync } from 'node:child_process';
+import { existsSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
+import { fileURLToPath } from 'node:url';
 import { Bench } from 'tinybench';
 import { cases } from './cases.js';
 
 const quick = process.argv.includes('--quick');
-const bench = new Bench({ time: quick ? 50 : 500, warmupTime: quick ? 20 : 200 });
+const bench = new Bench({ time: quick ? 50 : 500, warmupTime: quick ? 20 : 200, iterations: quick ? 3 : 32, warmupIterations: quick ? 1 : 8 });
 for (const c of cases) bench.add(c.name, c.fn);
 await bench.run();
 
@@ -59,9 +61,28 @@ console.table(
   })),
 );
 
+/** Time to import the built root entry in a fresh Node process (inside the process, median of 7). */
+function coldStart(): { medianMs: number; runs: number[] } | { skipped: string } {
+  const entry = new URL('../dist/index.js', import.meta.url);
+  if (!existsSync(entry)) return { skipped: 'dist/index.js not built: run `npm run build` (npm run bench does)' };
+  const script = `const t = performance.now(); await import(${JSON.stringify(entry.href)}); console.log(performance.now() - t);`;
+  const runs: number[] = [];
+  for (let i = 0; i < 7; i++) runs.push(Number(execFileSync(process.execPath, ['--input-type=module', '-e', script], { encoding: 'utf8' }).trim()));
+  const sorted = [...runs].sort((a, b) => a - b);
+  return { medianMs: sorted[3]!, runs };
+}
+
+const cold = coldStart();
+if ('medianMs' in cold) {
+  console.log(`\ncold start: import of the root entry in a fresh Node process, median ${cold.medianMs.toFixed(1)} ms (target 30 ms: ${cold.medianMs <= 30 ? 'met' : `missed by ${(cold.medianMs / 30).toFixed(2)}×`})`);
+} else {
+  console.log(`\ncold start: skipped (${cold.skipped})`);
+}
+
 const cpu = os.cpus()[0]?.model ?? 'unknown';
+const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
-  new URL('./results.json', import.meta.url),
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, rows }, null, 2)}\n`,
+  outPath,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, coldStart: cold, rows }, null, 2)}\n`,
 );
-console.log(`\nwrote bench/results.json (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);
+console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

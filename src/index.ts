@@ -32,9 +32,10 @@ export {
   polytropic,
   constantCpDeviation,
   speciesNames,
+  idealGasBatch,
 } from './ideal-gas/index.js';
 export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './ideal-gas/index.js';
-export { water, approximateLiquid, compareLiquidProcess } from './water/index.js';
+export { water, approximateLiquid, compareLiquidProcess, waterBatch } from './water/index.js';
 export type { WaterStateResult, SaturationResult, WaterPair, WaterPhase } from './water/index.js';
 export { defineTable, defineGrid, tableFromCSV, tableFromJSON, gridFromJSON, PropertyTable, PropertyGrid } from './tables/index.js';
 export type { InterpolationMethod, LookupOptions, LookupResult, TableData, GridData } from './tables/index.js';

@@ -1,15 +1,24 @@
 import { execFileSync } from 'node:child_process';
-import { readdirSync } from 'node:fs';
+import { existsSync, readdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const tsx = fileURLToPath(new URL('../node_modules/.bin/tsx', import.meta.url));
-const run = (file: string) => execFileSync(tsx, [file], { cwd: root, encoding: 'utf8', timeout: 60_000 });
+const run = (file: string, env: Record<string, string> = {}) => execFileSync(file.endsWith('.ts') ? tsx : process.execPath, [file], { cwd: root, encoding: 'utf8', timeout: 120_000, env: { ...process.env, ...env } });
+
+// examples that import the built package ('heatstate/...') need dist/: `npm test` builds first
+beforeAll(() => {
+  if (!existsSync(new URL('../dist/index.js', import.meta.url))) execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'pipe' });
+}, 120_000);
 
 describe('examples/', () => {
-  it('every example file is covered by a test below', () => {
-    expect(readdirSync(new URL('../examples/', import.meta.url)).filter((f) => f.endsWith('.ts')).sort()).toEqual(['demo.ts']);
+  it('every example is covered by a test below', () => {
+    const files = readdirSync(new URL('../examples/', import.meta.url), { recursive: true, withFileTypes: true })
+      .filter((d) => d.isFile() && /\.(ts|mjs|html|csv)$/.test(d.name))
+      .map((d) => `${d.parentPath.slice(d.parentPath.indexOf('examples') + 9)}/${d.name}`.replace(/^\//, ''))
+      .sort();
+    expect(files).toEqual(['demo.ts', 'worker-pool/main.mjs', 'worker-pool/worker.mjs']);
   });
 
   it('demo.ts (npm start) prints each result in SI and US units and the caution', () => {
@@ -18,5 +27,12 @@ describe('examples/', () => {
     expect(out).toMatch(/temperature rise.*30 ΔK\s+54 Δ°F/);
     expect(out).toContain('OutOfRangeError [range.outside]');
     expect(out).toMatch(/licensed professionals/);
+  });
+
+  it('worker-pool/main.mjs spreads a batch over a piscina pool and matches one thread exactly', () => {
+    const out = run('examples/worker-pool/main.mjs', { HEATSTATE_STATES: '100000' });
+    expect(out).toMatch(/states: 100,000, threads: \d+/);
+    expect(out).toMatch(/speed-up \d+\.\d\d×/);
+    expect(out).toContain('elements with a bad status: 0; pool results differing from one thread: 0');
   });
 });

@@ -3,11 +3,12 @@
  *
  * @module
  */
-import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, STANDARD_STATE_PRESSURE_PA } from '../chem/constants.js';
+import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K } from '../chem/constants.js';
 import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
 import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
+import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
 
 /** Mass basis (per kg, the default) or molar basis (per mol). */
 export type Basis = 'mass' | 'molar';
@@ -99,6 +100,8 @@ export interface IdealGas<B extends Basis = 'mass'> {
   readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> } };
   /** The plain-number SI core, for hot loops and batch use. */
   readonly core: IdealGasModel;
+  /** Whether temperatures outside the data are computed (and flagged) rather than refused. */
+  readonly extrapolate: boolean;
   /** cp(T). */
   cp(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
   /** cv(T) = cp(T) − R. */
@@ -175,8 +178,6 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     lastFlag = false;
     return temperature(input, parameter);
   };
-  const hAt = (T: number) => scale * T * core.hRT(T);
-
   const gas: IdealGas<B> = {
     name: built.name,
     formula: built.formula,
@@ -187,33 +188,31 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     R: Quantity.fromSI(scale, hc),
     range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') } },
     core,
-    cp: (T) => result(scale * core.cpR(T1of(T)), hc),
-    cv: (T) => result(scale * (core.cpR(T1of(T)) - 1), hc),
+    extrapolate,
+    cp: (T) => result(cpOf(core, scale, T1of(T)), hc),
+    cv: (T) => result(cvOf(core, scale, T1of(T)), hc),
     k: (T) => {
-      const cpR = core.cpR(T1of(T));
+      const k = kOf(core, T1of(T));
       lastFlag = false;
-      return cpR / (cpR - 1);
+      return k;
     },
-    h: (T) => result(hAt(T1of(T)), en),
-    hSensible: (T) => result(hAt(T1of(T)) - hAt(REFERENCE_TEMPERATURE_K), en),
-    u: (T) => {
-      const t = T1of(T);
-      return result(scale * t * (core.hRT(t) - 1), en);
-    },
+    h: (T) => result(hOf(core, scale, T1of(T)), en),
+    hSensible: (T) => result(hSensibleOf(core, scale, T1of(T)), en),
+    u: (T) => result(uOf(core, scale, T1of(T)), en),
     s: (T, p) => {
       const t = T1of(T);
-      return result(scale * (core.sR(t) - Math.log(checkPressure(p, 'p') / STANDARD_STATE_PRESSURE_PA)), hc);
+      return result(sOf(core, scale, t, checkPressure(p, 'p')), hc);
     },
-    sStandard: (T) => result(scale * core.sR(T1of(T)), hc),
+    sStandard: (T) => result(sStandardOf(core, scale, T1of(T)), hc),
     deltaH: (T1, T2) => {
       const a = T1of(T1, 'T1');
       const b = temperature(T2, 'T2');
-      return result(hAt(b) - hAt(a), en);
+      return result(hOf(core, scale, b) - hOf(core, scale, a), en);
     },
     deltaU: (T1, T2) => {
       const a = T1of(T1, 'T1');
       const b = temperature(T2, 'T2');
-      return result(scale * (b * (core.hRT(b) - 1) - a * (core.hRT(a) - 1)), en);
+      return result(uOf(core, scale, b) - uOf(core, scale, a), en);
     },
     deltaS: (state1, state2) => {
       const a = T1of(state1.T, 'state1.T');

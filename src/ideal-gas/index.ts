@@ -6,6 +6,8 @@
  */
 export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
 export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, Basis, HeatCapacityDimension, EnergyDimension } from './gas.js';
+export { idealGasBatch, IDEAL_GAS_BATCH_STATUS } from './batch.js';
+export type { IdealGasBatchProperty } from './batch.js';
 export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation, isentropicTemperature, temperatureAtEnthalpy, isentropicTemperatureConstantCp } from './processes.js';
 export type { MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './processes.js';
 export { NasaPolynomialModel, ConstantCpModel, MixtureModel, constantCpFrom, mixNasa, fromSevenCoefficients } from './model.js';

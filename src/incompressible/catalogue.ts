@@ -1,13 +1,15 @@
 /**
  * The built-in catalogue of incompressible liquids and solids (data/incompressible.json).
- * Each entry is compiled on first use through the same schema as user definitions.
+ * Each entry is compiled on first use; tests check every entry against the same zod schema as user
+ * definitions, so loading the catalogue does not load zod.
  *
  * @module
  */
 import catalogue from '../../data/incompressible.json';
 import { UnknownNameError } from '../errors.js';
 import { closestNames, normaliseName } from '../lookup.js';
-import { compileDefinition, type CompiledSubstance, type IncompressibleDefinition } from './schema.js';
+import { compileChecked, type CompiledSubstance } from './compile.js';
+import type { IncompressibleDefinition } from './schema.js';
 
 const ENTRIES = catalogue.substances as unknown as readonly IncompressibleDefinition[];
 const byName = new Map<string, IncompressibleDefinition>();
@@ -38,7 +40,7 @@ export function lookupIncompressible(name: string): CompiledSubstance {
   }
   let c = compiled.get(entry);
   if (!c) {
-    c = compileDefinition(entry);
+    c = compileChecked(entry);
     compiled.set(entry, c);
   }
   return c;

@@ -11,7 +11,8 @@ import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 
 export { incompressibleNames, incompressibleCatalogue } from './catalogue.js';
 export { incompressibleDefinitionSchema, sourceSchema, compileDefinition } from './schema.js';
-export type { IncompressibleDefinition, CompiledSubstance } from './schema.js';
+export type { IncompressibleDefinition } from './schema.js';
+export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange } from './model.js';
 export type { IncompressibleModel } from './model.js';
 

@@ -1,15 +1,13 @@
 /**
- * The definition of an incompressible substance (built-in or user-supplied), its zod schema,
- * and its compilation into the SI model. One schema serves the catalogue and user definitions.
+ * The definition of an incompressible substance (built-in or user-supplied) and its zod schema.
+ * One schema serves the catalogue (checked in tests) and user definitions (checked at run time).
  *
  * @module
  */
 import { z } from 'zod';
-import { DefinitionError, HeatstateError, type DefinitionIssue } from '../errors.js';
-import { Quantity, quantity } from '../units/quantity.js';
-import { resolveUnit, toSI, DEFAULT_AMBIENT_PA } from '../units/registry.js';
-import type { Dimension } from '../units/dimensions.js';
-import { heatCapacityAt, type IncompressibleModel } from './model.js';
+import { DefinitionError } from '../errors.js';
+import { Quantity } from '../units/quantity.js';
+import { compileChecked, type CompiledSubstance } from './compile.js';
 
 const quantityInput = z.union([z.string().min(1), z.instanceof(Quantity)]);
 
@@ -60,122 +58,15 @@ export const incompressibleDefinitionSchema = z
 /** A substance definition, as accepted by `incompressible()`. */
 export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSchema>;
 
-/** A compiled substance: the SI model plus what describes it. */
-export interface CompiledSubstance {
-  readonly definition: IncompressibleDefinition;
-  readonly model: IncompressibleModel;
-}
-
-/**
- * Expands Σ aᵢ·tⁱ with t = α·T + β into coefficients in T (binomial expansion).
- */
-function substituteAffine(a: readonly number[], alpha: number, beta: number): number[] {
-  const out = new Array<number>(a.length).fill(0);
-  for (let i = 0; i < a.length; i++) {
-    // (αT + β)^i = Σ_k C(i,k) α^k β^(i−k) T^k
-    let binom = 1;
-    for (let k = 0; k <= i; k++) {
-      out[k]! += a[i]! * binom * alpha ** k * beta ** (i - k);
-      binom = (binom * (i - k)) / (k + 1);
-    }
-  }
-  return out;
-}
-
 /**
  * Validates a definition (shape with zod, then units, ranges and monotonicity) and compiles it.
  * @throws {@link DefinitionError} listing every problem with its path
  */
 export function compileDefinition(input: unknown): CompiledSubstance {
   const parsed = incompressibleDefinitionSchema.safeParse(input);
-  const label = typeof input === 'object' && input !== null && typeof (input as { name?: unknown }).name === 'string' ? `incompressible substance "${(input as { name: string }).name}"` : 'incompressible substance definition';
   if (!parsed.success) {
+    const label = typeof input === 'object' && input !== null && typeof (input as { name?: unknown }).name === 'string' ? `incompressible substance "${(input as { name: string }).name}"` : 'incompressible substance definition';
     throw new DefinitionError(label, parsed.error.issues.map((i) => ({ path: i.path.map((p) => (typeof p === 'symbol' ? String(p) : p)), message: i.message })));
   }
-  const def = parsed.data;
-  const issues: DefinitionIssue[] = [];
-
-  const read = (value: string | Quantity, dimension: Dimension, path: (string | number)[]): number | undefined => {
-    try {
-      const q = typeof value === 'string' ? quantity(value) : value;
-      if (q.dimension !== dimension) {
-        issues.push({ path, message: `expected a ${dimension} such as "${dimension === 'temperature' ? '300 K' : dimension === 'density' ? '1000 kg/m³' : '4.18 kJ/(kg·K)'}"; got ${q.toString()} (${q.dimension})` });
-        return undefined;
-      }
-      return q.si;
-    } catch (e) {
-      issues.push({ path, message: e instanceof HeatstateError ? e.message : String(e) });
-      return undefined;
-    }
-  };
-  const unitOf = (unit: string, dimension: Dimension, path: (string | number)[]) => {
-    try {
-      const u = resolveUnit(unit);
-      if (u.dimension !== dimension) {
-        issues.push({ path, message: `"${unit}" is a unit of ${u.dimension}; expected a unit of ${dimension}` });
-        return undefined;
-      }
-      return u;
-    } catch (e) {
-      issues.push({ path, message: e instanceof HeatstateError ? e.message : String(e) });
-      return undefined;
-    }
-  };
-
-  const Tmin = read(def.T.min, 'temperature', ['T', 'min']);
-  const Tmax = read(def.T.max, 'temperature', ['T', 'max']);
-  if (Tmin !== undefined && Tmax !== undefined && !(Tmin < Tmax)) issues.push({ path: ['T'], message: `T.min must be below T.max; got ${Tmin} K and ${Tmax} K` });
-  const rho = read(def.density, 'density', ['density']);
-  if (rho !== undefined && !(rho > 0)) issues.push({ path: ['density'], message: `density must be positive; got ${rho} kg/m³` });
-
-  let coefficients = new Float64Array(0);
-  let nodesT = new Float64Array(0);
-  let nodesC = new Float64Array(0);
-  let heatCapacity: IncompressibleModel['heatCapacity'] = 'polynomial';
-
-  if (typeof def.c === 'string' || def.c instanceof Quantity) {
-    const c = read(def.c, 'specificHeat', ['c']);
-    if (c !== undefined && !(c > 0)) issues.push({ path: ['c'], message: `c must be positive; got ${c} J/(kg·K)` });
-    coefficients = Float64Array.of(c ?? NaN);
-  } else if ('polynomial' in def.c) {
-    const cu = unitOf(def.c.unit, 'specificHeat', ['c', 'unit']);
-    const tu = unitOf(def.c.temperatureUnit, 'temperature', ['c', 'temperatureUnit']);
-    if (cu && tu) {
-      // t = T/factor − offset, so the coefficients in T follow by substitution
-      const inT = substituteAffine(def.c.polynomial, 1 / tu.factor, -tu.offset);
-      coefficients = Float64Array.from(inT, (a) => a * cu.factor);
-    }
-  } else {
-    heatCapacity = 'table';
-    const { T, c } = def.c.table;
-    if (T.length !== c.length) issues.push({ path: ['c', 'table'], message: `T has ${T.length} values but c has ${c.length}` });
-    const cu = unitOf(def.c.unit, 'specificHeat', ['c', 'unit']);
-    const tu = unitOf(def.c.temperatureUnit, 'temperature', ['c', 'temperatureUnit']);
-    if (cu && tu) {
-      nodesT = Float64Array.from(T, (t) => toSI(t, tu, DEFAULT_AMBIENT_PA));
-      nodesC = Float64Array.from(c, (x) => x * cu.factor);
-      for (let i = 1; i < nodesT.length; i++) {
-        if (!(nodesT[i]! > nodesT[i - 1]!)) issues.push({ path: ['c', 'table', 'T', i], message: `temperatures must increase strictly; row ${i} (${T[i]}) does not exceed row ${i - 1} (${T[i - 1]})` });
-      }
-      nodesC.forEach((x, i) => {
-        if (!(x > 0)) issues.push({ path: ['c', 'table', 'c', i], message: `c must be positive; got ${c[i]}` });
-      });
-      if (Tmin !== undefined && Tmax !== undefined && nodesT.length >= 2 && (Tmin < nodesT[0]! - 1e-9 || Tmax > nodesT[nodesT.length - 1]! + 1e-9)) {
-        issues.push({ path: ['T'], message: `the valid range ${Tmin}–${Tmax} K reaches beyond the table (${nodesT[0]}–${nodesT[nodesT.length - 1]} K)` });
-      }
-    }
-  }
-
-  const model: IncompressibleModel = { heatCapacity, coefficients, nodesT, nodesC, v: 1 / (rho ?? NaN), Tmin: Tmin ?? NaN, Tmax: Tmax ?? NaN };
-  if (issues.length === 0 && heatCapacity === 'polynomial' && coefficients.length > 1) {
-    for (let k = 0; k <= 64; k++) {
-      const T = model.Tmin + ((model.Tmax - model.Tmin) * k) / 64;
-      if (!(heatCapacityAt(model, T) > 0)) {
-        issues.push({ path: ['c', 'polynomial'], message: `c(T) must be positive over the valid range; it is ${heatCapacityAt(model, T)} J/(kg·K) at ${T} K` });
-        break;
-      }
-    }
-  }
-  if (issues.length > 0) throw new DefinitionError(label, issues);
-  return { definition: def, model };
+  return compileChecked(parsed.data);
 }

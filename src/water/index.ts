@@ -9,6 +9,8 @@
  */
 export { water, waterState, waterSaturation } from './state.js';
 export type { WaterStateResult, SaturationResult, WaterPair, WaterPhase } from './state.js';
+export { waterBatch, WATER_BATCH_STATUS } from './batch.js';
+export type { WaterBatchProperty, WaterBatchInputs, WaterBatchResult } from './batch.js';
 export { approximateLiquid, compareLiquidProcess, LIQUID_APPROXIMATIONS } from './approximations.js';
 export type { LiquidApproximation, LiquidStateInput, ApproximateLiquid, Deviation, ProcessEstimate } from './approximations.js';
 export {

@@ -37,6 +37,11 @@ export const STATUS = {
   noConvergence: 2,
   /** NaN, infinite, or otherwise unusable input. */
   invalidInput: 3,
+  /**
+   * Batch only: the state was computed and is two-phase, so cp, cv, w and k are not defined there
+   * (their outputs are NaN); every other requested property is valid.
+   */
+  notDefinedInTwoPhase: 4,
 } as const;
 
 /** Phase codes. */

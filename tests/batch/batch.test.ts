@@ -1,0 +1,101 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { InvalidInputError } from '../../src/errors.js';
+import { idealGas, idealGasBatch, mixture } from '../../src/ideal-gas/index.js';
+import { quantity } from '../../src/units/index.js';
+import { STATUS, stateFromPH, stateFromPT, water, waterBatch, WaterState } from '../../src/water/index.js';
+
+describe('waterBatch', () => {
+  it('equals the per-call results bit for bit (fast-check over liquid, vapour and two-phase states)', () => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(fc.double({ min: 1e3, max: 60e6, noNaN: true }), fc.double({ min: 280, max: 1500, noNaN: true })), { minLength: 1, maxLength: 40 }), (pts) => {
+        const p = Float64Array.from(pts, ([x]) => x);
+        const T = Float64Array.from(pts, ([, y]) => y);
+        const r = waterBatch({ p, T }, ['h', 's', 'v', 'cp', 'w', 'k']);
+        const st = new WaterState();
+        pts.forEach(([pp, TT], i) => {
+          const code = stateFromPT(pp, TT, st);
+          expect(r.status[i]).toBe(code);
+          if (code === STATUS.ok) {
+            const facade = water.state({ p: quantity(pp, 'Pa'), T: quantity(TT, 'K') });
+            expect(r.h[i]).toBe(facade.h.si);
+            expect(r.s[i]).toBe(facade.s.si);
+            expect(r.v[i]).toBe(facade.v.si);
+            expect(r.cp[i]).toBe(facade.cp!.si);
+            expect(r.w[i]).toBe(facade.w!.si);
+            expect(r.k[i]).toBe(facade.k);
+          }
+        });
+      }),
+      { numRuns: 40 },
+    );
+  });
+  it('(p, h) batches equal the flash, and mark two-phase states where cp is not defined', () => {
+    const sat = water.saturation({ p: '1 MPa' });
+    const p = Float64Array.of(1e6, 1e6, 1e6);
+    const h = Float64Array.of(sat.liquid.h.si - 1e5, sat.liquid.h.si + 0.5 * sat.hfg.si, sat.vapor.h.si + 2e5);
+    const r = waterBatch({ p, h }, ['T', 'x', 'cp']);
+    const st = new WaterState();
+    stateFromPH(1e6, h[1]!, st);
+    expect(r.T[1]).toBe(st.T);
+    expect(r.x[1]).toBe(st.x);
+    expect(Array.from(r.status)).toEqual([STATUS.ok, STATUS.notDefinedInTwoPhase, STATUS.ok]);
+    expect(Number.isNaN(r.cp[1]!)).toBe(true);
+    expect(Number.isNaN(r.x[0]!)).toBe(true);
+  });
+  it('a batch salted with bad inputs marks them and computes the rest', () => {
+    const p = Float64Array.of(1e6, NaN, -5, 1e6, 200e6, 1e6, Infinity);
+    const T = Float64Array.of(300, 400, 400, 3000, 400, 500, 400);
+    const r = waterBatch({ p, T }, ['h']);
+    expect(Array.from(r.status)).toEqual([0, 3, 1, 1, 1, 0, 3]);
+    expect(r.h[0]).toBe(water.state({ p: '1 MPa', T: '300 K' }).h.si);
+    expect(Number.isNaN(r.h[1]!)).toBe(true);
+    expect(r.h[5]).toBe(water.state({ p: '1 MPa', T: '500 K' }).h.si);
+  });
+  it('fills caller-provided arrays in place', () => {
+    const h = new Float64Array(2);
+    const status = new Uint8Array(2);
+    const r = waterBatch({ p: Float64Array.of(1e5, 2e5), T: Float64Array.of(300, 310) }, ['h'], { h, status });
+    expect(r.h).toBe(h);
+    expect(r.status).toBe(status);
+    expect(h[1]).toBe(water.state({ p: '200 kPa', T: '310 K' }).h.si);
+  });
+  it('a malformed call throws (unequal lengths, unknown property)', () => {
+    expect(() => waterBatch({ p: new Float64Array(2), T: new Float64Array(3) }, ['h'])).toThrow(InvalidInputError);
+    // @ts-expect-error not a property
+    expect(() => waterBatch({ p: new Float64Array(1), T: new Float64Array(1) }, ['enthalpy'])).toThrow(/unknown property/);
+  });
+});
+
+describe('idealGasBatch', () => {
+  it('equals the per-call functions bit for bit, on mass and molar bases and for mixtures', () => {
+    for (const gas of [idealGas('N2'), idealGas('CO2', { basis: 'molar' }), mixture({ N2: 0.79, O2: 0.21 })]) {
+      const T = Float64Array.of(250, 300, 999.9, 1000, 2500);
+      const p = Float64Array.of(1e5, 2e5, 3e5, 4e5, 5e6);
+      const r = idealGasBatch(gas as ReturnType<typeof idealGas>, { T, p }, ['cp', 'cv', 'k', 'h', 'hSensible', 'u', 's', 'sStandard']);
+      T.forEach((t, i) => {
+        const q = quantity(t, 'K');
+        expect(r.cp[i]).toBe(gas.cp(q).si);
+        expect(r.cv[i]).toBe(gas.cv(q).si);
+        expect(r.k[i]).toBe(gas.k(q));
+        expect(r.h[i]).toBe(gas.h(q).si);
+        expect(r.hSensible[i]).toBe(gas.hSensible(q).si);
+        expect(r.u[i]).toBe(gas.u(q).si);
+        expect(r.s[i]).toBe(gas.s(q, quantity(p[i]!, 'Pa')).si);
+        expect(r.sStandard[i]).toBe(gas.sStandard(q).si);
+      });
+    }
+  });
+  it('marks bad elements: outside the data, p ≤ 0, NaN', () => {
+    const r = idealGasBatch(idealGas('air'), { T: Float64Array.of(300, 9000, NaN, 400), p: Float64Array.of(1e5, 1e5, 1e5, 0) }, ['s', 'cp']);
+    expect(Array.from(r.status)).toEqual([0, 1, 3, 1]);
+    expect(Number.isNaN(r.cp[1]!)).toBe(true);
+  });
+  it('extrapolates only for a gas made with { extrapolate: true }', () => {
+    const r = idealGasBatch(idealGas('N2', { extrapolate: true }), { T: Float64Array.of(7000) }, ['cp']);
+    expect(r.status[0]).toBe(0);
+  });
+  it('s without pressures is a malformed call', () => {
+    expect(() => idealGasBatch(idealGas('air'), { T: new Float64Array(2) }, ['s'])).toThrow(InvalidInputError);
+  });
+});
