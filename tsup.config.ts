@@ -1,22 +1,35 @@
 import { defineConfig } from 'tsup';
 
-/** One entry per public subpath, so a user who imports only `heatstate/units` loads nothing else. */
-export default defineConfig({
-  entry: {
-    index: 'src/index.ts',
-    'units/index': 'src/units/index.ts',
-    'incompressible/index': 'src/incompressible/index.ts',
-    'ideal-gas/index': 'src/ideal-gas/index.ts',
-    'water/index': 'src/water/index.ts',
-    'tables/index': 'src/tables/index.ts',
-    'tables/water/index': 'src/tables/water.ts',
+export default defineConfig([
+  /** One entry per public subpath, so a user who imports only `heatstate/units` loads nothing else. */
+  {
+    entry: {
+      index: 'src/index.ts',
+      'units/index': 'src/units/index.ts',
+      'incompressible/index': 'src/incompressible/index.ts',
+      'ideal-gas/index': 'src/ideal-gas/index.ts',
+      'water/index': 'src/water/index.ts',
+      'tables/index': 'src/tables/index.ts',
+      'tables/water/index': 'src/tables/water.ts',
+    },
+    format: ['esm', 'cjs'],
+    dts: true,
+    sourcemap: true,
+    clean: true,
+    splitting: true,
+    treeshake: true,
+    target: 'node20',
+    outDir: 'dist',
   },
-  format: ['esm', 'cjs'],
-  dts: true,
-  sourcemap: true,
-  clean: true,
-  splitting: true,
-  treeshake: true,
-  target: 'node20',
-  outDir: 'dist',
-});
+  /** The command-line tool (ESM, with its shebang). */
+  {
+    entry: { cli: 'src/cli/main.ts' },
+    format: ['esm'],
+    sourcemap: false,
+    clean: false,
+    splitting: false,
+    treeshake: true,
+    target: 'node20',
+    outDir: 'dist',
+  },
+]);

@@ -18,7 +18,16 @@ describe('examples/', () => {
       .filter((d) => d.isFile() && /\.(ts|mjs|html|csv)$/.test(d.name))
       .map((d) => `${d.parentPath.slice(d.parentPath.indexOf('examples') + 9)}/${d.name}`.replace(/^\//, ''))
       .sort();
-    expect(files).toEqual(['demo.ts', 'worker-pool/main.mjs', 'worker-pool/worker.mjs']);
+    expect(files).toEqual([
+      'browser/index.html',
+      'demo.ts',
+      'metering/metering.ts',
+      'metering/readings.csv',
+      'node-script.ts',
+      'serverless-handler.ts',
+      'worker-pool/main.mjs',
+      'worker-pool/worker.mjs',
+    ]);
   });
 
   it('demo.ts (npm start) prints each result in SI and US units and the caution', () => {
@@ -27,6 +36,24 @@ describe('examples/', () => {
     expect(out).toMatch(/temperature rise.*30 ΔK\s+54 Δ°F/);
     expect(out).toContain('OutOfRangeError [range.outside]');
     expect(out).toMatch(/licensed professionals/);
+  });
+
+  it('node-script.ts computes a turbine in both unit systems, matching the library', async () => {
+    const out = run('examples/node-script.ts');
+    const { water, quantity } = await import('../src/index.js');
+    const inlet = water.state({ p: quantity(30, 'barg'), T: '400 °C' });
+    expect(out).toContain(`${Number(inlet.h.in('kJ/kg').toPrecision(4))} kJ/kg`);
+    expect(out).toContain(`${Number(inlet.h.in('Btu/lbm').toPrecision(4))} Btu/lbm`);
+    expect(out).toMatch(/shaft power\s+\d+(\.\d+)? kW\s+\d+(\.\d+)? hp/);
+  });
+
+  it('metering/metering.ts turns the sensor CSV into heat flow with the batch API', async () => {
+    const out = run('examples/metering/metering.ts');
+    const { water } = await import('../src/water/index.js');
+    // first reading: 7.9 barg, 201.5 °C, 1.42 kg/s, condensate returned at 8 barg and 60 °C
+    const q = 1.42 * (water.state({ p: '7.9 barg', T: '201.5 °C' }).h.si - water.state({ p: '8 barg', T: '60 °C' }).h.si);
+    expect(out).toMatch(new RegExp(`^\\s+0\\s+891\\.3\\s+201\\.5\\s+1\\.42\\s+\\d+\\.\\d\\s+${(q / 1e3).toFixed(0)}$`, 'm'));
+    expect(out).toMatch(/heat delivered over 1\.17 h: \d+\.\d{3} MWh/);
   });
 
   it('worker-pool/main.mjs spreads a batch over a piscina pool and matches one thread exactly', () => {
