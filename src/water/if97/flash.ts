@@ -549,6 +549,10 @@ function pressureSpanFor(h: number): boolean {
   };
   span[0] = validPH(P_HS_MIN, h) ? P_HS_MIN : edge(inside, P_HS_MIN);
   span[1] = validPH(P_MAX, h) ? P_MAX : edge(inside, P_MAX);
+  // at an edge set by a temperature limit, validity flickers within rounding: step the ends inward
+  // until the flash succeeds there, so that the search can evaluate them
+  for (let k = 0; k < 40 && !validPH(span[0]!, h); k++) span[0] = span[0]! * (1 + 1e-13 * 2 ** k);
+  for (let k = 0; k < 40 && !validPH(span[1]!, h); k++) span[1] = span[1]! * (1 - 1e-13 * 2 ** k);
   return true;
 }
 
@@ -590,8 +594,10 @@ function bracketHS(h: number, s: number, out: WaterState): number {
   const pLo = span[0]!;
   const pHi = span[1]!;
   let failed = false;
-  // exp(log(p)) may round outside the span: clamp to it
-  const pressureOf = (lnp: number): number => Math.min(pHi, Math.max(pLo, Math.exp(lnp)));
+  // exp(log(p)) may round outside the span: clamp to it, and evaluate the ends themselves exactly
+  const lnLo = Math.log(pLo);
+  const lnHi = Math.log(pHi);
+  const pressureOf = (lnp: number): number => (lnp <= lnLo ? pLo : lnp >= lnHi ? pHi : Math.min(pHi, Math.max(pLo, Math.exp(lnp))));
   const f = (lnp: number): number => {
     const st = stateFromPH(pressureOf(lnp), h, hsState);
     if (st !== STATUS.ok) {
@@ -600,14 +606,14 @@ function bracketHS(h: number, s: number, out: WaterState): number {
     }
     return hsState.s - s;
   };
-  const fLo = f(Math.log(pLo));
-  const fHi = f(Math.log(pHi));
+  const fLo = f(lnLo);
+  const fHi = f(lnHi);
   if (failed) return STATUS.outOfRange;
   // at the ends of the span, accept a miss within the (p, h) flash tolerance
   const roundoff = 1e-9 * Math.abs(s) + 1e-9;
   if (fLo < 0) return fLo >= -roundoff ? stateFromPH(pLo, h, out) : STATUS.outOfRange;
   if (fHi > 0) return fHi <= roundoff ? stateFromPH(pHi, h, out) : STATUS.outOfRange;
-  const lnp = brentRoot(f, Math.log(pLo), Math.log(pHi), 1e-15);
+  const lnp = brentRoot(f, lnLo, lnHi, 1e-15);
   if (failed || Number.isNaN(lnp)) return STATUS.noConvergence;
   return stateFromPH(pressureOf(lnp), h, out);
 }
