@@ -14,7 +14,7 @@ export default defineConfig([
     },
     format: ['esm', 'cjs'],
     dts: true,
-    sourcemap: true,
+    sourcemap: false,
     clean: true,
     splitting: true,
     treeshake: true,

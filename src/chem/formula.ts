@@ -11,12 +11,25 @@ import { FormulaError } from '../errors.js';
 
 const WEIGHTS: Readonly<Record<string, number>> = atomicWeights.elements;
 
-/** Standard atomic weight (g/mol) of an element symbol, or `undefined` if heatstate has none. */
+/**
+ * Standard atomic weight (g/mol) of an element symbol, or `undefined` if heatstate has none.
+ * @example
+ * ```ts
+ * atomicWeight('C');    //=> 12.011
+ * atomicWeight('Sn');   //=> undefined (not in heatstate's list)
+ * ```
+ */
 export function atomicWeight(symbol: string): number | undefined {
   return Object.prototype.hasOwnProperty.call(WEIGHTS, symbol) ? WEIGHTS[symbol] : undefined;
 }
 
-/** Element symbols heatstate has atomic weights for. */
+/**
+ * Element symbols heatstate has atomic weights for.
+ * @example
+ * ```ts
+ * knownElements().length;   //=> 41
+ * ```
+ */
 export function knownElements(): string[] {
   return Object.keys(WEIGHTS);
 }

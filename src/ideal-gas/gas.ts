@@ -389,7 +389,13 @@ export function moleToMassFractions(composition: Composition, options?: { readon
   return Object.fromEntries(names.map((n, i) => [n, (y[i]! * M[i]!) / total]));
 }
 
-/** Converts mass fractions to mole fractions: yᵢ = (wᵢ/Mᵢ) / Σ (wⱼ/Mⱼ). */
+/**
+ * Converts mass fractions to mole fractions: yᵢ = (wᵢ/Mᵢ) / Σ (wⱼ/Mⱼ).
+ * @example
+ * ```ts
+ * massToMoleFractions({ N2: 0.767, O2: 0.233 });   //=> { N2: 0.7899…, O2: 0.2101… }
+ * ```
+ */
 export function massToMoleFractions(composition: Composition, options?: { readonly normalize?: boolean }): Record<string, number> {
   const [names, w] = checkFractions(composition, options?.normalize === true);
   const M = names.map((n) => speciesModel(n).model.M);
@@ -437,6 +443,10 @@ export const DRY_AIR_MOLE_FRACTIONS: Composition = Object.freeze({ N2: 0.7808, O
 /**
  * Dry air as a defined mixture of N2, O2, Ar and CO2 ({@link DRY_AIR_MOLE_FRACTIONS}).
  * Compare `idealGas('air')`, the same air as one pseudo-species.
+ * @example
+ * ```ts
+ * dryAir().M.in('g/mol');   //=> 28.966
+ * ```
  */
 export function dryAir(options?: IdealGasOptions<'mass'>): IdealGas<'mass'> {
   return mixture(DRY_AIR_MOLE_FRACTIONS, { ...options, name: 'dry air (mixture)' });

@@ -33,7 +33,13 @@ export interface IdealGasModel {
   sR(T: number): number;
 }
 
-/** Converts the older 7-coefficient form [c1..c7] to the nine constants [a1..a7, b1, b2]. */
+/**
+ * Converts the older 7-coefficient form [c1..c7] to the nine constants [a1..a7, b1, b2].
+ * @example
+ * ```ts
+ * fromSevenCoefficients([3.5, 0, 0, 0, 0, -1000, 4]);   //=> [0, 0, 3.5, 0, 0, 0, 0, -1000, 4]
+ * ```
+ */
 export function fromSevenCoefficients(c: ArrayLike<number>): number[] {
   return [0, 0, c[0]!, c[1]!, c[2]!, c[3]!, c[4]!, c[5]!, c[6]!];
 }
@@ -158,7 +164,14 @@ export class ConstantCpModel implements IdealGasModel {
   }
 }
 
-/** A constant-cp model frozen from another model at T0 (default 298.15 K): same h° and s° at T0. */
+/**
+ * A constant-cp model frozen from another model at T0 (default 298.15 K): same h° and s° at T0.
+ * @example
+ * ```ts
+ * const cold = constantCpFrom(idealGas('air').core);   // cp frozen at 298.15 K
+ * cold.cpR(1000) === cold.cpR(300);                   //=> true
+ * ```
+ */
 export function constantCpFrom(model: IdealGasModel, T0 = REFERENCE_TEMPERATURE_K): ConstantCpModel {
   return new ConstantCpModel(model.M, model.cpR(T0), T0, model.hRT(T0) * T0, model.sR(T0), model.Tmin, model.Tmax);
 }
@@ -222,6 +235,12 @@ export class MixtureModel implements IdealGasModel {
  * Folds an ideal mixture of NASA polynomial models that share Tmid into one model: the constants
  * are mole-fraction averages, and −Σ yᵢ ln yᵢ is added to b2 (entropy of mixing). Returns
  * `undefined` when the components split at different temperatures.
+ * @example
+ * ```ts
+ * const n2 = idealGas('N2').core as NasaPolynomialModel;
+ * const o2 = idealGas('O2').core as NasaPolynomialModel;
+ * mixNasa([n2, o2], [0.79, 0.21])?.M;   //=> 0.028851 (kg/mol)
+ * ```
  */
 export function mixNasa(parts: readonly NasaPolynomialModel[], moleFractions: ArrayLike<number>): NasaPolynomialModel | undefined {
   const Tmid = parts[0]!.Tmid;

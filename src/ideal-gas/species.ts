@@ -53,17 +53,36 @@ for (const r of RECORDS) {
 }
 const compiled = new Map<SpeciesRecord, NasaPolynomialModel>();
 
-/** The records of all built-in species. */
+/**
+ * The records of all built-in species.
+ * @example
+ * ```ts
+ * speciesRecords().length;   //=> 27
+ * ```
+ */
 export function speciesRecords(): readonly SpeciesRecord[] {
   return RECORDS;
 }
 
-/** Identifiers of all built-in species. */
+/**
+ * Identifiers of all built-in species.
+ * @example
+ * ```ts
+ * speciesNames().slice(0, 3);   //=> ['N2', 'O2', 'Ar']
+ * ```
+ */
 export function speciesNames(): string[] {
   return RECORDS.map((r) => r.id);
 }
 
-/** The record for a formula (exact case: `CO` is carbon monoxide, `Co` is not a gas here) or a name (any case). */
+/**
+ * The record for a formula (exact case: `CO` is carbon monoxide, `Co` is not a gas here) or a name (any case).
+ * @example
+ * ```ts
+ * findSpecies('nitrogen')?.id;   //=> 'N2'
+ * findSpecies('Co');             //=> undefined (cobalt is not a gas here; 'CO' is carbon monoxide)
+ * ```
+ */
 export function findSpecies(nameOrFormula: string): SpeciesRecord | undefined {
   return byFormula.get(nameOrFormula.trim()) ?? byKey.get(normaliseName(nameOrFormula));
 }

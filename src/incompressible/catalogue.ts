@@ -18,12 +18,24 @@ for (const entry of ENTRIES) {
 }
 const compiled = new Map<IncompressibleDefinition, CompiledSubstance>();
 
-/** Names of the built-in substances. */
+/**
+ * Names of the built-in substances.
+ * @example
+ * ```ts
+ * incompressibleNames().includes('engine oil');   //=> true
+ * ```
+ */
 export function incompressibleNames(): string[] {
   return ENTRIES.map((e) => e.name);
 }
 
-/** The raw definitions of the built-in substances, as stored in data/. */
+/**
+ * The raw definitions of the built-in substances, as stored in data/.
+ * @example
+ * ```ts
+ * incompressibleCatalogue().find((d) => d.name === 'copper')?.source?.title;
+ * ```
+ */
 export function incompressibleCatalogue(): readonly IncompressibleDefinition[] {
   return ENTRIES;
 }

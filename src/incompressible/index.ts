@@ -124,3 +124,4 @@ export function incompressible(nameOrDefinition: string | IncompressibleDefiniti
     },
   };
 }
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';

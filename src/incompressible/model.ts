@@ -29,22 +29,47 @@ export interface IncompressibleModel {
   readonly Tmax: number;
 }
 
-/** c(T) in J/(kg·K). */
+/**
+ * c(T) in J/(kg·K).
+ * @example
+ * ```ts
+ * heatCapacityAt(lookupIncompressible('water').model, 298.15);   //=> 4182.25 (J/(kg·K))
+ * ```
+ */
 export function heatCapacityAt(m: IncompressibleModel, T: number): number {
   return m.heatCapacity === 'polynomial' ? polynomialValue(m.coefficients, T) : piecewiseLinear(m.nodesT, m.nodesC, T);
 }
 
-/** Δu = ∫ c dT from T1 to T2, in J/kg. */
+/**
+ * Δu = ∫ c dT from T1 to T2, in J/kg.
+ * @example
+ * ```ts
+ * internalEnergyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 251.1e3 (J/kg)
+ * ```
+ */
 export function internalEnergyChange(m: IncompressibleModel, T1: number, T2: number): number {
   return m.heatCapacity === 'polynomial' ? polynomialIntegral(m.coefficients, T1, T2) : piecewiseLinearIntegral(m.nodesT, m.nodesC, T1, T2);
 }
 
-/** Δs = ∫ c/T dT from T1 to T2, in J/(kg·K). */
+/**
+ * Δs = ∫ c/T dT from T1 to T2, in J/(kg·K).
+ * @example
+ * ```ts
+ * entropyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 779 (J/(kg·K))
+ * ```
+ */
 export function entropyChange(m: IncompressibleModel, T1: number, T2: number): number {
   return m.heatCapacity === 'polynomial' ? polynomialOverXIntegral(m.coefficients, T1, T2) : piecewiseLinearIntegral(m.nodesT, m.nodesC, T1, T2, true);
 }
 
-/** Δh = Δu + v·(p2 − p1), in J/kg. */
+/**
+ * Δh = Δu + v·(p2 − p1), in J/kg.
+ * @example
+ * ```ts
+ * const { model } = lookupIncompressible('water');
+ * enthalpyChange(model, 293.15, 1e5, 293.15, 5e6);   //=> 4914.7 (J/kg: v·Δp)
+ * ```
+ */
 export function enthalpyChange(m: IncompressibleModel, T1: number, p1: number, T2: number, p2: number): number {
   return internalEnergyChange(m, T1, T2) + m.v * (p2 - p1);
 }

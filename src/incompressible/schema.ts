@@ -61,6 +61,11 @@ export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSc
 /**
  * Validates a definition (shape with zod, then units, ranges and monotonicity) and compiles it.
  * @throws {@link DefinitionError} listing every problem with its path
+ * @example
+ * ```ts
+ * compileDefinition({ name: 'brine', state: 'liquid', c: '3.6 kJ/(kg·K)', density: '1180 kg/m³', T: { min: '-20 °C', max: '40 °C' } }).model.v;   //=> 0.000847 (m³/kg)
+ * compileDefinition({ name: 'x', state: 'gas' });   // throws DefinitionError naming each bad field
+ * ```
  */
 export function compileDefinition(input: unknown): CompiledSubstance {
   const parsed = incompressibleDefinitionSchema.safeParse(input);

@@ -11,3 +11,4 @@ export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';
 export type { CsvOptions } from './load.js';
 export { tableSchema, gridSchema, columnSchema, axisSchema, tableSourceSchema } from './schema.js';
 export type { TableData, GridData } from './schema.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';

@@ -12,15 +12,25 @@ import { PropertyGrid, PropertyTable } from './table.js';
 import type { GridData, TableData } from './schema.js';
 
 /**
- * A one-dimensional table from JSON text or an already-parsed object (see {@link tableSchema}).
+ * A one-dimensional table from JSON text or an already-parsed object (see `tableSchema`).
  * @throws {@link DefinitionError} naming the row and column of each problem
+ * @example
+ * ```ts
+ * tableFromJSON(readFileSync('pump-curve.json', 'utf8')).lookup('head', '120 m³/h');
+ * ```
  */
 export function tableFromJSON(json: string | object): PropertyTable {
   const data = typeof json === 'string' ? parseJSON(json) : json;
   return new PropertyTable(data as TableData);
 }
 
-/** A grid table from JSON text or an already-parsed object (see {@link gridSchema}). */
+/**
+ * A grid table from JSON text or an already-parsed object (see `gridSchema`).
+ * @example
+ * ```ts
+ * gridFromJSON(readFileSync('superheated.json', 'utf8')).lookup('h', { p: '1 MPa', T: '300 °C' });
+ * ```
+ */
 export function gridFromJSON(json: string | object): PropertyGrid {
   const data = typeof json === 'string' ? parseJSON(json) : json;
   return new PropertyGrid(data as GridData);

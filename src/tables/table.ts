@@ -522,7 +522,15 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
   }
 }
 
-/** Builds and validates a grid table; the type parameters follow from its columns and axes. */
+/**
+ * Builds and validates a grid table; the type parameters follow from its columns and axes.
+ * @example
+ * ```ts
+ * const g = defineGrid({ kind: 'grid', name: 'g', source: 'test', x: { name: 'T', unit: 'K', values: [300, 400] }, y: { name: 'p', unit: 'MPa', values: [1, 2] },
+ *   columns: { h: { unit: 'kJ/kg', values: [[301, 401], [302, 402]] } } } as const);
+ * g.lookup('h', { T: '350 K', p: '1.5 MPa' }).value.in('kJ/kg');   //=> 351.5
+ * ```
+ */
 export function defineGrid<const D extends GridData>(data: D): PropertyGrid<Extract<keyof D['columns'], string>, D['x']['name'], D['y']['name']> {
   return new PropertyGrid(data) as PropertyGrid<Extract<keyof D['columns'], string>, D['x']['name'], D['y']['name']>;
 }

@@ -265,6 +265,11 @@ export function temperatureDifference(value: number, unit: UnitOf<'temperature'>
  * @param dimension what it must be
  * @param parameter its name in the caller's API, for messages (`T`, `p`, `T1`)
  * @throws {@link DimensionError} wrong dimension; {@link InvalidInputError} NaN, infinity, bare number
+ * @example
+ * ```ts
+ * readQuantity('14.7 psig', 'pressure', 'p');   //=> 202677.9 (Pa)
+ * readQuantity('300 K', 'pressure', 'p');      // throws DimensionError: p must be a pressure
+ * ```
  */
 export function readQuantity<D extends Dimension>(input: QuantityLike<D>, dimension: D, parameter: string): number {
   let q: Quantity;

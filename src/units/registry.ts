@@ -97,6 +97,11 @@ function resolveUncached(text: string): ResolvedUnit {
 /**
  * Resolves unit text (`"psia"`, `"kJ/(kg·K)"`, `"Δ°F"`, `"psig"`) to its dimension and factor.
  * Throws {@link UnitError} for unknown names, bad syntax or unsupported dimensions.
+ * @example
+ * ```ts
+ * resolveUnit('Btu/(lbm·°R)').factor;   //=> 4186.8
+ * resolveUnit('°F').kind;              //=> 'temperature'
+ * ```
  */
 export function resolveUnit(text: string): ResolvedUnit {
   const hit = cache.get(text);

@@ -40,3 +40,4 @@ export { b23Pressure, b23Temperature } from './if97/b23.js';
 export { region1TemperaturePH, region2TemperaturePH, b2bcEnthalpy, b2bcPressure } from './if97/backward-ph.js';
 export { region1TemperaturePS, region2TemperaturePS } from './if97/backward-ps.js';
 export * from './if97/constants.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';

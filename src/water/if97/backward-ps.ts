@@ -8,12 +8,24 @@
  */
 import { backward1PS, backward2aPS, backward2bPS, backward2cPS } from './kernels.generated.js';
 
-/** Region 1: T(p, s) in K, p in Pa, s in J/(kg·K) (Eq. 13). */
+/**
+ * Region 1: T(p, s) in K, p in Pa, s in J/(kg·K) (Eq. 13).
+ * @example
+ * ```ts
+ * region1TemperaturePS(3e6, 500);   //=> 307.842258 (K; IF97 Table 9)
+ * ```
+ */
 export function region1TemperaturePS(p: number, s: number): number {
   return backward1PS(p / 1e6, s / 1e3 + 2);
 }
 
-/** Region 2: T(p, s) in K, choosing subregion 2a (p ≤ 4 MPa), 2b (s ≥ 5.85 kJ/(kg·K)) or 2c. */
+/**
+ * Region 2: T(p, s) in K, choosing subregion 2a (p ≤ 4 MPa), 2b (s ≥ 5.85 kJ/(kg·K)) or 2c.
+ * @example
+ * ```ts
+ * region2TemperaturePS(0.1e6, 7500);   //=> 399.517097 (K; IF97 Table 29)
+ * ```
+ */
 export function region2TemperaturePS(p: number, s: number): number {
   const pi = p / 1e6;
   if (p <= 4e6) return backward2aPS(Math.sqrt(Math.sqrt(pi)), s / 2e3 - 2);

@@ -73,6 +73,11 @@ const pr = new Float64Array(2);
 /**
  * The IF97 region of (p [Pa], T [K]): 1, 2, 3 or 5; 0 outside the range of IF97.
  * On the saturation line itself (p = p_s(T)), the liquid (region 1) is returned.
+ * @example
+ * ```ts
+ * regionOfPT(1e6, 300);    //=> 1
+ * regionOfPT(1e6, 3000);   //=> 0 (outside IF97)
+ * ```
  */
 export function regionOfPT(p: number, T: number): number {
   if (!(p > 0) || !(T >= T_MIN) || !(T <= T_MAX_5) || !(p <= P_MAX)) return 0;
@@ -150,6 +155,10 @@ function polishDensity(p: number, T: number, a: number, b: number): number {
  * for the liquid, from the low-density end up for the vapour, in steps a tenth of the width of the
  * two-phase loop (sized by the SR1-86 saturated densities) wherever the loop could be crossed.
  * Returns NaN when no root is found.
+ * @example
+ * ```ts
+ * region3Density(25.5837018e6, 650);   //=> 500 (kg/m³)
+ * ```
  */
 export function region3Density(p: number, T: number, branch: 0 | 1 | 2 = 0): number {
   if (T >= T_CRITICAL) {
@@ -186,6 +195,12 @@ export function region3Density(p: number, T: number, branch: 0 | 1 | 2 = 0): num
 /**
  * All properties at (p [Pa], T [K]). Status `outOfRange` outside IF97. On the saturation line the
  * liquid is returned (use the saturation functions for both phases).
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromPT(10e6, 773.15, out);   //=> 0; out.h = 3375058 J/kg, out.region = 2
+ * stateFromPT(10e6, 3000, out);     //=> 1 (STATUS.outOfRange)
+ * ```
  */
 export function stateFromPT(p: number, T: number, out: WaterState): number {
   if (!Number.isFinite(p) || !Number.isFinite(T)) return STATUS.invalidInput;
@@ -218,6 +233,11 @@ export function stateFromPT(p: number, T: number, out: WaterState): number {
 /**
  * Saturated liquid and vapour at T (K), 273.15 K ≤ T ≤ 647.096 K. Below 623.15 K from regions 1
  * and 2 at p_s(T); above, from region 3 at the two densities where its pressure equals p_s(T).
+ * @example
+ * ```ts
+ * const liquid = new WaterProperties(), vapor = new WaterProperties();
+ * saturationAtT(373.15, liquid, vapor);   //=> 0 (STATUS.ok); liquid.p = 101418 Pa
+ * ```
  */
 export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterProperties): number {
   if (!Number.isFinite(T)) return STATUS.invalidInput;
@@ -243,7 +263,14 @@ export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterPr
   return STATUS.ok;
 }
 
-/** Saturated liquid and vapour at p (Pa), 611.213 Pa ≤ p ≤ 22.064 MPa. */
+/**
+ * Saturated liquid and vapour at p (Pa), 611.213 Pa ≤ p ≤ 22.064 MPa.
+ * @example
+ * ```ts
+ * const liquid = new WaterProperties(), vapor = new WaterProperties();
+ * saturationAtP(101325, liquid, vapor);   //=> 0 (STATUS.ok); vapor.h - liquid.h is h_fg
+ * ```
+ */
 export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterProperties): number {
   if (!Number.isFinite(p)) return STATUS.invalidInput;
   if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) return STATUS.outOfRange;
@@ -278,7 +305,14 @@ function mix(x: number, liquid: WaterProperties, vapor: WaterProperties, out: Wa
   return STATUS.ok;
 }
 
-/** The two-phase mixture of quality x (0 ≤ x ≤ 1) at T (K). */
+/**
+ * The two-phase mixture of quality x (0 ≤ x ≤ 1) at T (K).
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromTX(373.15, 0, out);   //=> 0; out.h = 419.1e3 J/kg
+ * ```
+ */
 export function stateFromTX(T: number, x: number, out: WaterState): number {
   if (!Number.isFinite(T) || !Number.isFinite(x)) return STATUS.invalidInput;
   if (!(x >= 0 && x <= 1)) return STATUS.outOfRange;
@@ -286,7 +320,14 @@ export function stateFromTX(T: number, x: number, out: WaterState): number {
   return status === STATUS.ok ? mix(x, scratch, scratchB, out) : status;
 }
 
-/** The two-phase mixture of quality x (0 ≤ x ≤ 1) at p (Pa). */
+/**
+ * The two-phase mixture of quality x (0 ≤ x ≤ 1) at p (Pa).
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromPX(1e6, 0.9, out);   //=> 0; out.region = 4, out.cp is NaN (not defined)
+ * ```
+ */
 export function stateFromPX(p: number, x: number, out: WaterState): number {
   if (!Number.isFinite(p) || !Number.isFinite(x)) return STATUS.invalidInput;
   if (!(x >= 0 && x <= 1)) return STATUS.outOfRange;
@@ -501,12 +542,27 @@ function stateFromPAnd(p: number, target: number, by: number, out: WaterState): 
   return gasSide(p, target, by, TB, 5, out);
 }
 
-/** The state at p (Pa) and specific enthalpy h (J/kg). */
+/**
+ * The state at p (Pa) and specific enthalpy h (J/kg).
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromPH(1e6, 3000e3, out);   //=> 0; out.T = 549.1 K
+ * stateFromPH(1e6, 9e6, out);      //=> 1 (STATUS.outOfRange)
+ * ```
+ */
 export function stateFromPH(p: number, h: number, out: WaterState): number {
   return stateFromPAnd(p, h, BY_H, out);
 }
 
-/** The state at p (Pa) and specific entropy s (J/(kg·K)). */
+/**
+ * The state at p (Pa) and specific entropy s (J/(kg·K)).
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromPS(10e6, 6.6e3, out);   //=> 0; out.T ≈ 773 K
+ * ```
+ */
 export function stateFromPS(p: number, s: number, out: WaterState): number {
   return stateFromPAnd(p, s, BY_S, out);
 }
@@ -561,6 +617,11 @@ function pressureSpanFor(h: number): boolean {
  * strictly with pressure ((∂s/∂p)_h = −v/T), in every region and across the saturation dome, so p
  * follows from a bracketed one-dimensional search on the (p, h) flash. Pressures below 1 mPa are
  * not searched.
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromHS(3000e3, 6.8e3, out);   //=> 0 (STATUS.ok); out.p ≈ 1.69e6 Pa
+ * ```
  */
 export function stateFromHS(h: number, s: number, out: WaterState): number {
   if (!Number.isFinite(h) || !Number.isFinite(s)) return STATUS.invalidInput;
@@ -624,6 +685,11 @@ function bracketHS(h: number, s: number, out: WaterState): number {
  * The state at T (K) and specific volume v (m³/kg). Inside the dome, the two-phase mixture with
  * x = (v − v′)/(v″ − v′); in region 3 directly from f(ρ, T); elsewhere p from a bracketed search
  * on v(p, T), which falls strictly with p.
+ * @example
+ * ```ts
+ * const out = new WaterState();
+ * stateFromTV(773.15, 0.0328, out);   //=> 0; out.p ≈ 10 MPa
+ * ```
  */
 export function stateFromTV(T: number, v: number, out: WaterState): number {
   if (!Number.isFinite(T) || !Number.isFinite(v)) return STATUS.invalidInput;

@@ -4,6 +4,10 @@
  *
  * @module
  */
+/**
+ * Properties of one water state in SI units, filled by the IF97 kernels (`region1`, `region2`, …) and
+ * the saturation functions. Create one and reuse it: the kernels write into it without allocating.
+ */
 export class WaterProperties {
   /** Temperature, K. */
   T = 0;

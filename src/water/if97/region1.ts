@@ -15,7 +15,14 @@ const P_STAR = data.pStar;
 const T_STAR = data.TStar;
 const g = new Float64Array(6);
 
-/** Fills `out` with all properties at (p [Pa], T [K]) from the region 1 equation. */
+/**
+ * Fills `out` with all properties at (p [Pa], T [K]) from the region 1 equation.
+ * @example
+ * ```ts
+ * const out = new WaterProperties();
+ * region1(3e6, 300, out).h;   //=> 115331.273 (J/kg; IF97 Table 5)
+ * ```
+ */
 export function region1(p: number, T: number, out: WaterProperties): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;

@@ -63,7 +63,13 @@ function evaluate(p: number, T: number, out: WaterProperties, metastable: boolea
   return out;
 }
 
-/** Fills `out` with all properties at (p [Pa], T [K]) from the region 2 equation. */
+/**
+ * Fills `out` with all properties at (p [Pa], T [K]) from the region 2 equation.
+ * @example
+ * ```ts
+ * region2(0.0035e6, 700, new WaterProperties()).h;   //=> 3335683.75 (J/kg; IF97 Table 15)
+ * ```
+ */
 export function region2(p: number, T: number, out: WaterProperties): WaterProperties {
   return evaluate(p, T, out, false);
 }
@@ -71,6 +77,10 @@ export function region2(p: number, T: number, out: WaterProperties): WaterProper
 /**
  * Fills `out` from the metastable-vapour equation (Eq. 18), valid from the saturated-vapour line
  * to the 5 % equilibrium-moisture line for 0 < p ≤ 10 MPa.
+ * @example
+ * ```ts
+ * region2Metastable(1e6, 450, new WaterProperties()).v;   //=> 0.19251654 (m³/kg; IF97 Table 18)
+ * ```
  */
 export function region2Metastable(p: number, T: number, out: WaterProperties): WaterProperties {
   return evaluate(p, T, out, true);

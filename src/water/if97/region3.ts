@@ -16,7 +16,13 @@ const RHO_STAR = data.rhoStar;
 const T_STAR = data.TStar;
 const f = new Float64Array(6);
 
-/** Fills `out` with all properties at (ρ [kg/m³], T [K]) from the region 3 equation. */
+/**
+ * Fills `out` with all properties at (ρ [kg/m³], T [K]) from the region 3 equation.
+ * @example
+ * ```ts
+ * region3(500, 650, new WaterProperties()).p;   //=> 25.5837018e6 (Pa; IF97 Table 33)
+ * ```
+ */
 export function region3(rho: number, T: number, out: WaterProperties): WaterProperties {
   const delta = rho / RHO_STAR;
   const tau = T_STAR / T;

@@ -10,7 +10,13 @@ import data from '../../../data/if97/region4.json';
 
 const [n1, n2, n3, n4, n5, n6, n7, n8, n9, n10] = data.n as [number, number, number, number, number, number, number, number, number, number];
 
-/** Saturation pressure p_s(T) in Pa, T in K (Eq. 30). */
+/**
+ * Saturation pressure p_s(T) in Pa, T in K (Eq. 30).
+ * @example
+ * ```ts
+ * saturationPressure(300);   //=> 3536.58941 (Pa; IF97 Table 35)
+ * ```
+ */
 export function saturationPressure(T: number): number {
   const th = T + n9 / (T - n10);
   const A = th * th + n1 * th + n2;
@@ -21,7 +27,13 @@ export function saturationPressure(T: number): number {
   return x2 * x2 * 1e6;
 }
 
-/** Saturation temperature T_s(p) in K, p in Pa (Eq. 31). */
+/**
+ * Saturation temperature T_s(p) in K, p in Pa (Eq. 31).
+ * @example
+ * ```ts
+ * saturationTemperature(0.1e6);   //=> 372.755919 (K; IF97 Table 36)
+ * ```
+ */
 export function saturationTemperature(p: number): number {
   const beta = Math.sqrt(Math.sqrt(p / 1e6));
   const E = beta * beta + n3 * beta + n6;

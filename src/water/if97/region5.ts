@@ -16,7 +16,13 @@ const T_STAR = data.TStar;
 const g = new Float64Array(3);
 const r = new Float64Array(6);
 
-/** Fills `out` with all properties at (p [Pa], T [K]) from the region 5 equation. */
+/**
+ * Fills `out` with all properties at (p [Pa], T [K]) from the region 5 equation.
+ * @example
+ * ```ts
+ * region5(0.5e6, 1500, new WaterProperties()).h;   //=> 5219768.55 (J/kg; IF97 Table 42)
+ * ```
+ */
 export function region5(p: number, T: number, out: WaterProperties): WaterProperties {
   const pi = p / P_STAR;
   const tau = T_STAR / T;

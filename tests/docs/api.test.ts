@@ -1,0 +1,49 @@
+/**
+ * The API reference builds (typedoc, as `npm run docs` does), and every export of the documented
+ * entries has a summary; every exported function also shows an example.
+ */
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+interface Reflection {
+  name: string;
+  kind: number;
+  comment?: { summary?: { text: string }[]; blockTags?: { tag: string }[] };
+  signatures?: Reflection[];
+  children?: Reflection[];
+}
+
+const KIND = { function: 64, class: 128, interface: 256, typeAlias: 2097152, variable: 32, enum: 8 };
+const hasSummary = (c: Reflection['comment']) => (c?.summary ?? []).some((p) => p.text.trim() !== '');
+
+describe('API reference (typedoc)', () => {
+  const root = fileURLToPath(new URL('../..', import.meta.url));
+  const out = join(mkdtempSync(join(tmpdir(), 'heatstate-docs-')), 'api.json');
+  const log = execFileSync(fileURLToPath(new URL('../../node_modules/.bin/typedoc', import.meta.url)), ['--json', out, '--out', join(out, '..', 'html')], { cwd: root, encoding: 'utf8', timeout: 240_000 });
+  const project = JSON.parse(readFileSync(out, 'utf8')) as Reflection;
+
+  it('builds without errors or broken links', () => {
+    expect(log).not.toMatch(/\[(warning|error)\]/);
+    expect(log).toMatch(/html generated/);
+  });
+  it('every export has a summary; every function an example', () => {
+    const missing: string[] = [];
+    const noExample: string[] = [];
+    for (const mod of project.children ?? []) {
+      for (const r of mod.children ?? []) {
+        const name = `${mod.name}.${r.name}`;
+        if (r.kind === KIND.function) {
+          const c = r.signatures?.[0]?.comment ?? r.comment;
+          if (!hasSummary(c)) missing.push(name);
+          else if (!(c?.blockTags ?? []).some((t) => t.tag === '@example')) noExample.push(name);
+        } else if (Object.values(KIND).includes(r.kind) && !hasSummary(r.comment)) missing.push(name);
+      }
+    }
+    expect(missing).toEqual([]);
+    expect(noExample).toEqual([]);
+  });
+}, 300_000);
