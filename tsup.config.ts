@@ -20,6 +20,9 @@ export default defineConfig([
     treeshake: true,
     target: 'node20',
     outDir: 'dist',
+    // bundle the (tree-shaken) validation code instead of loading the zod package at run time:
+    // importing the whole package costs over 100 ms of cold start
+    noExternal: ['zod'],
   },
   /** The command-line tool (ESM, with its shebang). */
   {
@@ -31,5 +34,6 @@ export default defineConfig([
     treeshake: true,
     target: 'node20',
     outDir: 'dist',
+    noExternal: ['zod'],
   },
 ]);

@@ -4,50 +4,43 @@
  *
  * @module
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
 
-const finite = z.number().refine(Number.isFinite, 'must be finite');
+const finite = z.number().check(z.refine(Number.isFinite, { message: 'must be finite' }));
+const text = z.string().check(z.minLength(1));
 const interval = z
-  .object({ min: z.number().positive(), mid: z.number().positive(), max: z.number().positive() })
-  .strict()
-  .refine((t) => t.min < t.mid && t.mid <= t.max, 'T.min < T.mid ≤ T.max');
-const source = z.object({ title: z.string().min(10), authors: z.string().min(3), year: z.number().int(), table: z.string().optional() }).strict();
+  .strictObject({ min: z.number().check(z.positive()), mid: z.number().check(z.positive()), max: z.number().check(z.positive()) })
+  .check(z.refine((t) => t.min < t.mid && t.mid <= t.max, { message: 'T.min < T.mid ≤ T.max' }));
+const source = z.strictObject({ title: z.string().check(z.minLength(10)), authors: z.string().check(z.minLength(3)), year: z.int(), table: z.optional(z.string()) });
 
 /** A species in the older 7-coefficient form (data/ideal-gas/nasa7.json). */
 export const sevenCoefficientSpeciesSchema = z
-  .object({
-    id: z.string().min(1),
-    formula: z.string().min(1).optional(),
-    names: z.array(z.string().min(1)),
+  .strictObject({
+    id: text,
+    formula: z.optional(text),
+    names: z.array(text),
     T: interval,
-    low: z.array(finite).length(7),
-    high: z.array(finite).length(7),
-    M: z.number().positive().optional(),
-    note: z.string().optional(),
+    low: z.array(finite).check(z.length(7)),
+    high: z.array(finite).check(z.length(7)),
+    M: z.optional(z.number().check(z.positive())),
+    note: z.optional(z.string()),
   })
-  .strict()
-  .refine((r) => r.formula !== undefined || r.M !== undefined, 'a species needs a formula or a molar mass M');
+  .check(z.refine((r) => r.formula !== undefined || r.M !== undefined, { message: 'a species needs a formula or a molar mass M' }));
 
 /** data/ideal-gas/nasa7.json. */
-export const sevenCoefficientFileSchema = z
-  .object({ source, basis: z.enum(['published', 'from memory']), notes: z.string(), species: z.array(sevenCoefficientSpeciesSchema).min(1) })
-  .strict();
+export const sevenCoefficientFileSchema = z.strictObject({ source, basis: z.enum(['published', 'from memory']), notes: z.string(), species: z.array(sevenCoefficientSpeciesSchema).check(z.minLength(1)) });
 
 /** A species fitted to JANAF in the 9-constant form (data/ideal-gas/janaf-fits.json). */
-export const fittedSpeciesSchema = z
-  .object({
-    id: z.string().min(1),
-    formula: z.string().min(1),
-    names: z.array(z.string().min(1)),
-    janafTable: z.string().regex(/^[A-Z][a-z]?-\d{3}$/),
-    T: interval,
-    low: z.array(finite).length(9),
-    high: z.array(finite).length(9),
-    fitError: z.object({ cpRelative: z.number().nonnegative(), sRelative: z.number().nonnegative(), hMinusH298kJPerMol: z.number().nonnegative(), points: z.number().int().positive() }).strict(),
-  })
-  .strict();
+export const fittedSpeciesSchema = z.strictObject({
+  id: text,
+  formula: text,
+  names: z.array(text),
+  janafTable: z.string().check(z.regex(/^[A-Z][a-z]?-\d{3}$/)),
+  T: interval,
+  low: z.array(finite).check(z.length(9)),
+  high: z.array(finite).check(z.length(9)),
+  fitError: z.strictObject({ cpRelative: z.number().check(z.nonnegative()), sRelative: z.number().check(z.nonnegative()), hMinusH298kJPerMol: z.number().check(z.nonnegative()), points: z.int().check(z.positive()) }),
+});
 
 /** data/ideal-gas/janaf-fits.json. */
-export const fittedFileSchema = z
-  .object({ generated: z.string(), source, basis: z.literal('published'), notes: z.string(), species: z.array(fittedSpeciesSchema).min(1) })
-  .strict();
+export const fittedFileSchema = z.strictObject({ generated: z.string(), source, basis: z.literal('published'), notes: z.string(), species: z.array(fittedSpeciesSchema).check(z.minLength(1)) });

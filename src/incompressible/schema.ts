@@ -4,56 +4,50 @@
  *
  * @module
  */
-import { z } from 'zod';
+import * as z from 'zod/mini';
+import { safeParse } from '../validation.js';
 import { DefinitionError } from '../errors.js';
 import { Quantity } from '../units/quantity.js';
 import { compileChecked, type CompiledSubstance } from './compile.js';
 
-const quantityInput = z.union([z.string().min(1), z.instanceof(Quantity)]);
+const text = z.string().check(z.minLength(1));
+const quantityInput = z.union([text, z.instanceof(Quantity)]);
 
-const polynomialHeatCapacity = z
-  .object({
-    /** Coefficients of c = Σ aᵢ·tⁱ, ascending, with t in `temperatureUnit` and c in `unit`. */
-    polynomial: z.array(z.number()).min(1),
-    unit: z.string(),
-    temperatureUnit: z.string(),
-  })
-  .strict();
+const polynomialHeatCapacity = z.strictObject({
+  /** Coefficients of c = Σ aᵢ·tⁱ, ascending, with t in `temperatureUnit` and c in `unit`. */
+  polynomial: z.array(z.number()).check(z.minLength(1)),
+  unit: z.string(),
+  temperatureUnit: z.string(),
+});
 
-const tabulatedHeatCapacity = z
-  .object({
-    /** Node temperatures (in `temperatureUnit`, strictly increasing) and c values (in `unit`). */
-    table: z.object({ T: z.array(z.number()).min(2), c: z.array(z.number()).min(2) }).strict(),
-    unit: z.string(),
-    temperatureUnit: z.string(),
-  })
-  .strict();
+const tabulatedHeatCapacity = z.strictObject({
+  /** Node temperatures (in `temperatureUnit`, strictly increasing) and c values (in `unit`). */
+  table: z.strictObject({ T: z.array(z.number()).check(z.minLength(2)), c: z.array(z.number()).check(z.minLength(2)) }),
+  unit: z.string(),
+  temperatureUnit: z.string(),
+});
 
 /** Where a definition's numbers come from. */
-export const sourceSchema = z
-  .object({
-    title: z.string().min(1),
-    authors: z.string().optional(),
-    year: z.number().int().optional(),
-    table: z.string().optional(),
-  })
-  .strict();
+export const sourceSchema = z.strictObject({
+  title: text,
+  authors: z.optional(z.string()),
+  year: z.optional(z.int()),
+  table: z.optional(z.string()),
+});
 
 /** zod schema of an incompressible substance definition. */
-export const incompressibleDefinitionSchema = z
-  .object({
-    name: z.string().min(1),
-    aliases: z.array(z.string().min(1)).optional(),
-    state: z.enum(['liquid', 'solid']),
-    /** Constant c as a quantity (`"4.18 kJ/(kg·K)"`), a polynomial, or a table. */
-    c: z.union([quantityInput, polynomialHeatCapacity, tabulatedHeatCapacity]),
-    density: quantityInput,
-    T: z.object({ min: quantityInput, max: quantityInput }).strict(),
-    source: sourceSchema.optional(),
-    basis: z.enum(['published', 'from memory', 'common practice', 'measured', 'user']).optional(),
-    note: z.string().optional(),
-  })
-  .strict();
+export const incompressibleDefinitionSchema = z.strictObject({
+  name: text,
+  aliases: z.optional(z.array(text)),
+  state: z.enum(['liquid', 'solid']),
+  /** Constant c as a quantity (`"4.18 kJ/(kg·K)"`), a polynomial, or a table. */
+  c: z.union([quantityInput, polynomialHeatCapacity, tabulatedHeatCapacity]),
+  density: quantityInput,
+  T: z.strictObject({ min: quantityInput, max: quantityInput }),
+  source: z.optional(sourceSchema),
+  basis: z.optional(z.enum(['published', 'from memory', 'common practice', 'measured', 'user'])),
+  note: z.optional(z.string()),
+});
 
 /** A substance definition, as accepted by `incompressible()`. */
 export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSchema>;
@@ -68,7 +62,7 @@ export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSc
  * ```
  */
 export function compileDefinition(input: unknown): CompiledSubstance {
-  const parsed = incompressibleDefinitionSchema.safeParse(input);
+  const parsed = safeParse(incompressibleDefinitionSchema, input);
   if (!parsed.success) {
     const label = typeof input === 'object' && input !== null && typeof (input as { name?: unknown }).name === 'string' ? `incompressible substance "${(input as { name: string }).name}"` : 'incompressible substance definition';
     throw new DefinitionError(label, parsed.error.issues.map((i) => ({ path: i.path.map((p) => (typeof p === 'symbol' ? String(p) : p)), message: i.message })));

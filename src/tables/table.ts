@@ -14,6 +14,7 @@ import { SI_UNIT, type Dimension } from '../units/dimensions.js';
 import { Quantity, quantity } from '../units/quantity.js';
 import { DEFAULT_AMBIENT_PA, resolveUnit, toSI, type ResolvedUnit } from '../units/registry.js';
 import { gridSchema, tableSchema, type GridData, type TableData } from './schema.js';
+import { safeParse } from '../validation.js';
 
 /**
  * How to interpolate between rows:
@@ -124,7 +125,7 @@ export class PropertyTable<C extends string = string> {
 
   /** @internal Use {@link defineTable}. */
   constructor(data: TableData) {
-    const parsed = tableSchema.safeParse(data);
+    const parsed = safeParse(tableSchema, data);
     if (!parsed.success) throw new DefinitionError('table', zodIssues(parsed.error));
     const def = parsed.data;
     const issues: DefinitionIssue[] = [];
@@ -349,7 +350,7 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
 
   /** @internal Use {@link defineGrid}. */
   constructor(data: GridData) {
-    const parsed = gridSchema.safeParse(data);
+    const parsed = safeParse(gridSchema, data);
     if (!parsed.success) throw new DefinitionError('grid table', zodIssues(parsed.error));
     const def = parsed.data;
     const issues: DefinitionIssue[] = [];

@@ -1,0 +1,20 @@
+/**
+ * Validation with zod's tree-shakable "mini" build. Schemas import `zod/mini` directly (so a
+ * bundle keeps only what they use); every run-time check goes through {@link safeParse}, which
+ * switches zod to its English messages once, on first use.
+ *
+ * @module
+ */
+import { config } from 'zod/mini';
+import en from 'zod/v4/locales/en.js';
+
+let configured = false;
+
+/** `schema.safeParse(data)`, with English messages. */
+export function safeParse<R>(schema: { safeParse(data: unknown): R }, data: unknown): R {
+  if (!configured) {
+    config(en());
+    configured = true;
+  }
+  return schema.safeParse(data);
+}
