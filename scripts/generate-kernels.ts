@@ -1,6 +1,6 @@
 /**
  * Generates src/water/if97/kernels.generated.ts: straight-line code for the IF97 term sums (basic
- * equations, R7-97 backward equations, SR2-01 p(h, s) and SR3-03 region 3 T and v)
+ * equations, R7-97 backward equations, SR2-01 p(h, s), SR3-03 region 3 T and v, SR4-04 h-s equations)
  * Σ nᵢ·xᴵⁱ·yᴶⁱ (and their first and second derivatives) from the coefficient files in data/if97.
  *
  * Powers are built by short multiplication chains (each needed power from two already built),
@@ -126,6 +126,11 @@ export function renderKernels(): string {
   const b2 = read('backward-region2') as unknown as Record<string, Terms>;
   const hs = read('backward-hs') as unknown as Record<string, Terms>;
   const r3b = read('backward-region3') as unknown as Record<string, Terms>;
+  const sr4 = read('backward-hs-region3') as unknown as Record<string, Terms>;
+  const sr4Functions = ['p3a', 'h1s', 'h3as', 'h2abs', 'h2c3bs', 'hB13s', 'TB23hs', 'Tsaths'].flatMap((k) => [
+    valueFunction(`sr4${k}`, `SR4-04 ${k}: the term sum in its reduced variables (see data/if97/backward-hs-region3.json).`, sr4[k]!),
+    '',
+  ]);
   const region3Backward = ['T3aPH', 'T3bPH', 'v3aPH', 'v3bPH', 'T3aPS', 'T3bPS', 'v3aPS', 'v3bPS'].flatMap((k) => [
     valueFunction(`backward${k}`, `SR3-03 ${k[0]}(p, ${k.slice(-1).toLowerCase()}) subregion 3${k[2]}: x = π + shift, y = η (or σ) + shift.`, r3b[k]!),
     '',
@@ -174,6 +179,7 @@ export function renderKernels(): string {
     valueFunction('backward2cHS', 'p(h, s) region 2c (SR2-01 Table 9), before the fourth power: x = η − 0.7, y = σ − 1.1.', hs.region2c!),
     '',
     ...region3Backward,
+    ...sr4Functions,
   ];
   return out.join('\n');
 }

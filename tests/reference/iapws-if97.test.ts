@@ -217,3 +217,57 @@ describe('SR3-03 Table 12: region 3 T(p, s) and v(p, s)', () => {
     expectClose(region3VolumePS(p * 1e6, s * 1e3), v, { rel: 5.0001e-10 });
   });
 });
+
+import { b13EnthalpyHS, b23TemperatureHS, region3aPressureHS, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from '../../src/water/if97/backward-hs-region3.js';
+
+/**
+ * IAPWS SR4-04(2014), Revised Supplementary Release on Backward Equations p(h,s) for Region 3, the
+ * region boundaries in (h, s) and T_sat(h, s): verification Tables 5, 13, 18, 26 and 29, to the printed
+ * 10 significant digits. (p_3b of Table 5 is not implemented: its recalled coefficients do not
+ * reproduce the table.)
+ */
+const ten = (actual: number, printed: number) => expectClose(actual, printed, { rel: 5.0001e-10 });
+describe('SR4-04 Table 5: region 3a p(h, s)', () => {
+  it.each([
+    [1700, 3.8, 2.555703246e1],
+    [2000, 4.2, 4.540873468e1],
+    [2100, 4.3, 6.078123340e1],
+  ])('h = %d kJ/kg, s = %d kJ/(kg·K)', (h, s, p) => ten(region3aPressureHS(h * 1e3, s * 1e3) / 1e6, p));
+});
+describe('SR4-04 Table 13: the saturation boundaries in (h, s)', () => {
+  it.each([
+    [1, 3.085509647e2],
+    [2, 7.006304472e2],
+    [3, 1.198359754e3],
+    [3.8, 1.685025565e3],
+    [4.0, 1.816891476e3],
+    [4.2, 1.949352563e3],
+  ])("h′(s = %d kJ/(kg·K)) = %d kJ/kg", (s, h) => ten(saturatedLiquidEnthalpyHS(s * 1e3) / 1e3, h));
+  it.each([
+    [7, 2.723729985e3],
+    [8, 2.599047210e3],
+    [9, 2.511861477e3],
+    [5.5, 2.687693850e3],
+    [5.0, 2.451623609e3],
+    [4.5, 2.144360448e3],
+  ])('h″(s = %d kJ/(kg·K)) = %d kJ/kg', (s, h) => ten(saturatedVaporEnthalpyHS(s * 1e3) / 1e3, h));
+});
+describe('SR4-04 Tables 18 and 26: the B13 and B23 boundaries in (h, s)', () => {
+  it.each([
+    [3.7, 1.632525047e3],
+    [3.6, 1.593027214e3],
+    [3.5, 1.566104611e3],
+  ])('h_B13(s = %d kJ/(kg·K)) = %d kJ/kg', (s, h) => ten(b13EnthalpyHS(s * 1e3) / 1e3, h));
+  it.each([
+    [2600, 5.1, 7.135259364e2],
+    [2700, 5.15, 7.685345532e2],
+    [2800, 5.2, 8.176202120e2],
+  ])('T_B23(h = %d kJ/kg, s = %d kJ/(kg·K)) = %d K', (h, s, T) => ten(b23TemperatureHS(h * 1e3, s * 1e3), T));
+});
+describe('SR4-04 Table 29: T_sat(h, s)', () => {
+  it.each([
+    [1800, 5.3, 3.468475498e2],
+    [2400, 6.0, 4.251373305e2],
+    [2500, 5.5, 5.225579013e2],
+  ])('h = %d kJ/kg, s = %d kJ/(kg·K)', (h, s, T) => ten(saturationTemperatureHS(h * 1e3, s * 1e3), T));
+});

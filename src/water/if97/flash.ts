@@ -19,6 +19,7 @@ import { region1TemperaturePH } from './backward-ph.js';
 import { region2TemperaturePH } from './backward-ph.js';
 import { region1TemperaturePS, region2TemperaturePS } from './backward-ps.js';
 import { region1PressureHS, region2PressureHS } from './backward-hs.js';
+import { b13EnthalpyHS, region3aPressureHS, S_CRITICAL, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from './backward-hs-region3.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
 import { WaterProperties } from './properties.js';
 import { region1, region1HCp, region1SCp } from './region1.js';
@@ -630,17 +631,42 @@ export function stateFromHS(h: number, s: number, out: WaterState): number {
 }
 
 /**
- * Fast path of the (h, s) flash: the SR2-01 backward equation p(h, s) of region 1 (liquid-like h and
- * s, below the values at 623.15 K) or region 2 starts Newton steps on ln p, with
+ * A starting pressure for the (h, s) flash from the backward equations: below the saturation line of
+ * the h–s plane (SR4-04 h′(s), h″(s)) the two-phase T_sat(h, s) and p_s(T); on the liquid side
+ * p_1(h, s) (SR2-01) below the B13 boundary and p_3a(h, s) (SR4-04) above it; on the vapour side
+ * p_2(h, s) (SR2-01), also as the start for region 3b, where SR4-04's p_3b is not available here.
+ */
+function startPressureHS(h: number, s: number): number {
+  if (s >= 0 && s <= 9.155759395e3) {
+    const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
+    // compressed liquid at low pressure lies barely above h′(s): keep 1 kJ/kg clear of the line
+    // (the backward boundary equations are good to a few hundredths of that)
+    if (h < hSat - 1e3) {
+      const T = saturationTemperatureHS(h, s);
+      if (T >= T_MIN && T <= T_CRITICAL) return saturationPressure(T);
+    }
+  }
+  if (s <= S_CRITICAL) {
+    // B13 in (h, s) spans 3.397–3.778 kJ/(kg·K); below it every liquid state is in region 1
+    const region1 = s < 3.397782955e3 || (s <= 3.778281340e3 && h <= b13EnthalpyHS(s));
+    return region1 ? region1PressureHS(h, s) : region3aPressureHS(h, s);
+  }
+  return region2PressureHS(h, s);
+}
+
+/**
+ * Fast path of the (h, s) flash: Newton steps on ln p from {@link startPressureHS}, with
  * (∂s/∂ln p)_h = −p·v/T, each step a (p, h) flash. Any failed step hands over to the bracketed search.
  */
 function newtonHS(h: number, s: number, out: WaterState): number {
-  const liquidLike = h < 1670e3 && s < 3.78e3;
-  let p = liquidLike ? region1PressureHS(h, s) : region2PressureHS(h, s);
+  let p = startPressureHS(h, s);
   if (!(p > P_HS_MIN && p <= P_MAX)) return STATUS.outOfRange;
   for (let i = 0; i < 12; i++) {
     if (stateFromPH(p, h, out) !== STATUS.ok) return STATUS.noConvergence;
-    const step = ((out.s - s) * out.T) / (p * out.v);
+    const residual = out.s - s;
+    // stop at the rounding level of s: for a liquid, (∂s/∂ln p)_h is tiny and p is only as sharp as s allows
+    if (Math.abs(residual) <= 1e-13 * (Math.abs(s) + 1e3)) return STATUS.ok;
+    const step = (residual * out.T) / (p * out.v);
     if (Math.abs(step) <= 1e-14) return STATUS.ok;
     const next = p * Math.exp(Math.max(-1, Math.min(1, step)));
     if (!(next > P_HS_MIN && next <= P_MAX)) return STATUS.noConvergence;

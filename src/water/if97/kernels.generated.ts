@@ -2215,3 +2215,439 @@ export function backwardv3bPS(x: number, y: number): number {
     -3.2747778718823 * x2 * y2
   );
 }
+
+/** SR4-04 p3a: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4p3a(x: number, y: number): number {
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x6 = x5 * x;
+  const x7 = x6 * x;
+  const x8 = x7 * x;
+  const x10 = x8 * x2;
+  const x14 = x10 * x4;
+  const x18 = x14 * x4;
+  const x20 = x18 * x2;
+  const x22 = x20 * x2;
+  const x24 = x22 * x2;
+  const x28 = x24 * x4;
+  const x32 = x28 * x4;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y5 = y4 * y;
+  const y6 = y5 * y;
+  const y8 = y6 * y2;
+  const y10 = y8 * y2;
+  const y14 = y10 * y4;
+  const y16 = y14 * y2;
+  const y22 = y16 * y6;
+  const y24 = y22 * y2;
+  const y28 = y24 * y4;
+  const y32 = y28 * y4;
+  const y36 = y32 * y4;
+  return (
+    7.70889828326934 * 1 +
+    -26.0835009128688 * y +
+    267.416218930389 * y5 +
+    17.2221089496844 * x +
+    -293.54233214597 * x * y3 +
+    614.135601882478 * x * y4 +
+    -61056.2757725674 * x * y8 +
+    -65127225.1118219 * x * y14 +
+    73591.9313521937 * x2 * y6 +
+    -11664650591.4191 * x2 * y16 +
+    35.5267086434461 * x3 +
+    -596.144543825955 * x3 * y2 +
+    -475.842430145708 * x3 * y3 +
+    69.6781965359503 * x4 +
+    335.674250377312 * x4 * y +
+    25052.6809130882 * x4 * y4 +
+    146997.380630766 * x4 * y5 +
+    53806931509153400000 * x5 * y28 +
+    1.43619827291346e+21 * x6 * y28 +
+    36498586616599400000 * x7 * y24 +
+    -2547.41561156775 * x8 * y +
+    2.40120197096563e+27 * x10 * y32 +
+    -3.93847464679496e+29 * x10 * y36 +
+    1.47073407024852e+24 * x14 * y22 +
+    -4.26391250432059e+31 * x18 * y28 +
+    1.94509340621077e+38 * x20 * y36 +
+    6.66212132114896e+23 * x22 * y16 +
+    7.06777016552858e+33 * x22 * y28 +
+    1.75563621975576e+41 * x24 * y36 +
+    1.08408607429124e+28 * x28 * y16 +
+    7.30872705175151e+43 * x28 * y36 +
+    1.5914584739887e+24 * x32 * y10 +
+    3.77121605943324e+40 * x32 * y28
+  );
+}
+
+/** SR4-04 h1s: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4h1s(x: number, y: number): number {
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x7 = x5 * x2;
+  const x8 = x7 * x;
+  const x12 = x8 * x4;
+  const x14 = x12 * x2;
+  const x16 = x14 * x2;
+  const x20 = x16 * x4;
+  const x22 = x20 * x2;
+  const x24 = x22 * x2;
+  const x28 = x24 * x4;
+  const x32 = x28 * x4;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y5 = y4 * y;
+  const y6 = y5 * y;
+  const y8 = y6 * y2;
+  const y10 = y8 * y2;
+  const y12 = y10 * y2;
+  const y14 = y12 * y2;
+  const y16 = y14 * y2;
+  const y18 = y16 * y2;
+  const y22 = y18 * y4;
+  const y24 = y22 * y2;
+  const y28 = y24 * y4;
+  const y36 = y28 * y8;
+  return (
+    0.332171191705237 * y14 +
+    0.000611217706323496 * y36 +
+    -8.82092478906822 * x * y3 +
+    -0.45562819254325 * x * y16 +
+    -0.0000263483840850452 * x2 +
+    -22.3949661148062 * x2 * y5 +
+    -4.28398660164013 * x3 * y4 +
+    -0.616679338856916 * x3 * y36 +
+    -14.682303110404 * x4 * y4 +
+    284.523138727299 * x4 * y16 +
+    -113.398503195444 * x4 * y24 +
+    1156.71380760859 * x5 * y18 +
+    395.551267359325 * x5 * y24 +
+    -1.54891257229285 * x7 * y +
+    19.4486637751291 * x8 * y4 +
+    -3.57915139457043 * x12 * y2 +
+    -3.35369414148819 * x12 * y4 +
+    -0.66442679633246 * x14 * y +
+    32332.1885383934 * x14 * y22 +
+    3317.66744667084 * x16 * y10 +
+    -22350.1257931087 * x20 * y12 +
+    5739538.75852936 * x20 * y28 +
+    173.226193407919 * x22 * y8 +
+    -0.0363968822121321 * x24 * y3 +
+    8.34596332878346e-7 * x28 +
+    5.03611916682674 * x32 * y6 +
+    65.5444787064505 * x32 * y8
+  );
+}
+
+/** SR4-04 h3as: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4h3as(x: number, y: number): number {
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x6 = x5 * x;
+  const x7 = x6 * x;
+  const x10 = x7 * x3;
+  const x16 = x10 * x6;
+  const x32 = x16 * x16;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y6 = y4 * y2;
+  const y10 = y6 * y4;
+  const y14 = y10 * y4;
+  const y16 = y14 * y2;
+  const y20 = y16 * y4;
+  const y8 = y6 * y2;
+  const y28 = y20 * y8;
+  const y32 = y28 * y4;
+  const y36 = y32 * y4;
+  return (
+    0.822673364673336 * y +
+    0.181977213534479 * y4 +
+    -0.0112000260313624 * y10 +
+    -0.000746778287048033 * y16 +
+    -0.179046263257381 * x2 * y +
+    0.0424220110836657 * x3 * y36 +
+    -0.341355823438768 * x4 * y3 +
+    -2.09881740853565 * x4 * y16 +
+    -8.22477343323596 * x5 * y20 +
+    -4.99684082076008 * x5 * y36 +
+    0.191413958471069 * x6 * y4 +
+    0.0581062241093136 * x7 * y2 +
+    -1655.05498701029 * x7 * y28 +
+    1588.70443421201 * x7 * y32 +
+    -85.0623535172818 * x10 * y14 +
+    -31771.4386511207 * x10 * y32 +
+    -94589.0406632871 * x10 * y36 +
+    -0.0000013927384708869 * x32 +
+    0.63105253224098 * x32 * y6
+  );
+}
+
+/** SR4-04 h2abs: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4h2abs(x: number, y: number): number {
+  const x2 = x * x;
+  const x4 = x2 * x2;
+  const x3 = x2 * x;
+  const x7 = x4 * x3;
+  const x8 = x7 * x;
+  const x10 = x8 * x2;
+  const x12 = x10 * x2;
+  const x6 = x4 * x2;
+  const x18 = x12 * x6;
+  const x20 = x18 * x2;
+  const x24 = x20 * x4;
+  const x28 = x24 * x4;
+  const x32 = x28 * x4;
+  const x36 = x32 * x4;
+  const y2 = y * y;
+  const y4 = y2 * y2;
+  const y5 = y4 * y;
+  const y7 = y5 * y2;
+  const y8 = y7 * y;
+  const y10 = y8 * y2;
+  const y12 = y10 * y2;
+  const y14 = y12 * y2;
+  const y6 = y5 * y;
+  const y20 = y14 * y6;
+  const y22 = y20 * y2;
+  const y24 = y22 * y2;
+  const y28 = y24 * y4;
+  const y32 = y28 * y4;
+  return (
+    -524.581170928788 * x * y8 +
+    -9269472.18142218 * x * y24 +
+    -237.385107491666 * x2 * y4 +
+    21077015581.2776 * x2 * y32 +
+    -23.9494562010986 * x4 * y +
+    221.802480294197 * x4 * y2 +
+    -5104725.33393438 * x7 * y7 +
+    1249813.96109147 * x8 * y5 +
+    2000084369.96201 * x8 * y12 +
+    -815.158509791035 * x10 * y +
+    -157.612685637523 * x12 +
+    -11420042233.2791 * x12 * y7 +
+    6623646807768720 * x18 * y10 +
+    -2276228182961440000 * x20 * y12 +
+    -1.71048081348406e+31 * x24 * y32 +
+    6607887669380910 * x28 * y8 +
+    1.66320055886021e+22 * x28 * y12 +
+    -2.18003784381501e+29 * x28 * y20 +
+    -7.87276140295618e+29 * x28 * y22 +
+    1.51062329700346e+31 * x28 * y24 +
+    7957321.70300541 * x32 * y2 +
+    1319576473553470 * x32 * y7 +
+    -3.2509706829914e+23 * x32 * y12 +
+    -4.18600611419248e+25 * x32 * y14 +
+    2.97478906557467e+34 * x32 * y24 +
+    -95358876174547300000 * x36 * y10 +
+    1.66957699620939e+24 * x36 * y12 +
+    -1.75407764869978e+32 * x36 * y20 +
+    3.47581490626396e+34 * x36 * y22 +
+    -7.10971318427851e+38 * x36 * y28
+  );
+}
+
+/** SR4-04 h2c3bs: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4h2c3bs(x: number, y: number): number {
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x5 = x2 * x3;
+  const x6 = x5 * x;
+  const x7 = x6 * x;
+  const x8 = x7 * x;
+  const x4 = x3 * x;
+  const x12 = x8 * x4;
+  const x16 = x12 * x4;
+  const x22 = x16 * x6;
+  const x24 = x22 * x2;
+  const x36 = x24 * x12;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y7 = y4 * y3;
+  const y5 = y4 * y;
+  const y12 = y7 * y5;
+  const y16 = y12 * y4;
+  const y20 = y16 * y4;
+  const y32 = y20 * y12;
+  const y36 = y32 * y4;
+  return (
+    1.04351280732769 * 1 +
+    -2.27807912708513 * y3 +
+    1.80535256723202 * y4 +
+    0.420440834792042 * x +
+    -105721.24483466 * x * y12 +
+    4.36911607493884e+24 * x5 * y36 +
+    -328032702839.753 * x6 * y12 +
+    -6786867608042700 * x7 * y16 +
+    7439.57464645363 * x8 * y2 +
+    -35689644535576100000 * x8 * y20 +
+    1.67590585186801e+31 * x12 * y32 +
+    -3.55028625419105e+37 * x16 * y36 +
+    396611982166.538 * x22 * y2 +
+    -4.14716268484468e+40 * x22 * y32 +
+    3590801038673820000 * x24 * y7 +
+    -1.16994334851995e+40 * x36 * y20
+  );
+}
+
+/** SR4-04 hB13s: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4hB13s(x: number, y: number): number {
+  const iy = 1 / y;
+  const x2 = x * x;
+  const x3 = x * x2;
+  const x5 = x3 * x2;
+  const x6 = x5 * x;
+  const ym2 = iy * iy;
+  const y2 = y * y;
+  const ym3 = ym2 * iy;
+  const ym4 = ym3 * iy;
+  const ym6 = ym4 * ym2;
+  const ym12 = ym6 * ym6;
+  return (
+    0.913965547600543 * 1 +
+    -0.0000430944856041991 * x * ym2 +
+    60.3235694765419 * x * y2 +
+    1.17518273082168e-18 * x3 * ym12 +
+    0.220000904781292 * x5 * ym4 +
+    -69.0815545851641 * x6 * ym3
+  );
+}
+
+/** SR4-04 TB23hs: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4TB23hs(x: number, y: number): number {
+  const ix = 1 / x;
+  const iy = 1 / y;
+  const xm2 = ix * ix;
+  const xm3 = xm2 * ix;
+  const x2 = x * x;
+  const x3 = x * x2;
+  const xm4 = xm3 * ix;
+  const x5 = x3 * x2;
+  const x6 = x5 * x;
+  const xm8 = xm4 * xm4;
+  const x8 = x6 * x2;
+  const xm10 = xm8 * xm2;
+  const xm12 = xm10 * xm2;
+  const x4 = x3 * x;
+  const x12 = x8 * x4;
+  const x14 = x12 * x2;
+  const y2 = y * y;
+  const ym2 = iy * iy;
+  const y3 = y2 * y;
+  const ym3 = ym2 * iy;
+  const y4 = y3 * y;
+  const ym5 = ym3 * ym2;
+  const ym6 = ym5 * iy;
+  const y8 = y4 * y4;
+  const ym8 = ym6 * ym2;
+  const y10 = y8 * y2;
+  const ym4 = ym3 * iy;
+  const ym12 = ym8 * ym4;
+  return (
+    0.00062909626082981 * xm12 * y10 +
+    -0.000823453502583165 * xm10 * y8 +
+    5.15446951519474e-8 * xm8 * y3 +
+    -1.17565945784945 * xm4 * y4 +
+    3.48519684726192 * xm3 * y3 +
+    -5.07837382408313e-12 * xm2 * ym6 +
+    -2.84637670005479 * xm2 * y2 +
+    -2.36092263939673 * xm2 * y3 +
+    6.01492324973779 * xm2 * y4 +
+    1.48039650824546 * 1 +
+    0.000360075182221907 * x * ym3 +
+    -0.0126700045009952 * x * ym2 +
+    -1221843.32521413 * x * y10 +
+    0.149276502463272 * x3 * ym2 +
+    0.698733471798484 * x3 * iy +
+    -0.0252207040114321 * x5 * ym5 +
+    0.0147151930985213 * x6 * ym6 +
+    -1.08618917681849 * x6 * ym3 +
+    -0.000936875039816322 * x8 * ym8 +
+    81.9877897570217 * x8 * ym2 +
+    -182.041861521835 * x8 * iy +
+    0.00000261907376402688 * x12 * ym12 +
+    -29162.6417025961 * x12 * iy +
+    0.0000140660774926165 * x14 * ym12 +
+    7832370.62349385 * x14 * y
+  );
+}
+
+/** SR4-04 Tsaths: the term sum in its reduced variables (see data/if97/backward-hs-region3.json). */
+export function sr4Tsaths(x: number, y: number): number {
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x6 = x5 * x;
+  const x8 = x6 * x2;
+  const x10 = x8 * x2;
+  const x12 = x10 * x2;
+  const x14 = x12 * x2;
+  const x16 = x14 * x2;
+  const x18 = x16 * x2;
+  const x20 = x18 * x2;
+  const x28 = x20 * x8;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y5 = y4 * y;
+  const y6 = y5 * y;
+  const y8 = y6 * y2;
+  const y12 = y8 * y4;
+  const y14 = y12 * y2;
+  const y16 = y14 * y2;
+  const y20 = y16 * y4;
+  const y22 = y20 * y2;
+  const y24 = y22 * y2;
+  const y28 = y24 * y4;
+  const y32 = y28 * y4;
+  const y36 = y32 * y4;
+  return (
+    0.179882673606601 * 1 +
+    -0.267507455199603 * y3 +
+    1.162767226126 * y12 +
+    0.147545428713616 * x +
+    -0.512871635973248 * x * y +
+    0.421333567697984 * x * y2 +
+    0.56374952218987 * x * y5 +
+    0.429274443819153 * x2 +
+    -3.3570455214214 * x2 * y5 +
+    10.8890916499278 * x2 * y8 +
+    -0.248483390456012 * x3 +
+    0.30415322190639 * x3 * y2 +
+    -0.494819763939905 * x3 * y3 +
+    1.07551674933261 * x3 * y4 +
+    0.0733888415457688 * x4 +
+    0.0140170545411085 * x4 * y +
+    -0.106110975998808 * x5 * y +
+    0.0168324361811875 * x5 * y2 +
+    1.25028363714877 * x5 * y4 +
+    1013.16840309509 * x5 * y16 +
+    -1.51791558000712 * x6 * y6 +
+    52.4277865990866 * x6 * y8 +
+    23049.5545563912 * x6 * y22 +
+    0.0249459806365456 * x8 * y +
+    2107964.67412137 * x10 * y20 +
+    366836848.613065 * x10 * y36 +
+    -144814105.365163 * x12 * y24 +
+    -0.0017927637300359 * x14 * y +
+    4899556021.00459 * x14 * y28 +
+    471.262212070518 * x16 * y12 +
+    -82929439019.8652 * x16 * y32 +
+    -1715.45662263191 * x18 * y14 +
+    3557776.82973575 * x18 * y22 +
+    586062760258.436 * x18 * y36 +
+    -12988763.5078195 * x20 * y24 +
+    31724744937.1057 * x28 * y36
+  );
+}
