@@ -142,12 +142,14 @@ function saturationTable(by: 'T' | 'p', u: UnitSystem, keys: number[]): TableDat
       track(errors, `${key}|${method}`, v, truth, unit, where, scale);
       if (!last) track(errors, `${key}|${method}, below the critical interval`, v, truth, unit, where, scale);
     };
-    for (const m of [...methods, ...(by === 'T' ? (['log-linear'] as const) : [])]) {
+    // by T, p_sat(T) varies exponentially (log-linear); by p, everything varies with ln p (log-key)
+    const extra: InterpolationMethod[] = by === 'T' ? [] : ['log-key'];
+    for (const m of [...methods, ...extra, ...(by === 'T' ? (['log-linear'] as const) : [])]) {
       both(other, m, table.valueAt(other as never, x, m), truthOther, by === 'T' ? 'Pa' : 'K', 1);
     }
     for (const c of SAT_COLUMNS) {
       const scale = Math.max(...table.data.columns[c]!.values.map((v) => Math.abs(conv(satUnit(c, u)).from(v as number))));
-      for (const m of methods) both(c, m, table.valueAt(c as never, x, m), sat.row[c], siUnit(c), scale);
+      for (const m of [...methods, ...extra]) both(c, m, table.valueAt(c as never, x, m), sat.row[c], siUnit(c), scale);
     }
   }
   return { ...data, interpolationError: finishErrors(errors) };

@@ -22,8 +22,10 @@ import { safeParse } from '../validation.js';
  * - `'monotone-cubic'`: Fritsch–Carlson piecewise cubic; smooth and never overshoots the data.
  * - `'log-linear'`: linear in ln(value), for columns that vary exponentially with the key
  *   (saturation pressure against temperature). Values must be positive.
+ * - `'log-key'`: linear in ln(key), for tables keyed by pressure, where properties vary with ln p
+ *   (a saturation table by pressure). Keys must be positive.
  */
-export type InterpolationMethod = 'linear' | 'monotone-cubic' | 'log-linear';
+export type InterpolationMethod = 'linear' | 'monotone-cubic' | 'log-linear' | 'log-key';
 
 /** Options of a lookup. */
 export interface LookupOptions {
@@ -95,6 +97,7 @@ function interpolate(keys: Float64Array, col: Column, i: number, x: number, meth
     if (x === x1) return y1;
     return Math.exp(lerp(x0, x1, Math.log(y0), Math.log(y1), x));
   }
+  if (method === 'log-key') return lerp(Math.log(x0), Math.log(x1), y0, y1, Math.log(x));
   col.slopes ??= monotoneSlopes(keys, col.si, new Float64Array(keys.length));
   return hermite(x0, x1, y0, y1, col.slopes[i]!, col.slopes[i + 1]!, x);
 }
@@ -233,6 +236,9 @@ export class PropertyTable<C extends string = string> {
     }
     if (method === 'log-linear' && !(col.si.every((v) => v > 0))) {
       throw new InvalidInputError('input.invalid', 'method', `log-linear interpolation needs positive values; column "${column}" has some ≤ 0`);
+    }
+    if (method === 'log-key' && !(keys[0]! > 0)) {
+      throw new InvalidInputError('input.invalid', 'method', `log-key interpolation needs positive keys; table "${this.name}" starts at ${keys[0]}`);
     }
     const i = segmentIndex(keys, x);
     const v = interpolate(keys, col, i, x, method);

@@ -23,7 +23,7 @@ describe('one-dimensional tables', () => {
     expect(() => oil.lookup('mu', '50 °C')).toThrow(InvalidInputError);
   });
   it('interpolating at a tabulated row returns the tabulated value bit for bit, by every method', () => {
-    for (const method of ['linear', 'monotone-cubic', 'log-linear'] as const) {
+    for (const method of ['linear', 'monotone-cubic', 'log-linear', 'log-key'] as const) {
       [20, 60, 100, 140].forEach((T, i) => {
         expect(oil.lookup('cp', quantity(T, '°C'), { method }).value.in('kJ/(kg·K)')).toBe([1.88, 2.02, 2.16, 2.3][i]);
       });
@@ -57,6 +57,11 @@ describe('one-dimensional tables', () => {
     expectClose(r.key.in('°C'), 80, { rel: 1e-12 });
     expect(r.rows).toEqual([1, 2]);
     expect(() => oil.inverse('rho', '900 kg/m³')).toThrow(OutOfRangeError);
+  });
+  it('log-key interpolates linearly in ln(key): a column linear in ln p is reproduced exactly between rows', () => {
+    const t = defineTable({ name: 'ln p', source: 'test: y = 3·ln(p/1 Pa)', key: 'p', columns: { p: { unit: 'Pa', values: [1e3, 1e5, 1e7] }, y: { unit: 'K', values: [3 * Math.log(1e3), 3 * Math.log(1e5), 3 * Math.log(1e7)] } } } as const);
+    expectClose(t.lookup('y', '1e4 Pa', { method: 'log-key' }).value.si, 3 * Math.log(1e4), { rel: 1e-14 });
+    expect(Math.abs(t.lookup('y', '1e4 Pa').value.si - 3 * Math.log(1e4))).toBeGreaterThan(1);
   });
   it('descending keys work and report rows in the table’s own order', () => {
     const t = defineTable({ name: 'desc', source: 'test', key: 'p', columns: { p: { unit: 'bar', values: [10, 5, 1] }, T: { unit: 'K', values: [453, 425, 373] } } } as const);
