@@ -10,7 +10,7 @@
  * @module
  */
 import data from '../../../data/if97/region2.json';
-import { R_IF97 } from './constants.js';
+import { fillFromIdealAndResidual } from './gibbs-ideal-residual.js';
 import type { WaterProperties } from './properties.js';
 import { region2IdealSums, region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
 
@@ -37,30 +37,7 @@ function evaluate(p: number, T: number, out: WaterProperties, metastable: boolea
   } else {
     region2ResidualSums(pi, tau - 0.5, r);
   }
-  const gr = r[0]!;
-  const grPi = r[1]!;
-  const grPiPi = r[2]!;
-  const grTau = r[3]!;
-  const grTauTau = r[4]!;
-  const grPiTau = r[5]!;
-  const RT = R_IF97 * T;
-  const gPi = 1 / pi + grPi;
-  const gTau = g0Tau + grTau;
-  const gTauTau = g0TauTau + grTauTau;
-  out.T = T;
-  out.p = p;
-  out.v = (pi * gPi * RT) / p;
-  out.rho = 1 / out.v;
-  out.h = RT * tau * gTau;
-  out.u = RT * (tau * gTau - pi * gPi);
-  out.s = R_IF97 * (tau * gTau - (g0 + gr));
-  out.cp = -R_IF97 * tau * tau * gTauTau;
-  const a = 1 + pi * grPi - tau * pi * grPiTau;
-  const b = 1 - pi * pi * grPiPi;
-  out.cv = R_IF97 * (-tau * tau * gTauTau - (a * a) / b);
-  const c = 1 + pi * grPi;
-  out.w = Math.sqrt((RT * c * c) / (b + (a * a) / (tau * tau * gTauTau)));
-  return out;
+  return fillFromIdealAndResidual(p, T, pi, tau, g0, g0Tau, g0TauTau, r, out);
 }
 
 /**

@@ -15,6 +15,19 @@ const N1 = data.n1;
 const RHO_STAR = data.rhoStar;
 const T_STAR = data.TStar;
 const f = new Float64Array(6);
+/** φ and its derivatives at (δ, τ): [φ, φδ, φδδ, φτ, φττ, φδτ], filled by {@link phiAt}. */
+const phi = new Float64Array(6);
+
+/** Fills {@link phi} at (δ, τ) (IAPWS R7-97(2012) Table 32). */
+function phiAt(delta: number, tau: number): void {
+  region3Sums(delta, tau, f);
+  phi[0] = N1 * Math.log(delta) + f[0]!;
+  phi[1] = N1 / delta + f[1]!;
+  phi[2] = -N1 / (delta * delta) + f[2]!;
+  phi[3] = f[3]!;
+  phi[4] = f[4]!;
+  phi[5] = f[5]!;
+}
 
 /**
  * Fills `out` with all properties at (ρ [kg/m³], T [K]) from the region 3 equation.
@@ -26,13 +39,12 @@ const f = new Float64Array(6);
 export function region3(rho: number, T: number, out: WaterProperties): WaterProperties {
   const delta = rho / RHO_STAR;
   const tau = T_STAR / T;
-  region3Sums(delta, tau, f);
-  const phi = N1 * Math.log(delta) + f[0]!;
-  const pD = N1 / delta + f[1]!;
-  const pDD = -N1 / (delta * delta) + f[2]!;
-  const pT = f[3]!;
-  const pTT = f[4]!;
-  const pDT = f[5]!;
+  phiAt(delta, tau);
+  const pD = phi[1]!;
+  const pDD = phi[2]!;
+  const pT = phi[3]!;
+  const pTT = phi[4]!;
+  const pDT = phi[5]!;
   const RT = R_IF97 * T;
   out.T = T;
   out.rho = rho;
@@ -40,7 +52,7 @@ export function region3(rho: number, T: number, out: WaterProperties): WaterProp
   out.p = rho * RT * delta * pD;
   out.u = RT * tau * pT;
   out.h = RT * (tau * pT + delta * pD);
-  out.s = R_IF97 * (tau * pT - phi);
+  out.s = R_IF97 * (tau * pT - phi[0]!);
   out.cv = -R_IF97 * tau * tau * pTT;
   const a = delta * pD - delta * tau * pDT;
   const b = 2 * delta * pD + delta * delta * pDD;
@@ -72,13 +84,12 @@ export function region3Pressure(rho: number, T: number, out: Float64Array): void
 export function region3Derivatives(rho: number, T: number, out: Float64Array): void {
   const delta = rho / RHO_STAR;
   const tau = T_STAR / T;
-  region3Sums(delta, tau, f);
-  const phi = N1 * Math.log(delta) + f[0]!;
-  const pD = N1 / delta + f[1]!;
-  const pDD = -N1 / (delta * delta) + f[2]!;
-  const pT = f[3]!;
-  const pTT = f[4]!;
-  const pDT = f[5]!;
+  phiAt(delta, tau);
+  const pD = phi[1]!;
+  const pDD = phi[2]!;
+  const pT = phi[3]!;
+  const pTT = phi[4]!;
+  const pDT = phi[5]!;
   const RT = R_IF97 * T;
   const dpdT = rho * R_IF97 * delta * (pD - tau * pDT);
   out[0] = rho * RT * delta * pD;
@@ -87,7 +98,7 @@ export function region3Derivatives(rho: number, T: number, out: Float64Array): v
   out[3] = RT * (tau * pT + delta * pD);
   out[4] = (RT / rho) * (tau * delta * pDT + delta * pD + delta * delta * pDD);
   out[5] = R_IF97 * (delta * pD - tau * tau * pTT - tau * delta * pDT);
-  out[6] = R_IF97 * (tau * pT - phi);
+  out[6] = R_IF97 * (tau * pT - phi[0]!);
   out[7] = -dpdT / (rho * rho);
   out[8] = (-R_IF97 * tau * tau * pTT) / T;
 }

@@ -7,7 +7,7 @@
  * @module
  */
 import data from '../../../data/if97/region5.json';
-import { R_IF97 } from './constants.js';
+import { fillFromIdealAndResidual } from './gibbs-ideal-residual.js';
 import type { WaterProperties } from './properties.js';
 import { region5IdealSums, region5ResidualSums } from './kernels.generated.js';
 
@@ -31,25 +31,5 @@ export function region5(p: number, T: number, out: WaterProperties): WaterProper
   const g0Tau = g[1]!;
   const g0TauTau = g[2]!;
   region5ResidualSums(pi, tau, r);
-  const grPi = r[1]!;
-  const grPiPi = r[2]!;
-  const grPiTau = r[5]!;
-  const RT = R_IF97 * T;
-  const gPi = 1 / pi + grPi;
-  const gTau = g0Tau + r[3]!;
-  const gTauTau = g0TauTau + r[4]!;
-  out.T = T;
-  out.p = p;
-  out.v = (pi * gPi * RT) / p;
-  out.rho = 1 / out.v;
-  out.h = RT * tau * gTau;
-  out.u = RT * (tau * gTau - pi * gPi);
-  out.s = R_IF97 * (tau * gTau - (g0 + r[0]!));
-  out.cp = -R_IF97 * tau * tau * gTauTau;
-  const a = 1 + pi * grPi - tau * pi * grPiTau;
-  const b = 1 - pi * pi * grPiPi;
-  out.cv = R_IF97 * (-tau * tau * gTauTau - (a * a) / b);
-  const c = 1 + pi * grPi;
-  out.w = Math.sqrt((RT * c * c) / (b + (a * a) / (tau * tau * gTauTau)));
-  return out;
+  return fillFromIdealAndResidual(p, T, pi, tau, g0, g0Tau, g0TauTau, r, out);
 }
