@@ -126,7 +126,10 @@ export interface IdealGas<B extends Basis = 'mass'> {
   deltaS(state1: GasState, state2: GasState): Quantity<HeatCapacityDimension<B>>;
   /** The same gas with cp frozen at `referenceT` (default 298.15 K): the cold-air-standard style estimate. */
   withConstantCp(referenceT?: QuantityLike<'temperature'>): IdealGas<B>;
-  /** Reads a temperature input, checks it against the range, returns K. For the process functions. */
+  /**
+   * Reads a temperature input and checks it against the data's interval; returns K.
+   * @internal For the process functions.
+   */
   readTemperature(T: QuantityLike<'temperature'>, parameter: string): number;
 }
 
@@ -154,29 +157,25 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
   const en = (molar ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
   const scope = `the data for ${built.name}`;
 
-  let lastFlag = false;
-  const temperature = (input: QuantityLike<'temperature'>, parameter: string): number => {
+  const outside = (T: number): boolean => T < core.Tmin || T > core.Tmax;
+  /** Reads a temperature and checks it against the data's interval (unless extrapolating). */
+  const temperature = (input: QuantityLike<'temperature'>, parameter = 'T'): number => {
     const T = readQuantity(input, 'temperature', parameter);
-    const outside = T < core.Tmin || T > core.Tmax;
-    if (outside && !(extrapolate && T > 0)) {
+    if (outside(T) && !(extrapolate && T > 0)) {
       const hint = extrapolate ? '' : '; pass { extrapolate: true } to compute outside it (results are then flagged)';
       throw new OutOfRangeError(
         { quantity: parameter, value: T, min: core.Tmin, max: core.Tmax, unit: 'K', scope },
         `${parameter} = ${Number(T.toPrecision(8))} K is outside ${scope} (${core.Tmin} to ${core.Tmax} K)${hint}`,
       );
     }
-    lastFlag = lastFlag || outside;
     return T;
   };
-  // each public function resets the flag, reads its temperatures, and marks its result
-  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D): Quantity<D> => {
-    const q = Quantity.fromSI(si, dim, undefined, lastFlag);
-    lastFlag = false;
-    return q;
-  };
-  const T1of = (input: QuantityLike<'temperature'>, parameter = 'T'): number => {
-    lastFlag = false;
-    return temperature(input, parameter);
+  /** A result, flagged as extrapolated when any of the temperatures it used lies outside the data. */
+  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D, T1: number, T2 = T1): Quantity<D> =>
+    Quantity.fromSI(si, dim, undefined, outside(T1) || outside(T2));
+  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D) => (input: QuantityLike<'temperature'>): Quantity<D> => {
+    const T = temperature(input);
+    return result(f(core, scale, T), dim, T);
   };
   const gas: IdealGas<B> = {
     name: built.name,
@@ -189,44 +188,39 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') } },
     core,
     extrapolate,
-    cp: (T) => result(cpOf(core, scale, T1of(T)), hc),
-    cv: (T) => result(cvOf(core, scale, T1of(T)), hc),
-    k: (T) => {
-      const k = kOf(core, T1of(T));
-      lastFlag = false;
-      return k;
-    },
-    h: (T) => result(hOf(core, scale, T1of(T)), en),
-    hSensible: (T) => result(hSensibleOf(core, scale, T1of(T)), en),
-    u: (T) => result(uOf(core, scale, T1of(T)), en),
+    cp: single(cpOf, hc),
+    cv: single(cvOf, hc),
+    k: (T) => kOf(core, temperature(T)),
+    h: single(hOf, en),
+    hSensible: single(hSensibleOf, en),
+    u: single(uOf, en),
     s: (T, p) => {
-      const t = T1of(T);
-      return result(sOf(core, scale, t, checkPressure(p, 'p')), hc);
+      const t = temperature(T);
+      return result(sOf(core, scale, t, checkPressure(p, 'p')), hc, t);
     },
-    sStandard: (T) => result(sStandardOf(core, scale, T1of(T)), hc),
+    sStandard: single(sStandardOf, hc),
     deltaH: (T1, T2) => {
-      const a = T1of(T1, 'T1');
+      const a = temperature(T1, 'T1');
       const b = temperature(T2, 'T2');
-      return result(hOf(core, scale, b) - hOf(core, scale, a), en);
+      return result(hOf(core, scale, b) - hOf(core, scale, a), en, a, b);
     },
     deltaU: (T1, T2) => {
-      const a = T1of(T1, 'T1');
+      const a = temperature(T1, 'T1');
       const b = temperature(T2, 'T2');
-      return result(uOf(core, scale, b) - uOf(core, scale, a), en);
+      return result(uOf(core, scale, b) - uOf(core, scale, a), en, a, b);
     },
     deltaS: (state1, state2) => {
-      const a = T1of(state1.T, 'state1.T');
+      const a = temperature(state1.T, 'state1.T');
       const b = temperature(state2.T, 'state2.T');
       const p1 = checkPressure(state1.p, 'state1.p');
       const p2 = checkPressure(state2.p, 'state2.p');
-      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc);
+      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc, a, b);
     },
     withConstantCp: (referenceT) => {
-      const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : T1of(referenceT, 'referenceT');
-      lastFlag = false;
+      const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : temperature(referenceT, 'referenceT');
       return wrap({ ...built, core: constantCpFrom(core, T0), model: 'constant-cp' }, basis, extrapolate);
     },
-    readTemperature: (T, parameter) => T1of(T, parameter),
+    readTemperature: temperature,
   };
   return gas;
 }

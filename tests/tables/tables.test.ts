@@ -7,7 +7,8 @@ import { expectClose } from '../helpers/tolerance.js';
 
 const oil = defineTable({
   name: 'thermal oil data sheet',
-  source: 'a vendor sheet of our own making (test data)',
+  // a construction for testing the mechanics, not property data: cp = 1.81 + 0.0035·t, rho = 882.5 − 0.625·t (t in °C)
+  source: 'test construction: linear functions of t',
   key: 'T',
   columns: {
     T: { unit: '°C', values: [20, 60, 100, 140] },

@@ -572,8 +572,8 @@ export function stateFromPS(p: number, s: number, out: WaterState): number {
 
 const hsState = new WaterState();
 
-/** Lowest pressure the (h, s) search considers, Pa. */
-export const P_HS_MIN = 1e-3;
+/** Lowest pressure the (h, s) and (T, v) searches consider, Pa. */
+export const P_SEARCH_MIN = 1e-3;
 
 function validPH(p: number, h: number): boolean {
   return stateFromPH(p, h, hsState) === STATUS.ok;
@@ -587,7 +587,7 @@ function validPH(p: number, h: number): boolean {
 const span = new Float64Array(2);
 function pressureSpanFor(h: number): boolean {
   let inside = NaN;
-  for (const p of [P_MAX, 1e6, P_SAT_MIN, 1e3, P_HS_MIN]) {
+  for (const p of [P_MAX, 1e6, P_SAT_MIN, 1e3, P_SEARCH_MIN]) {
     if (validPH(p, h)) {
       inside = p;
       break;
@@ -604,7 +604,7 @@ function pressureSpanFor(h: number): boolean {
     }
     return a;
   };
-  span[0] = validPH(P_HS_MIN, h) ? P_HS_MIN : edge(inside, P_HS_MIN);
+  span[0] = validPH(P_SEARCH_MIN, h) ? P_SEARCH_MIN : edge(inside, P_SEARCH_MIN);
   span[1] = validPH(P_MAX, h) ? P_MAX : edge(inside, P_MAX);
   // at an edge set by a temperature limit, validity flickers within rounding: step the ends inward
   // until the flash succeeds there, so that the search can evaluate them
@@ -660,7 +660,7 @@ function startPressureHS(h: number, s: number): number {
  */
 function newtonHS(h: number, s: number, out: WaterState): number {
   let p = startPressureHS(h, s);
-  if (!(p > P_HS_MIN && p <= P_MAX)) return STATUS.outOfRange;
+  if (!(p > P_SEARCH_MIN && p <= P_MAX)) return STATUS.outOfRange;
   for (let i = 0; i < 12; i++) {
     if (stateFromPH(p, h, out) !== STATUS.ok) return STATUS.noConvergence;
     const residual = out.s - s;
@@ -669,7 +669,7 @@ function newtonHS(h: number, s: number, out: WaterState): number {
     const step = (residual * out.T) / (p * out.v);
     if (Math.abs(step) <= 1e-14) return STATUS.ok;
     const next = p * Math.exp(Math.max(-1, Math.min(1, step)));
-    if (!(next > P_HS_MIN && next <= P_MAX)) return STATUS.noConvergence;
+    if (!(next > P_SEARCH_MIN && next <= P_MAX)) return STATUS.noConvergence;
     p = next;
   }
   return STATUS.noConvergence;
@@ -747,7 +747,7 @@ export function stateFromTV(T: number, v: number, out: WaterState): number {
   }
   const region = T > T_MAX_2 ? 5 : T <= T_13 && v < liq.v ? 1 : 2;
   const pTop = region === 5 ? P_MAX_5 : region === 1 ? P_MAX : pVaporMax;
-  const pBottom = region === 1 ? pLiquidMin : P_HS_MIN;
+  const pBottom = region === 1 ? pLiquidMin : P_SEARCH_MIN;
   const vAt = (lnp: number): number => {
     const p = Math.exp(lnp);
     if (region === 1) region1(p, T, scratchB);
