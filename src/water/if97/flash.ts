@@ -22,7 +22,7 @@ import { region1PressureHS, region2PressureHS } from './backward-hs.js';
 import { b13EnthalpyHS, region3aPressureHS, S_CRITICAL, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from './backward-hs-region3.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
 import { WaterProperties } from './properties.js';
-import { region1, region1HCp, region1SCp } from './region1.js';
+import { region1 } from './region1.js';
 import { region2 } from './region2.js';
 import { region3, region3Derivatives, region3Pressure } from './region3.js';
 import { region3TemperaturePH, region3TemperaturePS, region3VolumePH, region3VolumePS } from './backward-region3.js';

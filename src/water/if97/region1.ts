@@ -47,19 +47,3 @@ export function region1(p: number, T: number, out: WaterProperties): WaterProper
   out.w = Math.sqrt((RT * gPi * gPi) / ((a * a) / (tau * tau * gTauTau) - gPiPi));
   return out;
 }
-
-/** Specific enthalpy h(p, T) in J/kg and cp in J/(kg·K) from region 1, written to out.h and out.cp only. */
-export function region1HCp(p: number, T: number, out: WaterProperties): void {
-  const tau = T_STAR / T;
-  region1Sums(7.1 - p / P_STAR, tau - 1.222, g);
-  out.h = R_IF97 * T * tau * g[3]!;
-  out.cp = -R_IF97 * tau * tau * g[4]!;
-}
-
-/** Specific entropy s(p, T) in J/(kg·K) and cp in J/(kg·K), written to out.s and out.cp only. */
-export function region1SCp(p: number, T: number, out: WaterProperties): void {
-  const tau = T_STAR / T;
-  region1Sums(7.1 - p / P_STAR, tau - 1.222, g);
-  out.s = R_IF97 * (tau * g[3]! - g[0]!);
-  out.cp = -R_IF97 * tau * tau * g[4]!;
-}
