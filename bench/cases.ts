@@ -7,7 +7,7 @@ import { enthalpyChange } from '../src/incompressible/model.js';
 import { lookupIncompressible } from '../src/incompressible/catalogue.js';
 import { fromSI, resolveUnit, toSI } from '../src/units/registry.js';
 import r1data from '../data/if97/region1.json';
-import { saturationAtP, stateFromHS, stateFromPH, stateFromPS, stateFromPT, WaterState } from '../src/water/if97/flash.js';
+import { saturationAtP, stateFromHS, stateFromPH, stateFromPS, stateFromPT, WaterState } from '../src/water/if97/index.js';
 import { WaterProperties } from '../src/water/if97/properties.js';
 import { region1 } from '../src/water/if97/region1.js';
 import { water, waterBatch } from '../src/water/index.js';

@@ -9,7 +9,7 @@ import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
 import { idealGas } from '../src/ideal-gas/index.js';
-import { P_CRITICAL, saturationAtT, STATUS, stateFromPT, T_CRITICAL, WaterState } from '../src/water/index.js';
+import { P_CRITICAL, saturationAtT, Status as STATUS, stateFromPT, T_CRITICAL, WaterState } from '../src/water/if97/index.js';
 import { WaterProperties } from '../src/water/if97/properties.js';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');

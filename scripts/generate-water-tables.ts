@@ -12,7 +12,7 @@ import { writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
 import { resolveUnit, toSI, fromSI, DEFAULT_AMBIENT_PA } from '../src/units/registry.js';
-import { PHASE, saturationAtP, saturationAtT, STATUS, stateFromPT, WaterState } from '../src/water/if97/flash.js';
+import { PHASE, saturationAtP, saturationAtT, Status as STATUS, stateFromPT, WaterState } from '../src/water/if97/index.js';
 import { WaterProperties } from '../src/water/if97/properties.js';
 import { PropertyGrid, PropertyTable, type InterpolationMethod } from '../src/tables/table.js';
 import type { GridData, TableData } from '../src/tables/schema.js';

@@ -19,7 +19,8 @@ export type ErrorCode =
   | 'name.unknown'
   | 'formula.invalid'
   | 'definition.invalid'
-  | 'solve.no-convergence';
+  | 'solve.no-convergence'
+  | 'result.not-finite';
 
 /** Base class of every error heatstate throws on purpose. */
 export class HeatstateError extends Error {
@@ -31,6 +32,23 @@ export class HeatstateError extends Error {
     this.code = code;
     this.name = new.target.name;
   }
+
+  /**
+   * JSON form: name, code, message and the error's data fields. Infinite bounds are written as the
+   * strings `"Infinity"` and `"-Infinity"` (JSON has no infinity; it would print `null`).
+   */
+  toJSON(): Record<string, unknown> {
+    const data: Record<string, unknown> = { name: this.name, code: this.code, message: this.message };
+    for (const [key, value] of Object.entries(this)) if (key !== 'name' && key !== 'code') data[key] = jsonSafe(value);
+    return data;
+  }
+}
+
+function jsonSafe(value: unknown): unknown {
+  if (typeof value === 'number') return Number.isFinite(value) ? value : String(value);
+  if (Array.isArray(value)) return value.map(jsonSafe);
+  if (value !== null && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, jsonSafe(v)]));
+  return value;
 }
 
 /** A unit text that could not be read, or a unit that is not in the registry. */
@@ -72,6 +90,18 @@ export class InvalidInputError extends HeatstateError {
   }
 }
 
+/** A value and its bounds in the unit the caller wrote the input in (`°F`, `psia`, `Btu/lbm`). */
+export interface RangeInCallerUnit {
+  /** The caller's unit. */
+  readonly unit: string;
+  /** The value given, in `unit`. */
+  readonly value: number;
+  /** Lower bound in `unit`. */
+  readonly min: number;
+  /** Upper bound in `unit`. */
+  readonly max: number;
+}
+
 /** The valid range of an input, as data. Bounds are in `unit` (SI unless stated). */
 export interface ValidRange {
   /** What the range applies to, for example `T` or `p`. */
@@ -86,6 +116,8 @@ export interface ValidRange {
   readonly unit: string;
   /** The model, substance or region whose range it is. */
   readonly scope: string;
+  /** The same value and bounds in the caller's unit, when the input was given in another unit. */
+  readonly given?: RangeInCallerUnit;
 }
 
 /** An input outside the range where a model or data set is valid. */
@@ -99,21 +131,24 @@ export class OutOfRangeError extends HeatstateError {
   }
 }
 
-function formatNumber(x: number): string {
+/** A number for a message: 8 significant digits, ∞ for infinities. The one formatter of messages. */
+export function formatNumber(x: number): string {
   if (x === Infinity) return '∞';
   if (x === -Infinity) return '-∞';
+  if (typeof x !== 'number') return String(x);
   return Number(x.toPrecision(8)).toString();
 }
 
 function describeRange(r: ValidRange): string {
-  const v = `${r.quantity} = ${formatNumber(r.value)} ${r.unit}`;
-  if (r.value < r.min) {
-    return `${v} is below the lower limit of ${r.scope} (${formatNumber(r.min)} ${r.unit}); valid range ${formatNumber(r.min)} to ${formatNumber(r.max)} ${r.unit}`;
-  }
-  if (r.value > r.max) {
-    return `${v} is above the upper limit of ${r.scope} (${formatNumber(r.max)} ${r.unit}); valid range ${formatNumber(r.min)} to ${formatNumber(r.max)} ${r.unit}`;
-  }
-  return `${v} is outside the valid range of ${r.scope} (${formatNumber(r.min)} to ${formatNumber(r.max)} ${r.unit})`;
+  // in the caller's unit when one was given, with SI in parentheses
+  const g = r.given;
+  const show = (caller: number | undefined, si: number): string =>
+    g === undefined ? `${formatNumber(si)} ${r.unit}` : `${formatNumber(caller!)} ${g.unit} (${formatNumber(si)} ${r.unit})`;
+  const v = `${r.quantity} = ${show(g?.value, r.value)}`;
+  const span = g === undefined ? `${formatNumber(r.min)} to ${formatNumber(r.max)} ${r.unit}` : `${formatNumber(g.min)} to ${formatNumber(g.max)} ${g.unit}`;
+  if (r.value < r.min) return `${v} is below the lower limit of ${r.scope} (${show(g?.min, r.min)}); valid range ${span}`;
+  if (r.value > r.max) return `${v} is above the upper limit of ${r.scope} (${show(g?.max, r.max)}); valid range ${span}`;
+  return `${v} is outside the valid range of ${r.scope} (${span})`;
 }
 
 /** A substance, species or other name that is not in a catalogue. */
@@ -170,11 +205,22 @@ export class DefinitionError extends HeatstateError {
 
 /** An iterative solve that did not reach its tolerance. Never returned as a value. */
 export class ConvergenceError extends HeatstateError {
-  /** Iterations performed. */
-  readonly iterations: number;
+  /** Iterations performed, when the solver reports them; `undefined` when it does not. */
+  readonly iterations: number | undefined;
 
-  constructor(message: string, iterations: number) {
+  constructor(message: string, iterations?: number) {
     super('solve.no-convergence', message);
     this.iterations = iterations;
+  }
+}
+
+/** A model produced a value that is not a finite number (an overflow inside the model, not the caller's input). */
+export class ResultError extends HeatstateError {
+  /** The property whose value was not finite. */
+  readonly property: string;
+
+  constructor(property: string, message: string) {
+    super('result.not-finite', message);
+    this.property = property;
   }
 }

@@ -1,30 +1,71 @@
 /**
- * Batch evaluation of an ideal gas over typed arrays: the model's SI core in a loop, one status code
- * per element, results equal to the per-call functions bit for bit.
+ * Batch evaluation of an ideal gas over typed arrays: the model's SI core on the generic batch
+ * runner, one status code per element, results equal to the per-call functions bit for bit.
  *
  * @module
  */
 import { MOLAR_GAS_CONSTANT } from '../chem/constants.js';
-import { InvalidInputError } from '../errors.js';
+import { runBatch, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
+import { Status, type StatusCode } from '../core/status.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
 import type { Basis, IdealGas } from './gas.js';
 
 /** Properties an ideal-gas batch can return (SI, on the gas's basis; k plain). `s` needs pressures. */
 export type IdealGasBatchProperty = 'cp' | 'cv' | 'k' | 'h' | 'hSensible' | 'u' | 's' | 'sStandard';
 
+/** One element's temperature and pressure (p is 0 when the batch has no pressures). */
+class GasPoint {
+  T = 0;
+  p = 0;
+}
+
 /**
- * Status codes of {@link idealGasBatch}, per element: 0 ok; 1 out of range (T outside the data, or
- * p ≤ 0; outputs NaN); 3 invalid input (NaN or infinite; outputs NaN).
+ * Status codes of {@link idealGasBatch}, per element (the library's one status): 0 ok; 1 out of
+ * range (T outside the data, or p ≤ 0; outputs NaN); 3 invalid input (NaN or infinite; outputs NaN).
  */
-export const IDEAL_GAS_BATCH_STATUS = { ok: 0, outOfRange: 1, invalidInput: 3 } as const;
+export const IDEAL_GAS_BATCH_STATUS = Status;
+
+function model<B extends Basis>(gas: IdealGas<B>): BatchModel<GasPoint, IdealGasBatchProperty> {
+  const core = gas.core;
+  const scale = gas.basis === 'molar' ? MOLAR_GAS_CONSTANT : core.R;
+  const { min, max } = gas.bounds;
+  const exclusive = gas.bounds.minExclusive === true;
+  const check = (T: number, p: number, needP: boolean, out: GasPoint): StatusCode => {
+    if (!Number.isFinite(T) || !Number.isFinite(p)) return Status.invalidInput;
+    const inRange = (exclusive ? T > min : T >= min) && T <= max;
+    if (!inRange || (needP && !(p > 0))) return Status.outOfRange;
+    out.T = T;
+    out.p = p;
+    return Status.ok;
+  };
+  return {
+    name: 'idealGasBatch',
+    inputs: [
+      { keys: ['T'], solve: (T, _p, out) => check(T, 0, false, out) },
+      { keys: ['T', 'p'], solve: (T, p, out) => check(T, p, true, out) },
+    ],
+    properties: {
+      cp: (pt) => cpOf(core, scale, pt.T),
+      cv: (pt) => cvOf(core, scale, pt.T),
+      k: (pt) => kOf(core, pt.T),
+      h: (pt) => hOf(core, scale, pt.T),
+      hSensible: (pt) => hSensibleOf(core, scale, pt.T),
+      u: (pt) => uOf(core, scale, pt.T),
+      s: (pt) => sOf(core, scale, pt.T, pt.p),
+      sStandard: (pt) => sStandardOf(core, scale, pt.T),
+    },
+    requires: { s: ['p'] },
+    createOutput: () => new GasPoint(),
+  };
+}
 
 /**
  * Ideal-gas properties for many temperatures (and pressures, for `s`) at once.
  *
  * @param gas a gas from `idealGas` or `mixture` (its basis and extrapolation setting apply)
- * @param inputs `{ T }` in K, and `p` in Pa when `s` is requested
+ * @param inputs `{ T }` in K, or `{ T, p }` with p in Pa (needed for `s`)
  * @param props the properties wanted
- * @param out optional arrays to fill in place
+ * @param out optional arrays to fill in place, each exactly as long as the inputs
  * @throws {@link InvalidInputError} only for a malformed call; never for a bad element
  * @example
  * ```ts
@@ -37,69 +78,7 @@ export function idealGasBatch<P extends IdealGasBatchProperty, B extends Basis>(
   gas: IdealGas<B>,
   inputs: { readonly T: Float64Array; readonly p?: Float64Array },
   props: readonly P[],
-  out?: Partial<Record<P, Float64Array>> & { status?: Uint8Array },
-): { [K in P]: Float64Array } & { readonly status: Uint8Array } {
-  const T = inputs.T;
-  if (!(T instanceof Float64Array)) throw new InvalidInputError('input.invalid', 'inputs.T', 'idealGasBatch takes { T } (and p for s) as Float64Arrays in K and Pa');
-  const n = T.length;
-  const needP = props.includes('s' as P);
-  const p = inputs.p;
-  if (needP && (!(p instanceof Float64Array) || p.length !== n)) throw new InvalidInputError('input.invalid', 'inputs.p', 's needs pressures: inputs.p as a Float64Array as long as inputs.T');
-  const valid: readonly IdealGasBatchProperty[] = ['cp', 'cv', 'k', 'h', 'hSensible', 'u', 's', 'sStandard'];
-  for (const prop of props) if (!valid.includes(prop)) throw new InvalidInputError('input.invalid', 'props', `unknown property "${String(prop)}"; choose from ${valid.join(', ')}`);
-  const core = gas.core;
-  const scale = gas.basis === 'molar' ? MOLAR_GAS_CONSTANT : core.R;
-  const extrapolate = gas.extrapolate;
-  const result = {} as Record<string, Float64Array | Uint8Array>;
-  const columns = props.map((prop) => {
-    const arr = out?.[prop] ?? new Float64Array(n);
-    if (arr.length < n) throw new InvalidInputError('input.invalid', `out.${prop}`, `out.${prop} has ${arr.length} elements; ${n} are needed`);
-    result[prop] = arr;
-    return arr;
-  });
-  const status = out?.status ?? new Uint8Array(n);
-  result.status = status;
-  const m = props.length;
-  for (let i = 0; i < n; i++) {
-    const t = T[i]!;
-    const pi = needP ? p![i]! : 1;
-    let code: number = IDEAL_GAS_BATCH_STATUS.ok;
-    if (!Number.isFinite(t) || !Number.isFinite(pi)) code = IDEAL_GAS_BATCH_STATUS.invalidInput;
-    else if (!(pi > 0) || !(t > 0) || (!extrapolate && (t < core.Tmin || t > core.Tmax))) code = IDEAL_GAS_BATCH_STATUS.outOfRange;
-    status[i] = code;
-    for (let c = 0; c < m; c++) {
-      let v = NaN;
-      if (code === 0) {
-        switch (props[c]!) {
-          case 'cp':
-            v = cpOf(core, scale, t);
-            break;
-          case 'cv':
-            v = cvOf(core, scale, t);
-            break;
-          case 'k':
-            v = kOf(core, t);
-            break;
-          case 'h':
-            v = hOf(core, scale, t);
-            break;
-          case 'hSensible':
-            v = hSensibleOf(core, scale, t);
-            break;
-          case 'u':
-            v = uOf(core, scale, t);
-            break;
-          case 's':
-            v = sOf(core, scale, t, pi);
-            break;
-          case 'sStandard':
-            v = sStandardOf(core, scale, t);
-            break;
-        }
-      }
-      columns[c]![i] = v;
-    }
-  }
-  return result as { [K in P]: Float64Array } & { readonly status: Uint8Array };
+  out?: BatchOut<P>,
+): BatchResult<P> {
+  return runBatch(model(gas), inputs, props, out) as BatchResult<P>;
 }
-

@@ -3,9 +3,15 @@
  *
  * @module
  */
-import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K } from '../chem/constants.js';
-import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
+import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, STANDARD_STATE_PRESSURE_PA } from '../chem/constants.js';
+import { CallUnits } from '../core/call-units.js';
+import { throwForStatus } from '../core/fail.js';
+import { ABSOLUTE_TEMPERATURE, rangeError, readAbsolutePressure, readChoice, readFlag, readFractions, readInput, readOptions, readPair, readTemperature, type Bounds } from '../core/read.js';
+import { resultQuantity } from '../core/result.js';
+import { Status } from '../core/status.js';
+import { DefinitionError, HeatstateError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
+import { IdealGasSolver } from './solve.js';
 import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
@@ -41,6 +47,41 @@ export interface IdealGasOptions<B extends Basis = Basis> {
 export interface GasState {
   readonly T: QuantityLike<'temperature'>;
   readonly p: QuantityLike<'pressure'>;
+}
+
+/**
+ * The pairs `gas.state` accepts: `{ T, p }`, `{ h, p }` (T from h) or `{ s, p }` (T from s at p). For
+ * the energy differences (`deltaH`, `deltaU`), which depend on T only, `{ T }` alone also fixes the state.
+ */
+export type GasPair<B extends Basis = 'mass'> =
+  | { readonly T: QuantityLike<'temperature'>; readonly p: QuantityLike<'pressure'> }
+  | { readonly h: QuantityLike<EnergyDimension<B>>; readonly p: QuantityLike<'pressure'> }
+  | { readonly s: QuantityLike<HeatCapacityDimension<B>>; readonly p: QuantityLike<'pressure'> };
+
+/** A state for an energy difference: a temperature, `{ T }`, or any {@link GasPair}. */
+export type GasEnergyState<B extends Basis = 'mass'> = QuantityLike<'temperature'> | { readonly T: QuantityLike<'temperature'> } | GasPair<B>;
+
+/** A state of an ideal gas as `gas.state` returns it: every property as a quantity. */
+export interface GasStateResult<B extends Basis = 'mass'> {
+  readonly T: Quantity<'temperature'>;
+  readonly p: Quantity<'pressure'>;
+  /** Specific volume RT/p (per kg, on either basis). */
+  readonly v: Quantity<'specificVolume'>;
+  /** Density p/(RT) (mass basis). */
+  readonly rho: Quantity<'density'>;
+  readonly cp: Quantity<HeatCapacityDimension<B>>;
+  readonly cv: Quantity<HeatCapacityDimension<B>>;
+  /** cp/cv. */
+  readonly k: number;
+  /** Total enthalpy (formation at 298.15 K plus sensible). */
+  readonly h: Quantity<EnergyDimension<B>>;
+  /** Sensible enthalpy h − h(298.15 K). */
+  readonly hSensible: Quantity<EnergyDimension<B>>;
+  readonly u: Quantity<EnergyDimension<B>>;
+  /** s(T, p), including the entropy of mixing for a mixture. */
+  readonly s: Quantity<HeatCapacityDimension<B>>;
+  /** True when T lies outside the data and extrapolation was asked for. */
+  readonly extrapolated: boolean;
 }
 
 /** A user-defined species: NASA 7-coefficient data, or a constant cp. */
@@ -96,8 +137,8 @@ export interface IdealGas<B extends Basis = 'mass'> {
   readonly M: Quantity<'molarMass'>;
   /** Gas constant: R̄/M on a mass basis, R̄ on a molar basis. */
   readonly R: Quantity<HeatCapacityDimension<B>>;
-  /** Valid temperature range. */
-  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> } };
+  /** Valid range: the data's temperatures; any positive pressure (the ideal-gas model itself has no pressure limit, but see the docs on when a gas stops being ideal). */
+  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> }; readonly p: { readonly min: Quantity<'pressure'>; readonly max: undefined } };
   /** The plain-number SI core, for hot loops and batch use. */
   readonly core: IdealGasModel;
   /** Whether temperatures outside the data are computed (and flagged) rather than refused. */
@@ -118,19 +159,23 @@ export interface IdealGas<B extends Basis = 'mass'> {
   s(T: QuantityLike<'temperature'>, p: QuantityLike<'pressure'>): Quantity<HeatCapacityDimension<B>>;
   /** Standard-state entropy s°(T) at p° = 100 kPa. */
   sStandard(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
-  /** Δh = h(T2) − h(T1). */
-  deltaH(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
-  /** Δu = u(T2) − u(T1). */
-  deltaU(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
-  /** Δs = s(T2, p2) − s(T1, p1). */
-  deltaS(state1: GasState, state2: GasState): Quantity<HeatCapacityDimension<B>>;
+  /** The full state from `{ T, p }`, `{ h, p }` or `{ s, p }`. */
+  state(pair: GasPair<B>): GasStateResult<B>;
+  /** Δh = h(state2) − h(state1); a state is a temperature, `{ T }`, or any pair of {@link IdealGas.state}. */
+  deltaH(state1: GasEnergyState<B>, state2: GasEnergyState<B>): Quantity<EnergyDimension<B>>;
+  /** Δu = u(state2) − u(state1). */
+  deltaU(state1: GasEnergyState<B>, state2: GasEnergyState<B>): Quantity<EnergyDimension<B>>;
+  /** Δs = s(state2) − s(state1), each state a pair of {@link IdealGas.state}. */
+  deltaS(state1: GasPair<B>, state2: GasPair<B>): Quantity<HeatCapacityDimension<B>>;
   /** The same gas with cp frozen at `referenceT` (default 298.15 K): the cold-air-standard style estimate. */
   withConstantCp(referenceT?: QuantityLike<'temperature'>): IdealGas<B>;
   /**
-   * Reads a temperature input and checks it against the data's interval; returns K.
-   * @internal For the process functions.
+   * The gas's SI solvers (T from h or s, isentropic end temperatures), for the process functions
+   * and hot loops.
    */
-  readTemperature(T: QuantityLike<'temperature'>, parameter: string): number;
+  readonly solver: IdealGasSolver;
+  /** The temperature bounds inputs are checked against (the data's, or any positive T when extrapolating). */
+  readonly bounds: Bounds;
 }
 
 interface Built {
@@ -141,13 +186,8 @@ interface Built {
   readonly model: 'polynomial' | 'constant-cp';
 }
 
-function checkPressure(input: QuantityLike<'pressure'>, parameter: string): number {
-  const p = readQuantity(input, 'pressure', parameter);
-  if (!(p > 0)) {
-    throw new OutOfRangeError({ quantity: parameter, value: p, min: 0, max: Infinity, unit: 'Pa', scope: 'an ideal gas (absolute pressure must be positive)' });
-  }
-  return p;
-}
+const GAS_PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['h', 'p'], ['s', 'p']];
+const ENERGY_PAIRS: readonly (readonly string[])[] = [['T'], ...GAS_PAIRS];
 
 function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): IdealGas<B> {
   const core = built.core;
@@ -156,26 +196,50 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
   const hc = (molar ? 'molarHeatCapacity' : 'specificHeat') as HeatCapacityDimension<B>;
   const en = (molar ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
   const scope = `the data for ${built.name}`;
+  const solver = new IdealGasSolver(core);
+  const bounds: Bounds = extrapolate
+    ? ABSOLUTE_TEMPERATURE
+    : { min: core.Tmin, max: core.Tmax, scope, hint: '; pass { extrapolate: true } to compute outside it (results are then flagged)' };
 
   const outside = (T: number): boolean => T < core.Tmin || T > core.Tmax;
   /** Reads a temperature and checks it against the data's interval (unless extrapolating). */
-  const temperature = (input: QuantityLike<'temperature'>, parameter = 'T'): number => {
-    const T = readQuantity(input, 'temperature', parameter);
-    if (outside(T) && !(extrapolate && T > 0)) {
-      const hint = extrapolate ? '' : '; pass { extrapolate: true } to compute outside it (results are then flagged)';
-      throw new OutOfRangeError(
-        { quantity: parameter, value: T, min: core.Tmin, max: core.Tmax, unit: 'K', scope },
-        `${parameter} = ${Number(T.toPrecision(8))} K is outside ${scope} (${core.Tmin} to ${core.Tmax} K)${hint}`,
-      );
-    }
-    return T;
-  };
+  const temperature = (input: QuantityLike<'temperature'>, parameter = 'T', units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
   /** A result, flagged as extrapolated when any of the temperatures it used lies outside the data. */
-  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D, T1: number, T2 = T1): Quantity<D> =>
-    Quantity.fromSI(si, dim, undefined, outside(T1) || outside(T2));
-  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D) => (input: QuantityLike<'temperature'>): Quantity<D> => {
+  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D, name: string, T1: number, T2 = T1): Quantity<D> => resultQuantity(si, dim, name, outside(T1) || outside(T2));
+  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D, name: string) => (input: QuantityLike<'temperature'>): Quantity<D> => {
     const T = temperature(input);
-    return result(f(core, scale, T), dim, T);
+    return result(f(core, scale, T), dim, name, T);
+  };
+  /** T and p (p NaN when not given) of a state pair, solving T from h or s; `prefix` names the inputs in messages. */
+  const resolve = (state: unknown, prefix: string, pairs: readonly (readonly string[])[]): [number, number] => {
+    const fn = `${built.name} state${prefix === '' ? '' : ` ${prefix.replace(/\.$/, '')}`}`;
+    if (typeof state === 'string' || state instanceof Quantity) {
+      if (pairs === GAS_PAIRS) readPair(state, fn, pairs); // a temperature alone does not fix s
+      return [temperature(state as QuantityLike<'temperature'>, prefix === '' ? 'T' : prefix.replace(/\.$/, '')), NaN];
+    }
+    const key = readPair(state, fn, pairs);
+    const a = state as Record<string, unknown>;
+    const units = new CallUnits();
+    const p = key === 'T' ? NaN : readAbsolutePressure(a.p as QuantityLike<'pressure'>, `${prefix}p`, undefined, units);
+    if (key === 'T' || key === 'T,p') return [temperature(a.T as QuantityLike<'temperature'>, `${prefix}T`, units), p];
+    const isH = key === 'h,p';
+    const value = readInput(a[isH ? 'h' : 's'] as QuantityLike<EnergyDimension<B> | HeatCapacityDimension<B>>, isH ? en : hc, `${prefix}${isH ? 'h' : 's'}`, undefined, units);
+    // per R̄ or R: h/R in K, s°/R at p° from s(T, p) = R (s°/R − ln(p/p°)), less the mixing term
+    const target = isH ? value / scale : value / scale + Math.log(p / STANDARD_STATE_PRESSURE_PA);
+    const status = isH ? solver.temperatureAtEnthalpy(target, 0.5 * (core.Tmin + Math.min(core.Tmax, 3000))) : solver.temperatureAtStandardEntropy(target, 0.5 * (core.Tmin + Math.min(core.Tmax, 3000)));
+    if (status !== Status.ok) {
+      const name = isH ? 'h' : 's';
+      const lo = isH ? hOf(core, scale, core.Tmin) : sOf(core, scale, core.Tmin, p);
+      const hi = isH ? hOf(core, scale, core.Tmax) : sOf(core, scale, core.Tmax, p);
+      const dim = isH ? en : hc;
+      throwForStatus(status, {
+        what: `the temperature of ${built.name} from ${name}`,
+        inputs: `${prefix}${name} = ${units.describe(value, dim, molar ? (isH ? 'J/mol' : 'J/(mol·K)') : isH ? 'J/kg' : 'J/(kg·K)')}`,
+        range: () => rangeError(`${prefix}${name}`, value, dim, { min: lo, max: hi, scope: `${scope} (${core.Tmin} to ${core.Tmax} K${isH ? '' : ' at this pressure'})` }, units),
+        iterations: solver.result.iterations,
+      });
+    }
+    return [solver.result.x, p];
   };
   const gas: IdealGas<B> = {
     name: built.name,
@@ -185,42 +249,60 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     source: built.source,
     M: Quantity.fromSI(core.M, 'molarMass', 'g/mol'),
     R: Quantity.fromSI(scale, hc),
-    range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') } },
+    range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
     core,
     extrapolate,
-    cp: single(cpOf, hc),
-    cv: single(cvOf, hc),
+    solver,
+    bounds,
+    cp: single(cpOf, hc, 'cp'),
+    cv: single(cvOf, hc, 'cv'),
     k: (T) => kOf(core, temperature(T)),
-    h: single(hOf, en),
-    hSensible: single(hSensibleOf, en),
-    u: single(uOf, en),
+    h: single(hOf, en, 'h'),
+    hSensible: single(hSensibleOf, en, 'hSensible'),
+    u: single(uOf, en, 'u'),
     s: (T, p) => {
-      const t = temperature(T);
-      return result(sOf(core, scale, t, checkPressure(p, 'p')), hc, t);
+      const units = new CallUnits();
+      const t = temperature(T, 'T', units);
+      return result(sOf(core, scale, t, readAbsolutePressure(p, 'p', undefined, units)), hc, 's', t);
     },
-    sStandard: single(sStandardOf, hc),
-    deltaH: (T1, T2) => {
-      const a = temperature(T1, 'T1');
-      const b = temperature(T2, 'T2');
-      return result(hOf(core, scale, b) - hOf(core, scale, a), en, a, b);
+    sStandard: single(sStandardOf, hc, 'sStandard'),
+    state: (pair) => {
+      const [T, p] = resolve(pair, '', GAS_PAIRS);
+      const flag = outside(T);
+      return {
+        T: resultQuantity(T, 'temperature', 'T', flag),
+        p: resultQuantity(p, 'pressure', 'p'),
+        v: resultQuantity((core.R * T) / p, 'specificVolume', 'v', flag),
+        rho: resultQuantity(p / (core.R * T), 'density', 'rho', flag),
+        cp: result(cpOf(core, scale, T), hc, 'cp', T),
+        cv: result(cvOf(core, scale, T), hc, 'cv', T),
+        k: kOf(core, T),
+        h: result(hOf(core, scale, T), en, 'h', T),
+        hSensible: result(hSensibleOf(core, scale, T), en, 'hSensible', T),
+        u: result(uOf(core, scale, T), en, 'u', T),
+        s: result(sOf(core, scale, T, p), hc, 's', T),
+        extrapolated: flag,
+      };
     },
-    deltaU: (T1, T2) => {
-      const a = temperature(T1, 'T1');
-      const b = temperature(T2, 'T2');
-      return result(uOf(core, scale, b) - uOf(core, scale, a), en, a, b);
+    deltaH: (state1, state2) => {
+      const [a] = resolve(state1, 'state1.', ENERGY_PAIRS);
+      const [b] = resolve(state2, 'state2.', ENERGY_PAIRS);
+      return result(hOf(core, scale, b) - hOf(core, scale, a), en, 'deltaH', a, b);
+    },
+    deltaU: (state1, state2) => {
+      const [a] = resolve(state1, 'state1.', ENERGY_PAIRS);
+      const [b] = resolve(state2, 'state2.', ENERGY_PAIRS);
+      return result(uOf(core, scale, b) - uOf(core, scale, a), en, 'deltaU', a, b);
     },
     deltaS: (state1, state2) => {
-      const a = temperature(state1.T, 'state1.T');
-      const b = temperature(state2.T, 'state2.T');
-      const p1 = checkPressure(state1.p, 'state1.p');
-      const p2 = checkPressure(state2.p, 'state2.p');
-      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc, a, b);
+      const [a, p1] = resolve(state1, 'state1.', GAS_PAIRS);
+      const [b, p2] = resolve(state2, 'state2.', GAS_PAIRS);
+      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc, 'deltaS', a, b);
     },
     withConstantCp: (referenceT) => {
       const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : temperature(referenceT, 'referenceT');
       return wrap({ ...built, core: constantCpFrom(core, T0), model: 'constant-cp' }, basis, extrapolate);
     },
-    readTemperature: temperature,
   };
   return gas;
 }
@@ -325,6 +407,7 @@ function applyOptions(built: Built, options: IdealGasOptions | undefined): Built
 export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?: IdealGasOptions<'mass'>): IdealGas<'mass'>;
 export function idealGas(nameOrDefinition: string | IdealGasDefinition, options: IdealGasOptions<'molar'> & { readonly basis: 'molar' }): IdealGas<'molar'>;
 export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?: IdealGasOptions): IdealGas<Basis> {
+  const o = readGasOptions(options, 'options', GAS_OPTIONS);
   let built: Built;
   if (typeof nameOrDefinition === 'string') {
     const { record, model } = speciesModel(nameOrDefinition);
@@ -332,7 +415,23 @@ export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?
   } else {
     built = fromDefinition(nameOrDefinition);
   }
-  return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true);
+  return wrap(applyOptions(built, o), o.basis ?? 'mass', o.extrapolate === true);
+}
+
+const GAS_OPTIONS = ['basis', 'model', 'referenceT', 'cp', 'extrapolate'] as const;
+const MIXTURE_OPTIONS = [...GAS_OPTIONS, 'fractions', 'normalize', 'name'] as const;
+
+/** Checks the options object: known keys, and each value of its kind (unknown values refused with the valid ones). */
+function readGasOptions(options: unknown, parameter: string, known: readonly string[]): MixtureOptions {
+  const o = readOptions<MixtureOptions>(options, parameter, known);
+  return {
+    ...o,
+    basis: readChoice<Basis>(o.basis, `${parameter}.basis`, ['mass', 'molar'], 'mass'),
+    model: readChoice<'polynomial' | 'constant-cp'>(o.model, `${parameter}.model`, ['polynomial', 'constant-cp'], 'polynomial'),
+    extrapolate: readFlag(o.extrapolate, `${parameter}.extrapolate`),
+    fractions: readChoice<'mole' | 'mass'>(o.fractions, `${parameter}.fractions`, ['mole', 'mass'], 'mole'),
+    normalize: readFlag(o.normalize, `${parameter}.normalize`),
+  };
 }
 
 /** Composition: species name or formula → fraction. */
@@ -349,24 +448,7 @@ export interface MixtureOptions<B extends Basis = Basis> extends IdealGasOptions
 }
 
 function checkFractions(composition: Composition, normalize: boolean): [string[], number[]] {
-  if (typeof composition !== 'object' || composition === null) throw new InvalidInputError('input.invalid', 'composition', 'a composition is an object such as { N2: 0.79, O2: 0.21 }');
-  const names = Object.keys(composition);
-  if (names.length === 0) throw new InvalidInputError('input.invalid', 'composition', 'a mixture needs at least one component');
-  const values = names.map((n) => composition[n]!);
-  values.forEach((v, i) => {
-    if (!Number.isFinite(v) || v < 0) throw new InvalidInputError('input.invalid', `composition.${names[i]}`, `fraction of ${names[i]} must be a finite number ≥ 0; got ${v}`);
-  });
-  const sum = values.reduce((a, b) => a + b, 0);
-  if (!(sum > 0)) throw new InvalidInputError('input.invalid', 'composition', 'fractions sum to 0');
-  if (Math.abs(sum - 1) > 1e-6) {
-    if (!normalize) {
-      throw new OutOfRangeError(
-        { quantity: 'sum of fractions', value: sum, min: 1 - 1e-6, max: 1 + 1e-6, unit: '1', scope: 'a composition' },
-        `fractions sum to ${sum}, not 1 (within 1e-6); fix them or pass { normalize: true }`,
-      );
-    }
-  }
-  return [names, values.map((v) => v / sum)];
+  return readFractions(composition, 'composition', normalize);
 }
 
 /**
@@ -416,7 +498,8 @@ export function massToMoleFractions(composition: Composition, options?: { readon
 export function mixture(composition: Composition, options?: MixtureOptions<'mass'>): IdealGas<'mass'>;
 export function mixture(composition: Composition, options: MixtureOptions<'molar'> & { readonly basis: 'molar' }): IdealGas<'molar'>;
 export function mixture(composition: Composition, options?: MixtureOptions): IdealGas<Basis> {
-  const normalize = options?.normalize === true;
+  options = readGasOptions(options, 'options', MIXTURE_OPTIONS);
+  const normalize = options.normalize === true;
   const moleFractions = options?.fractions === 'mass' ? massToMoleFractions(composition, { normalize }) : Object.fromEntries(zip(...checkFractions(composition, normalize)));
   const names = Object.keys(moleFractions);
   const y = names.map((n) => moleFractions[n]!);

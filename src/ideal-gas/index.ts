@@ -5,13 +5,18 @@
  * @packageDocumentation
  */
 export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
-export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, Basis, HeatCapacityDimension, EnergyDimension } from './gas.js';
+export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, Basis, HeatCapacityDimension, EnergyDimension } from './gas.js';
 export { idealGasBatch, IDEAL_GAS_BATCH_STATUS } from './batch.js';
 export type { IdealGasBatchProperty } from './batch.js';
-export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation, isentropicTemperature, temperatureAtEnthalpy, isentropicTemperatureConstantCp } from './processes.js';
+export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation } from './processes.js';
+export { IdealGasSolver, isentropicTemperatureConstantCp } from './solve.js';
+export { Status } from '../core/status.js';
+export type { StatusCode } from '../core/status.js';
+export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
+export type { QuantityLike } from '../units/quantity.js';
 export type { MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './processes.js';
 export { NasaPolynomialModel, ConstantCpModel, MixtureModel, constantCpFrom, mixNasa, fromSevenCoefficients } from './model.js';
 export type { IdealGasModel } from './model.js';
 export { speciesNames, speciesRecords, findSpecies } from './species.js';
 export type { SpeciesRecord } from './species.js';
-export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';

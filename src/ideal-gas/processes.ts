@@ -8,53 +8,17 @@
  * @module
  */
 import { MOLAR_GAS_CONSTANT } from '../chem/constants.js';
-import { ConvergenceError, InvalidInputError, OutOfRangeError } from '../errors.js';
-import { solveBracketed } from '../numeric/root.js';
-import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
+import { CallUnits } from '../core/call-units.js';
+import { throwForStatus } from '../core/fail.js';
+import { rangeError, readAbsolutePressure, readNumber, readTemperature } from '../core/read.js';
+import { resultQuantity } from '../core/result.js';
+import { Status, type StatusCode } from '../core/status.js';
+import { InvalidInputError, OutOfRangeError } from '../errors.js';
+import type { Quantity, QuantityLike } from '../units/quantity.js';
 import type { Basis, EnergyDimension, IdealGas } from './gas.js';
-import type { IdealGasModel } from './model.js';
+import { isentropicTemperatureConstantCp } from './solve.js';
 
-/**
- * T2 with s°(T2) − s°(T1) = R ln(p2/p1) (isentropic, variable cp), in K, found by a bracketed Newton
- * solve on [Tmin, Tmax]. Returns NaN when T2 would fall outside the model's range.
- * @example
- * ```ts
- * const air = idealGas('air').core;
- * isentropicTemperature(air, 300, 100e3, 800e3);   //=> 539.6 (K)
- * ```
- */
-export function isentropicTemperature(model: IdealGasModel, T1: number, p1: number, p2: number): number {
-  const target = model.sR(T1) + Math.log(p2 / p1);
-  const f = (T: number) => model.sR(T) - target;
-  if (f(model.Tmin) > 0 || f(model.Tmax) < 0) return NaN;
-  const guess = T1 * (p2 / p1) ** (1 - 1 / (model.cpR(T1) / (model.cpR(T1) - 1)));
-  return solveBracketed(f, (T) => model.cpR(T) / T, model.Tmin, model.Tmax, guess);
-}
-
-/**
- * T (K) at which h°/R̄ = hOverR (K), by a bracketed Newton solve. NaN when outside the range.
- * @example
- * ```ts
- * const n2 = idealGas('N2').core;
- * temperatureAtEnthalpy(n2, 1000 * n2.hRT(1000), 900);   //=> 1000 (K)
- * ```
- */
-export function temperatureAtEnthalpy(model: IdealGasModel, hOverR: number, guess: number): number {
-  const f = (T: number) => T * model.hRT(T) - hOverR;
-  if (f(model.Tmin) > 0 || f(model.Tmax) < 0) return NaN;
-  return solveBracketed(f, (T) => model.cpR(T), model.Tmin, model.Tmax, guess);
-}
-
-/**
- * Constant-cp isentropic end temperature: T2 = T1·(p2/p1)^((k−1)/k).
- * @example
- * ```ts
- * isentropicTemperatureConstantCp(1.4, 300, 100e3, 800e3);   //=> 543.4 (K)
- * ```
- */
-export function isentropicTemperatureConstantCp(k: number, T1: number, p1: number, p2: number): number {
-  return T1 * (p2 / p1) ** ((k - 1) / k);
-}
+export { isentropicTemperatureConstantCp, IdealGasSolver } from './solve.js';
 
 /** Result of a compressor or turbine calculation. Work is per unit mass (or mole on a molar basis). */
 export interface MachineResult<B extends Basis = 'mass'> {
@@ -81,25 +45,34 @@ function energyScale(gas: IdealGas<Basis>): number {
   return gas.basis === 'molar' ? MOLAR_GAS_CONSTANT : gas.core.R;
 }
 
-function pressure(input: QuantityLike<'pressure'>, parameter: string): number {
-  const p = readQuantity(input, 'pressure', parameter);
-  if (!(p > 0)) throw new OutOfRangeError({ quantity: parameter, value: p, min: 0, max: Infinity, unit: 'Pa', scope: 'an ideal gas (absolute pressure must be positive)' });
-  return p;
+function energyDimension<B extends Basis>(gas: IdealGas<B>): EnergyDimension<B> {
+  return (gas.basis === 'molar' ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
 }
 
-function efficiencyOf(efficiency: number | undefined): number {
-  const eta = efficiency ?? 1;
-  if (!Number.isFinite(eta) || !(eta > 0 && eta <= 1)) {
-    throw new OutOfRangeError({ quantity: 'efficiency', value: eta, min: 0, max: 1, unit: '1', scope: 'an isentropic efficiency (0 < η ≤ 1)' });
-  }
-  return eta;
+/** An isentropic efficiency, 0 < η ≤ 1 (default 1). */
+function efficiencyOf(efficiency: unknown): number {
+  return efficiency === undefined ? 1 : readNumber(efficiency, 'efficiency', { min: 0, max: 1, scope: 'an isentropic efficiency (0 < η ≤ 1)', minExclusive: true });
 }
 
-function outsideRange(gas: IdealGas<Basis>, what: string): never {
-  throw new OutOfRangeError(
-    { quantity: what, value: NaN, min: gas.core.Tmin, max: gas.core.Tmax, unit: 'K', scope: `the data for ${gas.name}` },
-    `the ${what} would fall outside the data for ${gas.name} (${gas.core.Tmin} to ${gas.core.Tmax} K)`,
-  );
+/** The inlet of a process: T1 in the gas's range, p1 and p2 absolute, read once in the caller's units. */
+function inlet(gas: IdealGas<Basis>, input: unknown, fn: string): { T1: number; p1: number; p2: number; units: CallUnits } {
+  if (typeof input !== 'object' || input === null) throw new InvalidInputError('input.invalid', 'input', `${fn} takes { T1, p1, p2 } (and options); got ${String(input)}`);
+  const a = input as Record<string, unknown>;
+  const units = new CallUnits();
+  const T1 = readTemperature(a.T1 as QuantityLike<'temperature'>, 'T1', gas.bounds, units);
+  const p1 = readAbsolutePressure(a.p1 as QuantityLike<'pressure'>, 'p1', undefined, units);
+  const p2 = readAbsolutePressure(a.p2 as QuantityLike<'pressure'>, 'p2', undefined, units);
+  return { T1, p1, p2, units };
+}
+
+/** Throws for a failed temperature solve: the end temperature would leave the data. */
+function failEnd(gas: IdealGas<Basis>, status: StatusCode, what: string, units: CallUnits, estimate: number): never {
+  throwForStatus(status, {
+    what: `the ${what} of ${gas.name}`,
+    inputs: 'these inlet conditions',
+    range: () => rangeError(what, estimate, 'temperature', { min: gas.core.Tmin, max: gas.core.Tmax, scope: `the data for ${gas.name} (the ${what} would fall outside it)` }, units),
+    iterations: gas.solver.result.iterations,
+  });
 }
 
 /**
@@ -109,7 +82,7 @@ function outsideRange(gas: IdealGas<Basis>, what: string): never {
  * @throws {@link OutOfRangeError} when T2 would fall outside the data
  * @example
  * ```ts
- * isentropicEnd(idealGas('air'), { T1: '300 K', p1: '100 kPa', p2: '800 kPa' }).T2.in('K'); //=> 539.8...
+ * isentropicEnd(idealGas('air'), { T1: '300 K', p1: '100 kPa', p2: '800 kPa' }).T2.in('K'); //=> 539.61...
  * ```
  */
 export function isentropicEnd<B extends Basis>(gas: IdealGas<B>, input: { readonly T1: QuantityLike<'temperature'>; readonly p1: QuantityLike<'pressure'>; readonly p2: QuantityLike<'pressure'> }): {
@@ -117,42 +90,46 @@ export function isentropicEnd<B extends Basis>(gas: IdealGas<B>, input: { readon
   readonly deltaH: Quantity<EnergyDimension<B>>;
   readonly deltaU: Quantity<EnergyDimension<B>>;
 } {
-  const T1 = gas.readTemperature(input.T1, 'T1');
-  const T2 = isentropicTemperature(gas.core, T1, pressure(input.p1, 'p1'), pressure(input.p2, 'p2'));
-  if (Number.isNaN(T2)) outsideRange(gas, 'isentropic end temperature');
-  const T2q = Quantity.fromSI(T2, 'temperature');
-  return { T2: T2q, deltaH: gas.deltaH(T1q(T1), T2q), deltaU: gas.deltaU(T1q(T1), T2q) };
-}
-
-function T1q(T: number): Quantity<'temperature'> {
-  return Quantity.fromSI(T, 'temperature');
+  const { T1, p1, p2, units } = inlet(gas, input, 'isentropicEnd');
+  const core = gas.core;
+  const status = gas.solver.isentropicTemperature(T1, p1, p2);
+  if (status !== Status.ok) failEnd(gas, status, 'isentropic end temperature', units, isentropicTemperatureConstantCp(core.cpR(T1) / (core.cpR(T1) - 1), T1, p1, p2));
+  const T2 = gas.solver.result.x;
+  const scale = energyScale(gas);
+  const en = energyDimension(gas);
+  return {
+    T2: resultQuantity(T2, 'temperature', 'T2'),
+    deltaH: resultQuantity(scale * (T2 * core.hRT(T2) - T1 * core.hRT(T1)), en, 'deltaH'),
+    deltaU: resultQuantity(scale * (T2 * (core.hRT(T2) - 1) - T1 * (core.hRT(T1) - 1)), en, 'deltaU'),
+  };
 }
 
 function machine<B extends Basis>(gas: IdealGas<B>, input: MachineInput, kind: 'compressor' | 'turbine'): MachineResult<B> {
-  const T1 = gas.readTemperature(input.T1, 'T1');
-  const p1 = pressure(input.p1, 'p1');
-  const p2 = pressure(input.p2, 'p2');
+  const { T1, p1, p2, units } = inlet(gas, input, kind);
   if (kind === 'compressor' ? !(p2 > p1) : !(p2 < p1)) {
-    throw new InvalidInputError('input.invalid', 'p2', `a ${kind} needs p2 ${kind === 'compressor' ? '>' : '<'} p1; got p1 = ${p1} Pa, p2 = ${p2} Pa`);
+    throw new InvalidInputError('input.invalid', 'p2', `a ${kind} needs p2 ${kind === 'compressor' ? '>' : '<'} p1; got p1 = ${units.describe(p1, 'pressure', 'Pa')}, p2 = ${units.describe(p2, 'pressure', 'Pa')}`);
   }
   const eta = efficiencyOf(input.efficiency);
   const core = gas.core;
-  const T2s = isentropicTemperature(core, T1, p1, p2);
-  if (Number.isNaN(T2s)) outsideRange(gas, 'isentropic outlet temperature');
+  const solver = gas.solver;
+  let status = solver.isentropicTemperature(T1, p1, p2);
+  if (status !== Status.ok) failEnd(gas, status, 'isentropic outlet temperature', units, isentropicTemperatureConstantCp(core.cpR(T1) / (core.cpR(T1) - 1), T1, p1, p2));
+  const T2s = solver.result.x;
   const h1 = T1 * core.hRT(T1);
   const h2s = T2s * core.hRT(T2s);
   const ws = kind === 'compressor' ? h2s - h1 : h1 - h2s; // per R̄ or R, in K
   const w = kind === 'compressor' ? ws / eta : ws * eta;
   const h2 = kind === 'compressor' ? h1 + w : h1 - w;
-  const T2 = temperatureAtEnthalpy(core, h2, T2s);
-  if (Number.isNaN(T2)) outsideRange(gas, 'outlet temperature');
+  status = solver.temperatureAtEnthalpy(h2, T2s);
+  if (status !== Status.ok) failEnd(gas, status, 'outlet temperature', units, T1 + (h2 - h1) / core.cpR(T1));
+  const T2 = solver.result.x;
   const scale = energyScale(gas);
-  const en = (gas.basis === 'molar' ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
+  const en = energyDimension(gas);
   return {
-    T2s: Quantity.fromSI(T2s, 'temperature'),
-    T2: Quantity.fromSI(T2, 'temperature'),
-    workIsentropic: Quantity.fromSI(scale * ws, en),
-    work: Quantity.fromSI(scale * w, en),
+    T2s: resultQuantity(T2s, 'temperature', 'T2s'),
+    T2: resultQuantity(T2, 'temperature', 'T2'),
+    workIsentropic: resultQuantity(scale * ws, en, 'workIsentropic'),
+    work: resultQuantity(scale * w, en, 'work'),
   };
 }
 
@@ -211,28 +188,26 @@ export interface PolytropicResult<B extends Basis = 'mass'> {
  * ```
  */
 export function polytropic<B extends Basis>(gas: IdealGas<B>, input: { readonly T1: QuantityLike<'temperature'>; readonly p1: QuantityLike<'pressure'>; readonly p2: QuantityLike<'pressure'>; readonly n: number }): PolytropicResult<B> {
-  const n = input.n;
-  if (!Number.isFinite(n) || n < 0) throw new OutOfRangeError({ quantity: 'n', value: n, min: 0, max: Infinity, unit: '1', scope: 'a polytropic exponent' });
-  const T1 = gas.readTemperature(input.T1, 'T1');
-  const p1 = pressure(input.p1, 'p1');
-  const p2 = pressure(input.p2, 'p2');
+  const { T1, p1, p2, units } = inlet(gas, input, 'polytropic');
+  const n = readNumber(input.n, 'n', { min: 0, max: Infinity, scope: 'a polytropic exponent (n ≥ 0; n → ∞, isochoric, is not accepted)' });
   if (n === 0 && p1 !== p2) throw new InvalidInputError('input.invalid', 'p2', 'n = 0 is a constant-pressure process: p2 must equal p1 (give T2 to another function)');
   const T2 = n === 0 ? T1 : T1 * (p2 / p1) ** ((n - 1) / n);
-  const T2q = gas.readTemperature(Quantity.fromSI(T2, 'temperature'), 'T2');
+  const b = gas.bounds;
+  if (!(T2 >= b.min && T2 <= b.max)) throw rangeError('T2', T2, 'temperature', b, units);
   const scale = energyScale(gas);
   const Rmass = gas.core.R;
-  const en = (gas.basis === 'molar' ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
+  const en = energyDimension(gas);
   const isothermal = n === 1;
-  const wb = isothermal ? T1 * Math.log(p1 / p2) : (T2q - T1) / (1 - n); // per R
-  const wt = isothermal ? T1 * Math.log(p1 / p2) : (n * (T1 - T2q)) / (n - 1);
-  const du = T2q * (gas.core.hRT(T2q) - 1) - T1 * (gas.core.hRT(T1) - 1);
+  const wb = isothermal ? T1 * Math.log(p1 / p2) : (T2 - T1) / (1 - n); // per R
+  const wt = isothermal ? T1 * Math.log(p1 / p2) : (n * (T1 - T2)) / (n - 1);
+  const du = T2 * (gas.core.hRT(T2) - 1) - T1 * (gas.core.hRT(T1) - 1);
   return {
-    T2: Quantity.fromSI(T2q, 'temperature'),
-    v1: Quantity.fromSI((Rmass * T1) / p1, 'specificVolume'),
-    v2: Quantity.fromSI((Rmass * T2q) / p2, 'specificVolume'),
-    boundaryWork: Quantity.fromSI(scale * wb, en),
-    technicalWork: Quantity.fromSI(scale * wt, en),
-    heat: Quantity.fromSI(scale * (du + wb), en),
+    T2: resultQuantity(T2, 'temperature', 'T2'),
+    v1: resultQuantity((Rmass * T1) / p1, 'specificVolume', 'v1'),
+    v2: resultQuantity((Rmass * T2) / p2, 'specificVolume', 'v2'),
+    boundaryWork: resultQuantity(scale * wb, en, 'boundaryWork'),
+    technicalWork: resultQuantity(scale * wt, en, 'technicalWork'),
+    heat: resultQuantity(scale * (du + wb), en, 'heat'),
   };
 }
 
@@ -271,25 +246,25 @@ export interface ConstantCpDeviation<B extends Basis = 'mass'> {
  */
 export function constantCpDeviation<B extends Basis>(gas: IdealGas<B>, input: MachineInput & { readonly machine: 'compressor' | 'turbine'; readonly referenceT?: QuantityLike<'temperature'> }): ConstantCpDeviation<B> {
   const variableCp = machine(gas, input, input.machine);
-  const T0 = input.referenceT === undefined ? 298.15 : gas.readTemperature(input.referenceT, 'referenceT');
+  const { T1, p1, p2, units } = inlet(gas, input, 'constantCpDeviation');
+  const T0 = input.referenceT === undefined ? 298.15 : readTemperature(input.referenceT, 'referenceT', gas.bounds, units);
   const cpR = gas.core.cpR(T0);
-  const T1 = gas.readTemperature(input.T1, 'T1');
-  const c = machineConstantCp(cpR, T1, pressure(input.p1, 'p1'), pressure(input.p2, 'p2'), efficiencyOf(input.efficiency), input.machine);
-  if (!(c.T2 > 0 && c.T2s > 0)) throw new ConvergenceError('the constant-cp closed form gives a non-positive temperature', 0);
+  const c = machineConstantCp(cpR, T1, p1, p2, efficiencyOf(input.efficiency), input.machine);
+  if (!(c.T2 > 0 && c.T2s > 0)) throw rangeError('T2', c.T2, 'temperature', { min: 0, max: Infinity, scope: 'the constant-cp closed form (it gives a non-positive temperature here)', minExclusive: true }, units);
   const scale = energyScale(gas);
-  const en = (gas.basis === 'molar' ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
+  const en = energyDimension(gas);
   const constantCp = {
     k: c.k,
-    cp: Quantity.fromSI(gas.core.R * cpR, 'specificHeat'),
-    T2s: Quantity.fromSI(c.T2s, 'temperature'),
-    T2: Quantity.fromSI(c.T2, 'temperature'),
-    workIsentropic: Quantity.fromSI(scale * c.ws, en),
-    work: Quantity.fromSI(scale * c.w, en),
+    cp: resultQuantity(gas.core.R * cpR, 'specificHeat', 'cp'),
+    T2s: resultQuantity(c.T2s, 'temperature', 'T2s'),
+    T2: resultQuantity(c.T2, 'temperature', 'T2'),
+    workIsentropic: resultQuantity(scale * c.ws, en, 'workIsentropic'),
+    work: resultQuantity(scale * c.w, en, 'work'),
   };
   return {
     variableCp,
     constantCp,
-    T2Difference: Quantity.fromSI(c.T2 - variableCp.T2.si, 'temperatureDifference'),
+    T2Difference: resultQuantity(c.T2 - variableCp.T2.si, 'temperatureDifference', 'T2Difference'),
     workRelativeDifference: (constantCp.work.si - variableCp.work.si) / variableCp.work.si,
   };
 }

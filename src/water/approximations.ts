@@ -15,7 +15,10 @@ import { heatCapacityAt } from '../incompressible/model.js';
 import { lookupIncompressible } from '../incompressible/catalogue.js';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
 import { P_MAX, T_CRITICAL, T_MIN, T_TRIPLE } from './if97/constants.js';
-import { saturationAtT, STATUS, stateFromPT, WaterState } from './if97/flash.js';
+import { Status } from '../core/status.js';
+import { stateFromPT } from './if97/pt.js';
+import { saturationAtT } from './if97/saturation.js';
+import { WaterState } from './if97/water-state.js';
 import { WaterProperties } from './if97/properties.js';
 import { saturationPressure } from './if97/region4.js';
 
@@ -96,13 +99,13 @@ function estimate(method: LiquidApproximation, T: number, p: number): Values {
     const u = c * (T - T_TRIPLE);
     return { v, u, h: u + p * v, s: c * Math.log(T / T_TRIPLE) };
   }
-  if (saturationAtT(T, sat, vap) !== STATUS.ok) throw new OutOfRangeError({ quantity: 'T', value: T, min: T_MIN, max: T_CRITICAL, unit: 'K', scope: 'the saturation line' });
+  if (saturationAtT(T, sat, vap) !== Status.ok) throw new OutOfRangeError({ quantity: 'T', value: T, min: T_MIN, max: T_CRITICAL, unit: 'K', scope: 'the saturation line' });
   const h = method === 'pressure-corrected' ? sat.h + sat.v * (p - sat.p) : sat.h;
   return { v: sat.v, u: sat.u, h, s: sat.s };
 }
 
 function if97(T: number, p: number): Values {
-  if (stateFromPT(p, T, exact) !== STATUS.ok) throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: 'IAPWS-IF97' });
+  if (stateFromPT(p, T, exact) !== Status.ok) throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: 'IAPWS-IF97' });
   return { v: exact.v, u: exact.u, h: exact.h, s: exact.s };
 }
 

@@ -1,31 +1,30 @@
 /**
  * The water and steam facade: `water.state(pair)` and `water.saturation({ T } | { p })`.
- * Quantities in, quantities out; the IF97 SI core does the work.
+ * Quantities in, quantities out; the IF97 SI core does the work; the facade kit reads the inputs,
+ * maps core statuses to typed errors (in the caller's units) and builds the results.
  *
  * @module
  */
-import { ConvergenceError, InvalidInputError, OutOfRangeError } from '../errors.js';
-import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
-import { P_CRITICAL, P_MAX, P_MAX_5, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './if97/constants.js';
-import {
-  P_SAT_MIN,
-  PHASE,
-  saturationAtP,
-  saturationAtT,
-  STATUS,
-  stateFromHS,
-  stateFromPH,
-  stateFromPS,
-  stateFromPT,
-  stateFromPX,
-  stateFromTV,
-  stateFromTX,
-  WaterState,
-} from './if97/flash.js';
+import { CallUnits } from '../core/call-units.js';
+import { throwForStatus } from '../core/fail.js';
+import { rangeError, readAbsolutePressure, readInput, readPair, readPositiveDensity, readQuality, readTemperature, type Bounds } from '../core/read.js';
+import { optionalQuantity, resultQuantity } from '../core/result.js';
+import { Status } from '../core/status.js';
+import { formatNumber } from '../errors.js';
+import type { Quantity, QuantityLike } from '../units/quantity.js';
+import { P_CRITICAL, P_MAX, P_MAX_5, P_SEARCH_MIN, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './if97/constants.js';
+import { defaultContext } from './if97/context.js';
+import { stateFromHS } from './if97/hs.js';
+import { stateFromPH } from './if97/ph.js';
+import { stateFromPS } from './if97/ps.js';
+import { stateFromPT } from './if97/pt.js';
 import { WaterProperties } from './if97/properties.js';
-import { region1 } from './if97/region1.js';
-import { region2 } from './if97/region2.js';
-import { region5 } from './if97/region5.js';
+import { stateFromPX, stateFromTX } from './if97/quality.js';
+import { saturationTemperature } from './if97/region4.js';
+import { evaluateForward } from './if97/regions.js';
+import { P_SAT_MIN, saturationAtP, saturationAtT } from './if97/saturation.js';
+import { stateFromTV } from './if97/tv.js';
+import { PHASE, WaterState } from './if97/water-state.js';
 
 /** The phase of a state. */
 export type WaterPhase = 'liquid' | 'vapor' | 'two-phase' | 'supercritical';
@@ -42,10 +41,15 @@ export interface WaterStateResult {
   readonly region: 1 | 2 | 3 | 4 | 5;
   /** Quality (vapour mass fraction) in two-phase states; `undefined` in single-phase states. */
   readonly x: number | undefined;
+  /** Specific volume. */
   readonly v: Quantity<'specificVolume'>;
+  /** Density. */
   readonly rho: Quantity<'density'>;
+  /** Specific internal energy (IF97 reference: u = s = 0 for saturated liquid at the triple point). */
   readonly u: Quantity<'specificEnergy'>;
+  /** Specific enthalpy. */
   readonly h: Quantity<'specificEnergy'>;
+  /** Specific entropy. */
   readonly s: Quantity<'specificHeat'>;
   /** Isobaric heat capacity; `undefined` in two-phase states, where it is not defined. */
   readonly cp: Quantity<'specificHeat'> | undefined;
@@ -55,14 +59,29 @@ export interface WaterStateResult {
   readonly w: Quantity<'velocity'> | undefined;
   /** k = cp/cv; `undefined` in two-phase states. */
   readonly k: number | undefined;
+  /** Saturation temperature at this pressure, T_s(p); `undefined` below 611.213 Pa and above the critical pressure (22.064 MPa). */
+  readonly Tsat: Quantity<'temperature'> | undefined;
+  /** Superheat T − T_s(p) of a vapour; `undefined` for other phases. */
+  readonly superheat: Quantity<'temperatureDifference'> | undefined;
+  /** Subcooling T_s(p) − T of a liquid; `undefined` for other phases. */
+  readonly subcooling: Quantity<'temperatureDifference'> | undefined;
+}
+
+/** One saturated phase. */
+export interface SaturatedPhase {
+  readonly v: Quantity<'specificVolume'>;
+  readonly rho: Quantity<'density'>;
+  readonly u: Quantity<'specificEnergy'>;
+  readonly h: Quantity<'specificEnergy'>;
+  readonly s: Quantity<'specificHeat'>;
 }
 
 /** Saturated liquid (f) and vapour (g) at a temperature or pressure. */
 export interface SaturationResult {
   readonly T: Quantity<'temperature'>;
   readonly p: Quantity<'pressure'>;
-  readonly liquid: { readonly v: Quantity<'specificVolume'>; readonly rho: Quantity<'density'>; readonly u: Quantity<'specificEnergy'>; readonly h: Quantity<'specificEnergy'>; readonly s: Quantity<'specificHeat'> };
-  readonly vapor: { readonly v: Quantity<'specificVolume'>; readonly rho: Quantity<'density'>; readonly u: Quantity<'specificEnergy'>; readonly h: Quantity<'specificEnergy'>; readonly s: Quantity<'specificHeat'> };
+  readonly liquid: SaturatedPhase;
+  readonly vapor: SaturatedPhase;
   /** h_g − h_f, the enthalpy of vaporisation. */
   readonly hfg: Quantity<'specificEnergy'>;
   /** s_g − s_f. */
@@ -84,79 +103,69 @@ export type WaterPair =
 
 const PHASES: readonly WaterPhase[] = ['liquid', 'vapor', 'two-phase', 'supercritical'];
 const IF97 = 'IAPWS-IF97';
+const PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['p', 'h'], ['p', 's'], ['h', 's'], ['T', 'x'], ['p', 'x'], ['T', 'v'], ['T', 'rho']];
+
+/** IF97's temperature range, 273.15 K to 2273.15 K (region 5). */
+const T_RANGE: Bounds = { min: T_MIN, max: T_MAX_5, scope: IF97 };
+/** The saturation line, 273.15 K to the critical point. */
+const T_SATURATION: Bounds = { min: T_MIN, max: T_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
+const P_SATURATION: Bounds = { min: P_SAT_MIN, max: P_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
 
 function toResult(st: WaterState): WaterStateResult {
   const two = st.phase === PHASE.twoPhase;
+  const hasSat = st.p >= P_SAT_MIN && st.p <= P_CRITICAL;
+  const Tsat = two ? st.T : hasSat ? Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(st.p))) : NaN;
+  const vapor = st.phase === PHASE.vapor && hasSat;
+  const liquid = st.phase === PHASE.liquid && hasSat;
   return {
-    T: Quantity.fromSI(st.T, 'temperature'),
-    p: Quantity.fromSI(st.p, 'pressure'),
+    T: resultQuantity(st.T, 'temperature', 'T'),
+    p: resultQuantity(st.p, 'pressure', 'p'),
     phase: PHASES[st.phase]!,
     region: st.region as WaterStateResult['region'],
     x: two ? st.x : undefined,
-    v: Quantity.fromSI(st.v, 'specificVolume'),
-    rho: Quantity.fromSI(st.rho, 'density'),
-    u: Quantity.fromSI(st.u, 'specificEnergy'),
-    h: Quantity.fromSI(st.h, 'specificEnergy'),
-    s: Quantity.fromSI(st.s, 'specificHeat'),
-    cp: two ? undefined : Quantity.fromSI(st.cp, 'specificHeat'),
-    cv: two ? undefined : Quantity.fromSI(st.cv, 'specificHeat'),
-    w: two ? undefined : Quantity.fromSI(st.w, 'velocity'),
+    v: resultQuantity(st.v, 'specificVolume', 'v'),
+    rho: resultQuantity(st.rho, 'density', 'rho'),
+    u: resultQuantity(st.u, 'specificEnergy', 'u'),
+    h: resultQuantity(st.h, 'specificEnergy', 'h'),
+    s: resultQuantity(st.s, 'specificHeat', 's'),
+    cp: two ? undefined : resultQuantity(st.cp, 'specificHeat', 'cp'),
+    cv: two ? undefined : resultQuantity(st.cv, 'specificHeat', 'cv'),
+    w: two ? undefined : resultQuantity(st.w, 'velocity', 'w'),
     k: two ? undefined : st.cp / st.cv,
+    Tsat: optionalQuantity(Tsat, 'temperature', 'Tsat'),
+    superheat: vapor ? resultQuantity(Math.max(0, st.T - Tsat), 'temperatureDifference', 'superheat') : undefined,
+    subcooling: liquid ? resultQuantity(Math.max(0, Tsat - st.T), 'temperatureDifference', 'subcooling') : undefined,
   };
 }
 
-function temperatureRangeError(T: number, parameter = 'T'): OutOfRangeError {
-  if (T < T_MIN) return new OutOfRangeError({ quantity: parameter, value: T, min: T_MIN, max: T_MAX_5, unit: 'K', scope: IF97 }, `${parameter} = ${fmt(T)} K is below the lower limit of ${IF97} (273.15 K)`);
-  return new OutOfRangeError({ quantity: parameter, value: T, min: T_MIN, max: T_MAX_5, unit: 'K', scope: `${IF97} region 5` }, `${parameter} = ${fmt(T)} K is above the upper limit of ${IF97} region 5 (2273.15 K)`);
-}
-
-function fmt(x: number): string {
-  return String(Number(x.toPrecision(8)));
-}
-
-/** Range checks of (p, T) with the messages the standard's limits call for. */
-function checkPT(p: number, T: number): void {
-  if (!(T >= T_MIN && T <= T_MAX_5)) throw temperatureRangeError(T);
-  if (!(p > 0)) throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: IF97 }, `p = ${fmt(p)} Pa: absolute pressure must be positive (write gauge pressures as "psig", "barg" or "kPag")`);
-  if (T <= T_MAX_2 && p > P_MAX) {
-    throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: `${IF97} (273.15 K ≤ T ≤ 1073.15 K)` }, `p = ${fmt(p / 1e6)} MPa is above the upper limit of ${IF97} (100 MPa for T ≤ 1073.15 K)`);
-  }
-  if (T > T_MAX_2 && p > P_MAX_5) {
-    throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX_5, unit: 'Pa', scope: `${IF97} region 5 (1073.15 K < T ≤ 2273.15 K)` }, `p = ${fmt(p / 1e6)} MPa is above the upper limit of ${IF97} region 5 (50 MPa for T > 1073.15 K)`);
-  }
-}
-
-function checkPressure(p: number): void {
-  if (!(p > 0)) throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: IF97 }, `p = ${fmt(p)} Pa: absolute pressure must be positive (write gauge pressures as "psig", "barg" or "kPag")`);
-  if (p > P_MAX) throw new OutOfRangeError({ quantity: 'p', value: p, min: 0, max: P_MAX, unit: 'Pa', scope: IF97 }, `p = ${fmt(p / 1e6)} MPa is above the upper limit of ${IF97} (100 MPa)`);
-}
-
-function checkQuality(x: unknown): number {
-  if (typeof x !== 'number' || !Number.isFinite(x)) throw new InvalidInputError('input.not-finite', 'x', `x (quality) must be a finite number between 0 and 1; got ${String(x)}`);
-  if (x < 0 || x > 1) throw new OutOfRangeError({ quantity: 'x', value: x, min: 0, max: 1, unit: '1', scope: 'quality (vapour mass fraction)' }, `x = ${x} is outside 0 to 1 (quality is the vapour mass fraction)`);
-  return x;
+/** Range checks of (p, T) with the limits of the standard, in the caller's units. */
+function checkPT(p: number, T: number, units: CallUnits): void {
+  if (T <= T_MAX_2 && p > P_MAX) throw rangeError('p', p, 'pressure', { min: 0, max: P_MAX, scope: `${IF97} (100 MPa for T ≤ 1073.15 K)` }, units);
+  if (T > T_MAX_2 && p > P_MAX_5) throw rangeError('p', p, 'pressure', { min: 0, max: P_MAX_5, scope: `${IF97} region 5 (50 MPa for T > 1073.15 K)` }, units);
 }
 
 const probe = new WaterProperties();
 
-/** The h or s range IF97 covers at pressure p, for messages. */
+/** The h or s range IF97 covers at pressure p (273.15 K to the top temperature there). */
 function rangeAtPressure(p: number, key: 'h' | 's'): [number, number] {
-  if (p >= P_SAT_MIN) region1(p, T_MIN, probe);
-  else region2(p, T_MIN, probe);
-  const lo = probe[key];
-  if (p <= P_MAX_5) region5(p, T_MAX_5, probe);
-  else region2(p, T_MAX_2, probe);
-  return [lo, probe[key]];
+  const lo = evaluateForward(p >= P_SAT_MIN ? 1 : 2, p, T_MIN, probe)[key];
+  const hi = (p <= P_MAX_5 ? evaluateForward(5, p, T_MAX_5, probe) : evaluateForward(2, p, T_MAX_2, probe))[key];
+  return [lo, hi];
 }
 
-function fail(status: number, what: string, range?: () => OutOfRangeError): never {
-  if (status === STATUS.outOfRange && range) throw range();
-  if (status === STATUS.outOfRange) throw new OutOfRangeError({ quantity: what, value: NaN, min: NaN, max: NaN, unit: '', scope: IF97 }, `no ${IF97} state in range for ${what}`);
-  if (status === STATUS.noConvergence) throw new ConvergenceError(`the ${IF97} solve for ${what} did not converge`, 0);
-  throw new InvalidInputError('input.invalid', what, `invalid input for ${what}`);
+/** The entropy range of (h, s) states at enthalpy h: s at the lowest and highest pressure where a (p, h) state exists. */
+function entropyRangeAtEnthalpy(h: number): [number, number] | undefined {
+  const st = new WaterState();
+  const at = (p: number) => (stateFromPH(p, h, st) === Status.ok ? st.s : NaN);
+  const lo = at(P_MAX);
+  const hi = at(P_SEARCH_MIN);
+  return Number.isFinite(lo) && Number.isFinite(hi) ? [lo, hi] : undefined;
 }
 
-const PAIRS = '{ T, p }, { p, h }, { p, s }, { h, s }, { T, x }, { p, x }, { T, v } or { T, rho }';
+/** The enthalpy range over all of IF97: liquid at 273.15 K and 611 Pa to region 5 at 2273.15 K and 1 mPa. */
+function enthalpyRange(): [number, number] {
+  return [evaluateForward(1, P_SAT_MIN, T_MIN, probe).h, evaluateForward(5, P_SEARCH_MIN, T_MAX_5, probe).h];
+}
 
 /**
  * The full state of water or steam from any usual pair, by IAPWS-IF97 (IAPWS R7-97(2012)):
@@ -165,11 +174,13 @@ const PAIRS = '{ T, p }, { p, h }, { p, s }, { h, s }, { T, x }, { p, x }, { T, 
  * Range: 273.15 K ≤ T ≤ 1073.15 K at p ≤ 100 MPa, and 1073.15 K < T ≤ 2273.15 K at p ≤ 50 MPa.
  * Two-phase states (region 4) are quality-weighted mixtures of the saturated phases; cp, cv, w and k
  * are `undefined` there. A (p, T) exactly on the saturation line gives the liquid. Flashes are
- * polished on the basic equations to about 1e-12.
+ * polished on the basic equations to about 1e-12. Every state carries its saturation temperature
+ * (below the critical pressure) and its superheat (vapour) or subcooling (liquid). Errors name the
+ * input and the limit in the caller's units, with SI beside them.
  *
  * @throws {@link OutOfRangeError} outside IF97's range (the message names the limit), x outside [0, 1],
  *   (T, x) or (p, x) above the critical point, pairs with no state in range
- * @throws {@link InvalidInputError} NaN or infinite inputs, an unsupported pair
+ * @throws {@link InvalidInputError} NaN or infinite inputs, an unsupported or over-determined pair
  * @throws {@link DimensionError} a quantity of the wrong dimension
  * @throws {@link ConvergenceError} a flash that did not converge (never an unconverged value)
  * @example
@@ -177,93 +188,118 @@ const PAIRS = '{ T, p }, { p, h }, { p, s }, { h, s }, { T, x }, { p, x }, { T, 
  * const s = water.state({ p: '10 MPa', T: '500 °C' });
  * s.h.in('kJ/kg');          //=> 3375.06...
  * s.phase;                  //=> 'vapor'
+ * s.superheat?.in('K');     //=> 188.84...
  * water.state({ p: '1 atm', h: '1500 kJ/kg' }).x;     //=> 0.4792... (two-phase)
  * water.state({ p: '150 psia', T: '400 °F' }).h.in('Btu/lbm');
- * water.state({ T: '2400 K', p: '1 MPa' });
- * // throws OutOfRangeError: T = 2400 K is above the upper limit of IAPWS-IF97 region 5 (2273.15 K)
+ * water.state({ T: '4500 °F', p: '150 psia' });
+ * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 (3631.67 °F (2273.15 K)) …
  * ```
  */
 export function waterState(pair: WaterPair): WaterStateResult {
-  if (typeof pair !== 'object' || pair === null) throw new InvalidInputError('input.invalid', 'pair', `water.state needs one of ${PAIRS}`);
-  const keys = Object.keys(pair).filter((k) => (pair as Record<string, unknown>)[k] !== undefined).sort().join(',');
-  // the switch below has checked which keys are present
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  const a = pair as unknown as Record<string, any>;
+  const key = readPair(pair, 'water.state', PAIRS);
+  // readPair has checked which keys are present
+  const a = pair as unknown as Record<string, unknown>;
+  const units = new CallUnits();
   const out = new WaterState();
-  switch (keys) {
+  const ctx = defaultContext();
+  switch (key) {
     case 'T,p': {
-      const T = readQuantity(a.T, 'temperature', 'T');
-      const p = readQuantity(a.p, 'pressure', 'p');
-      checkPT(p, T);
-      const st = stateFromPT(p, T, out);
-      if (st !== STATUS.ok) fail(st, `p = ${fmt(p)} Pa, T = ${fmt(T)} K`);
+      const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_RANGE, units);
+      const p = readAbsolutePressure(a.p as QuantityLike<'pressure'>, 'p', undefined, units);
+      checkPT(p, T, units);
+      const st = stateFromPT(p, T, out, ctx);
+      if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} (p, T) state`, inputs: `p = ${units.describe(p, 'pressure', 'Pa')}, T = ${units.describe(T, 'temperature', 'K')}`, range: () => rangeError('p', p, 'pressure', { min: 0, max: P_MAX, scope: IF97 }, units) });
       return toResult(out);
     }
-    case 'h,p':
+    case 'p,h':
     case 'p,s': {
-      const key = keys === 'h,p' ? 'h' : 's';
-      const p = readQuantity(a.p, 'pressure', 'p');
-      const value = key === 'h' ? readQuantity(a.h, 'specificEnergy', 'h') : readQuantity(a.s, 'specificHeat', 's');
-      checkPressure(p);
-      const st = key === 'h' ? stateFromPH(p, value, out) : stateFromPS(p, value, out);
-      const unit = key === 'h' ? 'J/kg' : 'J/(kg·K)';
-      if (st !== STATUS.ok) {
-        fail(st, `p = ${fmt(p)} Pa, ${key} = ${fmt(value)} ${unit}`, () => {
-          const [lo, hi] = rangeAtPressure(p, key);
-          return new OutOfRangeError(
-            { quantity: key, value, min: lo, max: hi, unit, scope: `${IF97} at p = ${fmt(p)} Pa` },
-            `no ${IF97} state at p = ${fmt(p / 1e6)} MPa with ${key} = ${fmt(value)} ${unit}: at this pressure ${key} runs from ${fmt(lo)} to ${fmt(hi)} ${unit} (273.15 K to ${p <= P_MAX_5 ? '2273.15' : '1073.15'} K)`,
-          );
+      const name = key === 'p,h' ? 'h' : 's';
+      const p = readAbsolutePressure(a.p as QuantityLike<'pressure'>, 'p', { max: P_MAX, scope: `${IF97} (100 MPa)` }, units);
+      const dim = name === 'h' ? 'specificEnergy' : 'specificHeat';
+      const siUnit = name === 'h' ? 'J/kg' : 'J/(kg·K)';
+      const value = readInput(a[name] as QuantityLike<typeof dim>, dim, name, undefined, units);
+      const st = name === 'h' ? stateFromPH(p, value, out, ctx) : stateFromPS(p, value, out, ctx);
+      if (st !== Status.ok) {
+        throwForStatus(st, {
+          what: `the ${IF97} (p, ${name}) flash`,
+          inputs: `p = ${units.describe(p, 'pressure', 'Pa')}, ${name} = ${units.describe(value, dim, siUnit)}`,
+          range: () => {
+            const [lo, hi] = rangeAtPressure(p, name);
+            return rangeError(name, value, dim, { min: lo, max: hi, scope: `${IF97} at p = ${units.describe(p, 'pressure', 'Pa')} (273.15 K to ${p <= P_MAX_5 ? '2273.15' : '1073.15'} K)` }, units);
+          },
         });
       }
       return toResult(out);
     }
     case 'h,s': {
-      const h = readQuantity(a.h, 'specificEnergy', 'h');
-      const s = readQuantity(a.s, 'specificHeat', 's');
-      const st = stateFromHS(h, s, out);
-      if (st !== STATUS.ok) {
-        fail(st, `h = ${fmt(h)} J/kg, s = ${fmt(s)} J/(kg·K)`, () =>
-          new OutOfRangeError({ quantity: 's', value: s, min: NaN, max: NaN, unit: 'J/(kg·K)', scope: `${IF97} at h = ${fmt(h)} J/kg` }, `no ${IF97} state has h = ${fmt(h / 1e3)} kJ/kg and s = ${fmt(s / 1e3)} kJ/(kg·K) (273.15 K ≤ T ≤ 2273.15 K, p ≤ 100 MPa)`),
-        );
+      const h = readInput(a.h as QuantityLike<'specificEnergy'>, 'specificEnergy', 'h', undefined, units);
+      const s = readInput(a.s as QuantityLike<'specificHeat'>, 'specificHeat', 's', undefined, units);
+      const st = stateFromHS(h, s, out, ctx);
+      if (st !== Status.ok) {
+        throwForStatus(st, {
+          what: `the ${IF97} (h, s) flash`,
+          inputs: `h = ${units.describe(h, 'specificEnergy', 'J/kg')}, s = ${units.describe(s, 'specificHeat', 'J/(kg·K)')}`,
+          range: () => {
+            const span = entropyRangeAtEnthalpy(h);
+            if (span === undefined) {
+              const [lo, hi] = enthalpyRange();
+              return rangeError('h', h, 'specificEnergy', { min: lo, max: hi, scope: `${IF97} (273.15 K ≤ T ≤ 2273.15 K, 1 mPa ≤ p ≤ 100 MPa)` }, units);
+            }
+            return rangeError('s', s, 'specificHeat', { min: span[0], max: span[1], scope: `${IF97} at h = ${units.describe(h, 'specificEnergy', 'J/kg')} (1 mPa ≤ p ≤ 100 MPa)` }, units);
+          },
+        });
       }
       return toResult(out);
     }
     case 'T,x': {
-      const T = readQuantity(a.T, 'temperature', 'T');
-      const x = checkQuality(a.x);
-      if (!(T >= T_MIN && T <= T_CRITICAL)) {
-        throw new OutOfRangeError({ quantity: 'T', value: T, min: T_MIN, max: T_CRITICAL, unit: 'K', scope: 'the saturation line' }, `T = ${fmt(T)} K is outside the saturation line (273.15 K to the critical point, 647.096 K): a quality is defined only there`);
-      }
-      const st = stateFromTX(T, x, out);
-      if (st !== STATUS.ok) fail(st, `T = ${fmt(T)} K, x = ${x}`);
+      const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_SATURATION, units);
+      const x = readQuality(a.x);
+      const st = stateFromTX(T, x, out, ctx);
+      if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} saturation`, inputs: `T = ${units.describe(T, 'temperature', 'K')}, x = ${x}`, range: () => rangeError('T', T, 'temperature', T_SATURATION, units) });
       return toResult(out);
     }
     case 'p,x': {
-      const p = readQuantity(a.p, 'pressure', 'p');
-      const x = checkQuality(a.x);
-      if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) {
-        throw new OutOfRangeError({ quantity: 'p', value: p, min: P_SAT_MIN, max: P_CRITICAL, unit: 'Pa', scope: 'the saturation line' }, `p = ${fmt(p)} Pa is outside the saturation line (611.213 Pa to the critical point, 22.064 MPa): a quality is defined only there`);
-      }
-      const st = stateFromPX(p, x, out);
-      if (st !== STATUS.ok) fail(st, `p = ${fmt(p)} Pa, x = ${x}`);
+      const p = readInput(a.p as QuantityLike<'pressure'>, 'pressure', 'p', P_SATURATION, units);
+      const x = readQuality(a.x);
+      const st = stateFromPX(p, x, out, ctx);
+      if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} saturation`, inputs: `p = ${units.describe(p, 'pressure', 'Pa')}, x = ${x}`, range: () => rangeError('p', p, 'pressure', P_SATURATION, units) });
       return toResult(out);
     }
-    case 'T,v':
-    case 'T,rho': {
-      const T = readQuantity(a.T, 'temperature', 'T');
-      const v = keys === 'T,v' ? readQuantity(a.v, 'specificVolume', 'v') : 1 / readQuantity(a.rho, 'density', 'rho');
-      if (!(T >= T_MIN && T <= T_MAX_5)) throw temperatureRangeError(T);
-      if (!(v > 0) || !Number.isFinite(v)) throw new OutOfRangeError({ quantity: 'v', value: v, min: 0, max: Infinity, unit: 'm³/kg', scope: IF97 }, `specific volume must be positive and finite; got ${v} m³/kg`);
-      const st = stateFromTV(T, v, out);
-      if (st !== STATUS.ok) {
-        fail(st, `T = ${fmt(T)} K, v = ${fmt(v)} m³/kg`, () => new OutOfRangeError({ quantity: 'v', value: v, min: NaN, max: NaN, unit: 'm³/kg', scope: `${IF97} at T = ${fmt(T)} K` }, `no ${IF97} state at T = ${fmt(T)} K with v = ${fmt(v)} m³/kg (p would be outside 0 to 100 MPa)`));
+    default: {
+      // 'T,v' or 'T,rho'
+      const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_RANGE, units);
+      const v = key === 'T,v' ? readInput(a.v as QuantityLike<'specificVolume'>, 'specificVolume', 'v', { min: 0, max: Infinity, scope: 'a specific volume (must be positive)', minExclusive: true }, units) : 1 / readPositiveDensity(a.rho as QuantityLike<'density'>, 'rho', units);
+      const st = stateFromTV(T, v, out, ctx);
+      if (st !== Status.ok) {
+        const name = key === 'T,v' ? 'v' : 'rho';
+        throwForStatus(st, {
+          what: `the ${IF97} (T, ${name}) state`,
+          inputs: `T = ${units.describe(T, 'temperature', 'K')}, ${name === 'v' ? `v = ${units.describe(v, 'specificVolume', 'm³/kg')}` : `rho = ${units.describe(1 / v, 'density', 'kg/m³')}`}`,
+          range: () => {
+            // the volume span at T: from the 100 MPa (or 50 MPa) liquid to the 1 mPa vapour
+            const top = T > T_MAX_2 ? P_MAX_5 : P_MAX;
+            const probeState = new WaterState();
+            const vLo = stateFromPT(top, T, probeState) === Status.ok ? probeState.v : 0;
+            const vMax = stateFromPT(P_SEARCH_MIN, T, probeState) === Status.ok ? probeState.v : Infinity;
+            return name === 'v'
+              ? rangeError('v', v, 'specificVolume', { min: vLo, max: vMax, scope: `${IF97} at T = ${units.describe(T, 'temperature', 'K')} (p from 1 mPa to ${formatNumber(top / 1e6)} MPa)` }, units)
+              : rangeError('rho', 1 / v, 'density', { min: 1 / vMax, max: 1 / vLo, scope: `${IF97} at T = ${units.describe(T, 'temperature', 'K')} (p from 1 mPa to ${formatNumber(top / 1e6)} MPa)` }, units);
+          },
+        });
       }
       return toResult(out);
     }
-    default:
-      throw new InvalidInputError('input.invalid', 'pair', `water.state got { ${keys} }; it takes ${PAIRS}`);
   }
+}
+
+function phaseOf(w: WaterProperties): SaturatedPhase {
+  return {
+    v: resultQuantity(w.v, 'specificVolume', 'v'),
+    rho: resultQuantity(w.rho, 'density', 'rho'),
+    u: resultQuantity(w.u, 'specificEnergy', 'u'),
+    h: resultQuantity(w.h, 'specificEnergy', 'h'),
+    s: resultQuantity(w.s, 'specificHeat', 's'),
+  };
 }
 
 /**
@@ -273,6 +309,7 @@ export function waterState(pair: WaterPair): WaterStateResult {
  * where both phases meet.
  *
  * @throws {@link OutOfRangeError} outside the saturation line
+ * @throws {@link InvalidInputError} neither or both of T and p, or another input
  * @example
  * ```ts
  * const sat = water.saturation({ p: '1 atm' });
@@ -282,41 +319,36 @@ export function waterState(pair: WaterPair): WaterStateResult {
  * ```
  */
 export function waterSaturation(at: { readonly T: QuantityLike<'temperature'> } | { readonly p: QuantityLike<'pressure'> }): SaturationResult {
+  const key = readPair(at, 'water.saturation', [['T'], ['p']]);
+  const a = at as unknown as Record<string, unknown>;
+  const units = new CallUnits();
   const liquid = new WaterProperties();
   const vapor = new WaterProperties();
-  if (typeof at !== 'object' || at === null) throw new InvalidInputError('input.invalid', 'at', 'water.saturation needs { T } or { p }');
   let status: number;
-  if ('T' in at && at.T !== undefined) {
-    const T = readQuantity(at.T, 'temperature', 'T');
-    if (!(T >= T_MIN && T <= T_CRITICAL)) {
-      throw new OutOfRangeError({ quantity: 'T', value: T, min: T_MIN, max: T_CRITICAL, unit: 'K', scope: 'the saturation line' }, `T = ${fmt(T)} K is outside the saturation line (273.15 K to 647.096 K, the critical point)`);
-    }
+  let inputs: string;
+  let range: () => ReturnType<typeof rangeError>;
+  if (key === 'T') {
+    const bounds: Bounds = { min: T_MIN, max: T_CRITICAL, scope: 'the saturation line (273.15 K to the critical point, 647.096 K)' };
+    const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', bounds, units);
     status = saturationAtT(T, liquid, vapor);
-  } else if ('p' in at && at.p !== undefined) {
-    const p = readQuantity(at.p, 'pressure', 'p');
-    if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) {
-      throw new OutOfRangeError({ quantity: 'p', value: p, min: P_SAT_MIN, max: P_CRITICAL, unit: 'Pa', scope: 'the saturation line' }, `p = ${fmt(p)} Pa is outside the saturation line (611.213 Pa to 22.064 MPa, the critical point)`);
-    }
-    status = saturationAtP(p, liquid, vapor);
+    inputs = `T = ${units.describe(T, 'temperature', 'K')}`;
+    range = () => rangeError('T', T, 'temperature', bounds, units);
   } else {
-    throw new InvalidInputError('input.invalid', 'at', 'water.saturation needs { T } or { p }');
+    const bounds: Bounds = { min: P_SAT_MIN, max: P_CRITICAL, scope: 'the saturation line (611.213 Pa to the critical point, 22.064 MPa)' };
+    const p = readInput(a.p as QuantityLike<'pressure'>, 'pressure', 'p', bounds, units);
+    status = saturationAtP(p, liquid, vapor);
+    inputs = `p = ${units.describe(p, 'pressure', 'Pa')}`;
+    range = () => rangeError('p', p, 'pressure', bounds, units);
   }
-  if (status !== STATUS.ok) fail(status, 'saturation');
-  const phase = (w: WaterProperties) => ({
-    v: Quantity.fromSI(w.v, 'specificVolume'),
-    rho: Quantity.fromSI(w.rho, 'density'),
-    u: Quantity.fromSI(w.u, 'specificEnergy'),
-    h: Quantity.fromSI(w.h, 'specificEnergy'),
-    s: Quantity.fromSI(w.s, 'specificHeat'),
-  });
+  if (status !== Status.ok) throwForStatus(status, { what: `the ${IF97} saturation`, inputs, range });
   return {
-    T: Quantity.fromSI(liquid.T, 'temperature'),
-    p: Quantity.fromSI(liquid.p, 'pressure'),
-    liquid: phase(liquid),
-    vapor: phase(vapor),
-    hfg: Quantity.fromSI(vapor.h - liquid.h, 'specificEnergy'),
-    sfg: Quantity.fromSI(vapor.s - liquid.s, 'specificHeat'),
-    ufg: Quantity.fromSI(vapor.u - liquid.u, 'specificEnergy'),
+    T: resultQuantity(liquid.T, 'temperature', 'T'),
+    p: resultQuantity(liquid.p, 'pressure', 'p'),
+    liquid: phaseOf(liquid),
+    vapor: phaseOf(vapor),
+    hfg: resultQuantity(vapor.h - liquid.h, 'specificEnergy', 'hfg'),
+    sfg: resultQuantity(vapor.s - liquid.s, 'specificHeat', 'sfg'),
+    ufg: resultQuantity(vapor.u - liquid.u, 'specificEnergy', 'ufg'),
   };
 }
 

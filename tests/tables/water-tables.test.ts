@@ -4,7 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { ERRORS_DOC_PATH, formatTable, renderErrorsDoc, renderWaterTables, TABLES_DIR } from '../../scripts/generate-water-tables.js';
 import { waterTables } from '../../src/tables/water.js';
 import { quantity } from '../../src/units/index.js';
-import { PHASE, saturationAtT, STATUS, stateFromPT, water, WaterState } from '../../src/water/index.js';
+import { water } from '../../src/water/index.js';
+import { PHASE, saturationAtT, Status as STATUS, stateFromPT, WaterState } from '../../src/water/if97/index.js';
 import { WaterProperties } from '../../src/water/if97/properties.js';
 import { expectClose } from '../helpers/tolerance.js';
 

@@ -18,9 +18,9 @@ import {
   sr4TB23hs,
   sr4Tsaths,
 } from './kernels.generated.js';
+import { S_B13_MAX } from './constants.js';
 
-/** The entropy at the critical point, s_c = 4.412 021 482 234 76 kJ/(kg·K) (SR4-04), in J/(kg·K). */
-export const S_CRITICAL = 4.41202148223476e3;
+export { S_CRITICAL } from './constants.js';
 
 /** Region 3a: p(h, s) in Pa for s ≤ s_c (SR4-04 Eq. 1). */
 export function region3aPressureHS(h: number, s: number): number {
@@ -30,7 +30,7 @@ export function region3aPressureHS(h: number, s: number): number {
 /** Saturated-liquid enthalpy h′(s) in J/kg for 0 ≤ s ≤ s_c: h′_1 below s′(623.15 K), h′_3a above (SR4-04 Eqs. 3-4). */
 export function saturatedLiquidEnthalpyHS(s: number): number {
   const sigma = s / 3.8e3;
-  return s <= 3.778281340e3 ? sr4h1s(sigma - 1.09, sigma + 0.366e-4) * 1700e3 : sr4h3as(sigma - 1.09, sigma + 0.366e-4) * 1700e3;
+  return s <= S_B13_MAX ? sr4h1s(sigma - 1.09, sigma + 0.366e-4) * 1700e3 : sr4h3as(sigma - 1.09, sigma + 0.366e-4) * 1700e3;
 }
 
 /** Saturated-vapour enthalpy h″(s) in J/kg for s_c ≤ s ≤ s″(273.15 K): h″_2c3b below 5.85 kJ/(kg·K), h″_2ab above (SR4-04 Eqs. 5-6). */

@@ -9,9 +9,9 @@
  */
 import data from '../../../data/if97/backward-region3.json';
 import * as K from './kernels.generated.js';
+import { S_CRITICAL } from './constants.js';
 
 const [a1, a2, a3, a4] = data.h3ab as [number, number, number, number];
-const S_CRITICAL = data.sCritical * 1e3;
 
 type Fn = (x: number, y: number) => number;
 interface Spec {

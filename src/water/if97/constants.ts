@@ -26,3 +26,25 @@ export const P_MAX = 100e6;
 export const P_MAX_5 = 50e6;
 /** Triple-point temperature 273.16 K; IF97's saturation line starts at 273.15 K. */
 export const T_TRIPLE = 273.16;
+/** Upper temperature of the B23 line and of region 3, 863.15 K (IF97 Eq. 5 range; region 3 lies below it). */
+export const T_B23_MAX = 863.15;
+/** Lowest pressure the (h, s) and (T, v) searches consider, 1 mPa, in Pa. */
+export const P_SEARCH_MIN = 1e-3;
+/**
+ * The entropy at the critical point, s_c = 4.412 021 482 234 76 kJ/(kg·K) (IAPWS SR4-04 and SR3-03), in
+ * J/(kg·K): it divides regions 3a and 3b in the backward equations.
+ */
+export const S_CRITICAL = 4.41202148223476e3;
+/** Entropy of saturated vapour at 273.15 K, s″ = 9.155 759 395 kJ/(kg·K) (SR4-04 range of h″(s)), in J/(kg·K). */
+export const S_VAPOR_MAX = 9.155759395e3;
+/** Entropy of the B13 boundary's lower end in (h, s), s = 3.397 782 955 kJ/(kg·K) (SR4-04 Eq. 7 range), in J/(kg·K). */
+export const S_B13_MIN = 3.397782955e3;
+/** Entropy of saturated liquid at 623.15 K, s′ = 3.778 281 340 kJ/(kg·K) (SR4-04), in J/(kg·K): the B13 line's upper end. */
+export const S_B13_MAX = 3.77828134e3;
+/** Lowest density searched in region 3, kg/m³ (the B23 line's vapour densities lie well above it). */
+export const RHO_SEARCH_MIN_3 = 5;
+/**
+ * Highest density searched in region 3, kg/m³: the region 3 equation peaks in pressure near 800 kg/m³
+ * (above 200 MPa on every isotherm of region 3) and is not valid beyond.
+ */
+export const RHO_SEARCH_MAX_3 = 800;

@@ -1,0 +1,203 @@
+/**
+ * The isobar solver shared by the (p, h) and (p, s) pairs: at fixed pressure, find the state whose
+ * enthalpy (or entropy) matches a target. IAPWS R7-97(2012) backward equations T(p, h), T(p, s)
+ * (Sections 5.2, 6.3) and SR3-03 T, v of (p, h), (p, s) give starting values; Newton steps on the
+ * basic equations polish them to about 1e-12 relative. Inside the dome the mixture follows from the
+ * saturated values.
+ *
+ * @module
+ */
+import { brent } from '../../core/root.js';
+import { Status, type StatusCode } from '../../core/status.js';
+import { b23Temperature } from './b23.js';
+import { region1TemperaturePH, region2TemperaturePH } from './backward-ph.js';
+import { region1TemperaturePS, region2TemperaturePS } from './backward-ps.js';
+import { region3TemperaturePH, region3TemperaturePS, region3VolumePH, region3VolumePS } from './backward-region3.js';
+import { finishSinglePhase } from './classify.js';
+import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
+import type { SolverContext } from './context.js';
+import type { WaterProperties } from './properties.js';
+import { region3, region3Derivatives } from './region3.js';
+import { region3At } from './isobar-residual.js';
+import { saturationTemperature } from './region4.js';
+import { evaluateForward } from './regions.js';
+import { mixPhases, P_SAT_13, P_SAT_MIN, saturationAtP } from './saturation.js';
+import type { WaterState } from './water-state.js';
+
+/** Which property an isobar solve matches: enthalpy or entropy. */
+import { BY_H, valueOf, type Matched } from './isobar-residual.js';
+export { BY_H, BY_S, type Matched } from './isobar-residual.js';
+
+/** A target that misses the lowest value at 273.15 K by more than rounding is out of range. */
+function belowFloor(target: number, floor: number): boolean {
+  return target < floor - 1e-12 * Math.abs(floor) - 1e-9;
+}
+
+/**
+ * Newton polish of T at fixed p in region 1, 2 or 5 so that h (or s) matches `target`:
+ * dh/dT = cp, ds/dT = cp/T. Kept inside [Tlo, Thi]. Returns the state at the last evaluated T once
+ * the next step is below 1e-13·T; a step pinned at a bound without a match is not a solution.
+ */
+function polishT(region: number, p: number, target: number, by: Matched, T0: number, Tlo: number, Thi: number, out: WaterState): StatusCode {
+  let T = Math.min(Thi, Math.max(Tlo, T0));
+  for (let i = 0; i < 30; i++) {
+    evaluateForward(region, p, T, out);
+    const f = valueOf(out, by) - target;
+    const step = by === BY_H ? f / out.cp : (f * T) / out.cp;
+    if (Math.abs(step) <= 1e-13 * T) return finishSinglePhase(out, region);
+    let next = T - step;
+    if (!(next >= Tlo)) next = 0.5 * (T + Tlo);
+    if (!(next <= Thi)) next = 0.5 * (T + Thi);
+    if (next === T) return Status.noConvergence; // pinned at a bound: no solution inside
+    T = next;
+  }
+  return Status.noConvergence;
+}
+
+/** h or s at (p, T) in region 1, 2 or 5 (full evaluation into ctx.scratchB). */
+function valueAt(region: number, p: number, T: number, by: Matched, ctx: SolverContext): number {
+  return valueOf(evaluateForward(region, p, T, ctx.scratchB), by);
+}
+
+/**
+ * Fast path of region 3 flashes: the SR3-03 backward equations give (v, T); Newton steps in (ρ, T) on
+ * the region 3 equation match p and h (or s). The answer is kept only if it lies in [Tlo, Thi], on a
+ * mechanically stable branch ((∂p/∂ρ)_T > 0) and, below the critical temperature, on the requested side
+ * of the critical density; otherwise the bracketed search takes over.
+ */
+function newtonRegion3(p: number, target: number, by: Matched, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState, ctx: SolverContext): StatusCode {
+  let T = by === BY_H ? region3TemperaturePH(p, target) : region3TemperaturePS(p, target);
+  let rho = 1 / (by === BY_H ? region3VolumePH(p, target) : region3VolumePS(p, target));
+  if (!(T > 0 && rho > 0)) return Status.noConvergence;
+  const d3 = ctx.d3;
+  const k = by === BY_H ? 3 : 6;
+  for (let i = 0; i < 20; i++) {
+    region3Derivatives(rho, T, d3);
+    const f1 = d3[0]! - p;
+    const f2 = d3[k]! - target;
+    const a = d3[1]!;
+    const b = d3[2]!;
+    const c = d3[k + 1]!;
+    const e = d3[k + 2]!;
+    const det = a * e - b * c;
+    if (!(det !== 0 && Number.isFinite(det))) return Status.noConvergence;
+    const dRho = (f1 * e - b * f2) / det;
+    const dT = (a * f2 - c * f1) / det;
+    rho -= dRho;
+    T -= dT;
+    if (!(rho > 0 && T > 0)) return Status.noConvergence;
+    if (Math.abs(dRho) <= 1e-13 * rho && Math.abs(dT) <= 1e-13 * T) {
+      if (!(T >= Tlo - 1e-9 && T <= Thi + 1e-9) || !(d3[1]! > 0)) return Status.noConvergence;
+      if (T < T_CRITICAL && branch !== 0 && (branch === 1) !== rho >= RHO_CRITICAL) return Status.noConvergence;
+      region3(rho, T, out);
+      out.p = p;
+      return finishSinglePhase(out, 3);
+    }
+  }
+  return Status.noConvergence;
+}
+
+/**
+ * Solves T on a region 3 isobar between Tlo and Thi so that h (or s) matches. The basic equations
+ * differ slightly at the region boundaries (IF97 Section 10): a target that falls in that gap at the
+ * 1/3 boundary (Tlo = 623.15 K) is solved on region 1 just above 623.15 K (at the B23 line the gas
+ * side does the same on region 2), so the flash still matches it exactly.
+ */
+function solveRegion3(p: number, target: number, by: Matched, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState, ctx: SolverContext): StatusCode {
+  if (Tlo === T_13 && region3At(p, Tlo, branch, ctx.scratchB, ctx) && valueOf(ctx.scratchB, by) > target) {
+    return polishT(1, p, target, by, T_13, T_MIN, T_13 + 5, out);
+  }
+  if (newtonRegion3(p, target, by, Tlo, Thi, branch, out, ctx) === Status.ok) return Status.ok;
+  const residual = ctx.isobar;
+  residual.p = p;
+  residual.target = target;
+  residual.by = by;
+  residual.branch = branch;
+  if (brent(residual, Tlo, Thi, 1e-14, ctx.root) !== Status.ok) return Status.noConvergence;
+  if (!region3At(p, ctx.root.x, branch, out, ctx)) return Status.noConvergence;
+  return finishSinglePhase(out, 3);
+}
+
+function backwardRegion1(p: number, target: number, by: Matched): number {
+  return by === BY_H ? region1TemperaturePH(p, target) : region1TemperaturePS(p, target);
+}
+
+function backwardRegion2(p: number, target: number, by: Matched): number {
+  return by === BY_H ? region2TemperaturePH(p, target) : region2TemperaturePS(p, target);
+}
+
+/**
+ * The gas side above the liquid, saturation and region 3: regions 2 and 5, from Tlo up. `below`
+ * lets region 2 reach a few kelvin under Tlo, for targets in the small gap IF97 leaves at the B23 line.
+ */
+function gasSide(p: number, target: number, by: Matched, Tlo: number, below: number, out: WaterState, ctx: SolverContext): StatusCode {
+  const v2max = valueAt(2, p, T_MAX_2, by, ctx);
+  if (target <= v2max) {
+    const floor = Tlo - below;
+    if (belowFloor(target, valueAt(2, p, floor, by, ctx))) return Status.outOfRange;
+    return polishT(2, p, target, by, backwardRegion2(p, target, by), floor, T_MAX_2, out);
+  }
+  if (p > P_MAX_5) return Status.outOfRange;
+  const v5max = valueAt(5, p, T_MAX_5, by, ctx);
+  if (target > v5max) return Status.outOfRange;
+  const v5min = valueAt(5, p, T_MAX_2, by, ctx);
+  // a linear first guess between the region 5 end values; region 5 may reach a few kelvin under
+  // 1073.15 K for targets in the gap between the region 2 and 5 values there
+  const T0 = T_MAX_2 + ((target - v5min) / (v5max - v5min)) * (T_MAX_5 - T_MAX_2);
+  return polishT(5, p, target, by, T0, T_MAX_2 - 5, T_MAX_5, out);
+}
+
+/**
+ * The state at p (Pa) with enthalpy h (J/kg, `by` = {@link BY_H}) or entropy s (J/(kg·K), {@link BY_S}).
+ */
+export function stateOnIsobar(p: number, target: number, by: Matched, out: WaterState, ctx: SolverContext): StatusCode {
+  if (!Number.isFinite(p) || !Number.isFinite(target)) return Status.invalidInput;
+  if (!(p > 0 && p <= P_MAX)) return Status.outOfRange;
+  // below the triple-point pressure every state in range is vapour
+  if (p < P_SAT_MIN) return gasSide(p, target, by, T_MIN, 0, out, ctx);
+
+  if (p <= P_SAT_13) {
+    const Ts = saturationTemperature(p);
+    // fast paths: the backward equations are within 25 mK of the true temperature in their regions
+    // (IF97 Sections 5.2 and 6.3), so a guess 0.1 K clear of T_s settles the phase once the polish
+    // converges inside [273.15 K, T_s] or [T_s, 1073.15 K]
+    const T1 = backwardRegion1(p, target, by);
+    if (T1 < Ts - 0.1 && T1 > T_MIN && polishT(1, p, target, by, T1, T_MIN, Ts, out) === Status.ok) return Status.ok;
+    const T2 = backwardRegion2(p, target, by);
+    if (T2 > Ts + 0.1 && T2 < T_MAX_2 && polishT(2, p, target, by, T2, Ts, T_MAX_2, out) === Status.ok) return Status.ok;
+    // near the dome, near the range limits, or in it: decide by the saturated and limiting values
+    if (belowFloor(target, valueAt(1, p, T_MIN, by, ctx))) return Status.outOfRange;
+    const liquidEnd = valueAt(1, p, Ts, by, ctx);
+    if (target <= liquidEnd) return polishT(1, p, target, by, T1, T_MIN, Ts, out);
+    const vaporEnd = valueAt(2, p, Ts, by, ctx);
+    if (target < vaporEnd) {
+      const liquid = evaluateForward(1, p, Ts, ctx.scratch);
+      const vapor = evaluateForward(2, p, Ts, ctx.scratchB);
+      const x = (target - valueOf(liquid, by)) / (valueOf(vapor, by) - valueOf(liquid, by));
+      return mixPhases(x, liquid, vapor, out);
+    }
+    return gasSide(p, target, by, Ts, 0, out, ctx);
+  }
+
+  if (belowFloor(target, valueAt(1, p, T_MIN, by, ctx))) return Status.outOfRange;
+  const end1 = valueAt(1, p, T_13, by, ctx);
+  if (target <= end1) return polishT(1, p, target, by, backwardRegion1(p, target, by), T_MIN, T_13, out);
+  if (p < P_CRITICAL) {
+    const Ts = saturationTemperature(p);
+    const liq = ctx.satLiquid;
+    const vap = ctx.satVapor;
+    const status = saturationAtP(p, liq, vap, ctx);
+    if (status !== Status.ok) return status;
+    if (target <= valueOf(liq, by)) return solveRegion3(p, target, by, T_13, Ts, 1, out, ctx);
+    if (target < valueOf(vap, by)) return mixPhases((target - valueOf(liq, by)) / (valueOf(vap, by) - valueOf(liq, by)), liq, vap, out);
+    const TB = b23Temperature(p);
+    // region 3 owns T ≤ T_B23(p): divide by its value there (IF97's regions differ slightly on the line)
+    if (!region3At(p, TB, 2, ctx.scratchB, ctx)) return Status.noConvergence;
+    if (target <= valueOf(ctx.scratchB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out, ctx);
+    return gasSide(p, target, by, TB, 5, out, ctx);
+  }
+  const TB = b23Temperature(p);
+  if (!region3At(p, TB, 0, ctx.scratchB, ctx)) return Status.noConvergence;
+  if (target <= valueOf(ctx.scratchB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out, ctx);
+  return gasSide(p, target, by, TB, 5, out, ctx);
+}

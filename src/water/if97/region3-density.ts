@@ -1,0 +1,97 @@
+/**
+ * Region 3 density at given (p, T): a bracketed search on the region 3 pressure p₃(ρ, T), the solve
+ * IAPWS R7-97(2012) allows in place of the SR5-05 backward equations, choosing the liquid or vapour
+ * branch by the saturation pressure of Eq. 30. Step sizes come from the approximate saturated
+ * densities of IAPWS SR1-86 (Eqs. 2.3 and 2.4), used for search step sizes only.
+ *
+ * @module
+ */
+import satData from '../../../data/if97/saturation-densities.json';
+import { brent } from '../../core/root.js';
+import { Status, type StatusCode } from '../../core/status.js';
+import { RHO_CRITICAL, RHO_SEARCH_MAX_3, RHO_SEARCH_MIN_3, T_CRITICAL } from './constants.js';
+import type { SolverContext } from './context.js';
+import { region3Pressure } from './region3.js';
+import { saturationPressure } from './region4.js';
+
+const SAT_B = satData.liquid.b;
+const SAT_BE = satData.liquid.exponents;
+const SAT_C = satData.vapour.c;
+const SAT_CE = satData.vapour.exponents;
+
+/** Approximate saturated-liquid density (SR1-86 Eq. 2.3), for search step sizes only. */
+function approxLiquidDensity(T: number): number {
+  const th = 1 - T / T_CRITICAL;
+  let s = 1;
+  for (let i = 0; i < 6; i++) s += SAT_B[i]! * th ** SAT_BE[i]!;
+  return s * RHO_CRITICAL;
+}
+
+/** Approximate saturated-vapour density (SR1-86 Eq. 2.4), for search step sizes only. */
+function approxVaporDensity(T: number): number {
+  const th = 1 - T / T_CRITICAL;
+  let s = 0;
+  for (let i = 0; i < 6; i++) s += SAT_C[i]! * th ** SAT_CE[i]!;
+  return Math.exp(s) * RHO_CRITICAL;
+}
+
+function pressure3(rho: number, T: number, ctx: SolverContext): number {
+  region3Pressure(rho, T, ctx.pr);
+  return ctx.pr[0]!;
+}
+
+/** The root of p₃(ρ, T) = p inside [a, b], where the pressure difference changes sign (Brent); writes ctx.rho. */
+function polishDensity(p: number, T: number, a: number, b: number, ctx: SolverContext): StatusCode {
+  ctx.density.target = p;
+  ctx.density.T = T;
+  const status = brent(ctx.density, a, b, 1e-15, ctx.root);
+  if (status !== Status.ok) return Status.noConvergence;
+  ctx.rho = ctx.root.x;
+  return Status.ok;
+}
+
+/**
+ * Density (kg/m³) in region 3 at (p [Pa], T [K]), written to `ctx.rho`.
+ * `branch`: 1 = liquid (the largest root), 2 = vapour (the smallest root), 0 = choose by p_s(T)
+ * below the critical temperature. Above the critical temperature the isotherm rises monotonically
+ * and one bracket suffices. Below it, the search stays on its branch: from the high-density end down
+ * for the liquid, from the low-density end up for the vapour, in steps a tenth of the width of the
+ * two-phase loop (sized by the SR1-86 saturated densities) wherever the loop could be crossed.
+ *
+ * @returns {@link Status.ok}, or {@link Status.noConvergence} when no root is found on the branch
+ * @example
+ * ```ts
+ * const ctx = new SolverContext();
+ * region3DensityAt(25.5837018e6, 650, 0, ctx);   //=> 0
+ * ctx.rho;                                        //=> 500 (kg/m³; IF97 Table 33)
+ * ```
+ */
+export function region3DensityAt(p: number, T: number, branch: 0 | 1 | 2, ctx: SolverContext): StatusCode {
+  if (T >= T_CRITICAL) {
+    if (!(pressure3(RHO_SEARCH_MIN_3, T, ctx) < p && pressure3(RHO_SEARCH_MAX_3, T, ctx) > p)) return Status.noConvergence;
+    return polishDensity(p, T, RHO_SEARCH_MIN_3, RHO_SEARCH_MAX_3, ctx);
+  }
+  const b = branch === 0 ? (p >= saturationPressure(T) ? 1 : 2) : branch;
+  const rl = approxLiquidDensity(T);
+  const rv = approxVaporDensity(T);
+  const fine = Math.max(0.02, (rl - rv) / 12);
+  if (b === 1) {
+    if (!(pressure3(RHO_SEARCH_MAX_3, T, ctx) > p)) return Status.noConvergence;
+    // clear of the loop, the liquid isotherm rises monotonically: bracket directly
+    const safe = Math.min(RHO_SEARCH_MAX_3, rl + 40);
+    if (pressure3(safe, T, ctx) <= p) return polishDensity(p, T, safe, RHO_SEARCH_MAX_3, ctx);
+    for (let prev = safe; prev > rv; prev -= fine) {
+      const rho = prev - fine;
+      if (pressure3(rho, T, ctx) <= p) return polishDensity(p, T, rho, prev, ctx);
+    }
+    return Status.noConvergence;
+  }
+  if (!(pressure3(RHO_SEARCH_MIN_3, T, ctx) < p)) return Status.noConvergence;
+  const safe = Math.max(RHO_SEARCH_MIN_3, rv - 40);
+  if (pressure3(safe, T, ctx) >= p) return polishDensity(p, T, RHO_SEARCH_MIN_3, safe, ctx);
+  for (let prev = safe; prev < rl; prev += fine) {
+    const rho = prev + fine;
+    if (pressure3(rho, T, ctx) >= p) return polishDensity(p, T, prev, rho, ctx);
+  }
+  return Status.noConvergence;
+}
