@@ -1,19 +1,15 @@
 import { defineConfig } from 'tsup';
+import { readManifest, tsupEntries } from './scripts/entries.js';
+
+const manifest = readManifest();
 
 export default defineConfig([
-  /** One entry per public subpath, so a user who imports only `heatstate/units` loads nothing else. */
+  /** One entry per public subpath (entries.json), so a user who imports only `heatstate/units` loads nothing else. */
   {
-    entry: {
-      index: 'src/index.ts',
-      'units/index': 'src/units/index.ts',
-      'incompressible/index': 'src/incompressible/index.ts',
-      'ideal-gas/index': 'src/ideal-gas/index.ts',
-      'water/index': 'src/water/index.ts',
-      'tables/index': 'src/tables/index.ts',
-      'tables/water/index': 'src/tables/water.ts',
-    },
+    entry: tsupEntries(manifest),
     format: ['esm', 'cjs'],
-    dts: true,
+    // stripInternal: members marked @internal stay out of the published types
+    dts: { compilerOptions: { stripInternal: true } },
     sourcemap: false,
     clean: true,
     splitting: true,
@@ -26,7 +22,7 @@ export default defineConfig([
   },
   /** The command-line tool (ESM, with its shebang). */
   {
-    entry: { cli: 'src/cli/main.ts' },
+    entry: { [manifest.cli.out]: manifest.cli.source },
     format: ['esm'],
     sourcemap: false,
     clean: false,

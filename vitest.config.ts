@@ -1,16 +1,13 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
+import { readManifest, sourceAliases } from './scripts/entries.js';
 
-const src = fileURLToPath(new URL('./src/', import.meta.url));
+const root = fileURLToPath(new URL('./', import.meta.url));
 
 export default defineConfig({
   resolve: {
     // examples import 'heatstate' as users do; in tests that is the source tree
-    alias: [
-      { find: /^heatstate$/, replacement: `${src}index.ts` },
-      { find: /^heatstate\/tables\/water$/, replacement: `${src}tables/water.ts` },
-      { find: /^heatstate\/(.*)$/, replacement: `${src}$1/index.ts` },
-    ],
+    alias: sourceAliases(readManifest(), root),
   },
   test: {
     include: ['tests/**/*.test.ts'],

@@ -142,10 +142,10 @@ export function formatNumber(x: number): string {
 function describeRange(r: ValidRange): string {
   // in the caller's unit when one was given, with SI in parentheses
   const g = r.given;
-  const show = (caller: number | undefined, si: number): string =>
-    g === undefined ? `${formatNumber(si)} ${r.unit}` : `${formatNumber(caller!)} ${g.unit} (${formatNumber(si)} ${r.unit})`;
+  const withUnit = (x: number, unit: string): string => (unit === '1' || unit === '' ? formatNumber(x) : `${formatNumber(x)} ${unit}`);
+  const show = (caller: number | undefined, si: number): string => (g === undefined ? withUnit(si, r.unit) : `${withUnit(caller!, g.unit)} (${withUnit(si, r.unit)})`);
   const v = `${r.quantity} = ${show(g?.value, r.value)}`;
-  const span = g === undefined ? `${formatNumber(r.min)} to ${formatNumber(r.max)} ${r.unit}` : `${formatNumber(g.min)} to ${formatNumber(g.max)} ${g.unit}`;
+  const span = g === undefined ? `${formatNumber(r.min)} to ${withUnit(r.max, r.unit)}` : `${formatNumber(g.min)} to ${withUnit(g.max, g.unit)}`;
   if (r.value < r.min) return `${v} is below the lower limit of ${r.scope} (${show(g?.min, r.min)}); valid range ${span}`;
   if (r.value > r.max) return `${v} is above the upper limit of ${r.scope} (${show(g?.max, r.max)}); valid range ${span}`;
   return `${v} is outside the valid range of ${r.scope} (${span})`;

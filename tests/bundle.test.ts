@@ -6,6 +6,7 @@ import { build } from 'esbuild';
 import { gzipSync } from 'node:zlib';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { readManifest, specifier } from '../scripts/entries.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 
@@ -17,7 +18,7 @@ async function bundle(code: string): Promise<string> {
     format: 'esm',
     platform: 'neutral',
     write: false,
-    alias: { heatstate: './src/index.ts', 'heatstate/units': './src/units/index.ts', 'heatstate/incompressible': './src/incompressible/index.ts', 'heatstate/ideal-gas': './src/ideal-gas/index.ts', 'heatstate/water': './src/water/index.ts' },
+    alias: Object.fromEntries(readManifest().entries.map((e) => [specifier(e), `./${e.source}`])),
   });
   return result.outputFiles[0]!.text;
 }

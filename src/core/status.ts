@@ -30,7 +30,13 @@ export const Status = {
 /** One of the {@link Status} codes. */
 export type StatusCode = (typeof Status)[keyof typeof Status];
 
-/** The name of a status code, for messages: `statusName(1)` → `'outOfRange'`. */
+/**
+ * The name of a status code, for messages: `statusName(1)` → `'outOfRange'`.
+ * @example
+ * ```ts
+ * statusName(1);   //=> 'outOfRange'
+ * ```
+ */
 export function statusName(code: number): keyof typeof Status | 'unknown' {
   for (const [name, value] of Object.entries(Status)) if (value === code) return name as keyof typeof Status;
   return 'unknown';

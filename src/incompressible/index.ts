@@ -3,11 +3,9 @@
  *
  * @packageDocumentation
  */
-import { OutOfRangeError } from '../errors.js';
-import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
 import { lookupIncompressible } from './catalogue.js';
-import { enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
 import { compileDefinition, type IncompressibleDefinition } from './schema.js';
+import { substanceFacade, type IncompressibleSubstance } from './substance.js';
 
 export { incompressibleNames, incompressibleCatalogue } from './catalogue.js';
 export { incompressibleDefinitionSchema, sourceSchema, compileDefinition } from './schema.js';
@@ -15,56 +13,9 @@ export type { IncompressibleDefinition } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange } from './model.js';
 export type { IncompressibleModel } from './model.js';
-
-/** A state of an incompressible substance: temperature and (absolute) pressure. */
-export interface IncompressibleState {
-  readonly T: QuantityLike<'temperature'>;
-  readonly p: QuantityLike<'pressure'>;
-}
-
-/** An incompressible liquid or solid, with its property functions. Inputs take quantities or unit text. */
-export interface IncompressibleSubstance {
-  /** The substance's name as catalogued or defined. */
-  readonly name: string;
-  /** `'liquid'` or `'solid'`. */
-  readonly state: 'liquid' | 'solid';
-  /** The definition it was built from, with its source. */
-  readonly definition: IncompressibleDefinition;
-  /** Valid temperature range. */
-  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> } };
-  /** Density ρ (constant). */
-  readonly rho: Quantity<'density'>;
-  /** Specific volume v = 1/ρ (constant). */
-  readonly v: Quantity<'specificVolume'>;
-  /** Specific heat c(T) (= cp = cv), in J/(kg·K). Throws {@link OutOfRangeError} outside the range. */
-  c(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
-  /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cp = c. */
-  cp(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
-  /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cv = c. */
-  cv(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
-  /** Mean specific heat between two temperatures, Δu/ΔT (c(T1) when T1 = T2). */
-  averageC(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
-  /** Δu = ∫c dT from T1 to T2, in J/kg. */
-  deltaU(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<'specificEnergy'>;
-  /** Δs = ∫c/T dT from T1 to T2, in J/(kg·K). */
-  deltaS(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
-  /** Δh = Δu + v·(p2 − p1) between two states, in J/kg. Pressures are absolute. */
-  deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
-}
-
-function checkT(model: IncompressibleModel, name: string, T: number, parameter: string): void {
-  if (T < model.Tmin || T > model.Tmax) {
-    throw new OutOfRangeError(
-      { quantity: parameter, value: T, min: model.Tmin, max: model.Tmax, unit: 'K', scope: `the data for ${name}` },
-    );
-  }
-}
-
-function readPressure(input: QuantityLike<'pressure'>, parameter: string): number {
-  const p = readQuantity(input, 'pressure', parameter);
-  if (!(p > 0)) throw new OutOfRangeError({ quantity: parameter, value: p, min: 0, max: Infinity, unit: 'Pa', scope: 'absolute pressure' }, `${parameter} = ${p} Pa: absolute pressure must be positive (write gauge pressures as "psig", "barg" or "kPag")`);
-  return p;
-}
+export type { IncompressibleSubstance, IncompressibleState, IncompressibleThermalState, IncompressibleStateResult } from './substance.js';
+export { incompressibleBatch, INCOMPRESSIBLE_BATCH_STATUS } from './batch.js';
+export type { IncompressibleBatchProperty } from './batch.js';
 
 /**
  * An incompressible substance from the catalogue (by name or alias) or from your own definition.
@@ -89,39 +40,10 @@ function readPressure(input: QuantityLike<'pressure'>, parameter: string): numbe
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition): IncompressibleSubstance {
   const { definition, model } = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition) : compileDefinition(nameOrDefinition);
-  const name = definition.name;
-  const temperature = (input: QuantityLike<'temperature'>, parameter: string): number => {
-    const T = readQuantity(input, 'temperature', parameter);
-    checkT(model, name, T, parameter);
-    return T;
-  };
-  const c = (T: QuantityLike<'temperature'>): Quantity<'specificHeat'> => Quantity.fromSI(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat');
-  return {
-    name,
-    state: definition.state,
-    definition,
-    range: { T: { min: Quantity.fromSI(model.Tmin, 'temperature'), max: Quantity.fromSI(model.Tmax, 'temperature') } },
-    rho: Quantity.fromSI(1 / model.v, 'density'),
-    v: Quantity.fromSI(model.v, 'specificVolume'),
-    c,
-    cp: c,
-    cv: c,
-    averageC(T1, T2) {
-      const a = temperature(T1, 'T1');
-      const b = temperature(T2, 'T2');
-      return Quantity.fromSI(a === b ? heatCapacityAt(model, a) : internalEnergyChange(model, a, b) / (b - a), 'specificHeat');
-    },
-    deltaU(T1, T2) {
-      return Quantity.fromSI(internalEnergyChange(model, temperature(T1, 'T1'), temperature(T2, 'T2')), 'specificEnergy');
-    },
-    deltaS(T1, T2) {
-      return Quantity.fromSI(entropyChange(model, temperature(T1, 'T1'), temperature(T2, 'T2')), 'specificHeat');
-    },
-    deltaH(state1, state2) {
-      const T1 = temperature(state1.T, 'state1.T');
-      const T2 = temperature(state2.T, 'state2.T');
-      return Quantity.fromSI(enthalpyChange(model, T1, readPressure(state1.p, 'state1.p'), T2, readPressure(state2.p, 'state2.p')), 'specificEnergy');
-    },
-  };
+  return substanceFacade(definition, model);
 }
-export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
+export { Status } from '../core/status.js';
+export type { StatusCode } from '../core/status.js';
+export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
+export type { QuantityLike } from '../units/quantity.js';

@@ -107,6 +107,15 @@ const PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['p', 'h'], ['p', 's'
 
 /** IF97's temperature range, 273.15 K to 2273.15 K (region 5). */
 const T_RANGE: Bounds = { min: T_MIN, max: T_MAX_5, scope: IF97 };
+const T_RANGE_TOP: Bounds = { ...T_RANGE, scope: `${IF97} region 5` };
+
+/** A temperature in IF97's range; above it, the message names region 5, whose limit it is. */
+function readIf97Temperature(input: unknown, units: CallUnits): number {
+  const T = readTemperature(input as QuantityLike<'temperature'>, 'T', undefined, units);
+  if (T > T_MAX_5) throw rangeError('T', T, 'temperature', T_RANGE_TOP, units);
+  if (T < T_MIN) throw rangeError('T', T, 'temperature', T_RANGE, units);
+  return T;
+}
 /** The saturation line, 273.15 K to the critical point. */
 const T_SATURATION: Bounds = { min: T_MIN, max: T_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
 const P_SATURATION: Bounds = { min: P_SAT_MIN, max: P_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
@@ -192,7 +201,7 @@ function enthalpyRange(): [number, number] {
  * water.state({ p: '1 atm', h: '1500 kJ/kg' }).x;     //=> 0.4792... (two-phase)
  * water.state({ p: '150 psia', T: '400 °F' }).h.in('Btu/lbm');
  * water.state({ T: '4500 °F', p: '150 psia' });
- * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 (3631.67 °F (2273.15 K)) …
+ * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 region 5 (3631.67 °F (2273.15 K)) …
  * ```
  */
 export function waterState(pair: WaterPair): WaterStateResult {
@@ -204,7 +213,7 @@ export function waterState(pair: WaterPair): WaterStateResult {
   const ctx = defaultContext();
   switch (key) {
     case 'T,p': {
-      const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_RANGE, units);
+      const T = readIf97Temperature(a.T, units);
       const p = readAbsolutePressure(a.p as QuantityLike<'pressure'>, 'p', undefined, units);
       checkPT(p, T, units);
       const st = stateFromPT(p, T, out, ctx);
@@ -267,7 +276,7 @@ export function waterState(pair: WaterPair): WaterStateResult {
     }
     default: {
       // 'T,v' or 'T,rho'
-      const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_RANGE, units);
+      const T = readIf97Temperature(a.T, units);
       const v = key === 'T,v' ? readInput(a.v as QuantityLike<'specificVolume'>, 'specificVolume', 'v', { min: 0, max: Infinity, scope: 'a specific volume (must be positive)', minExclusive: true }, units) : 1 / readPositiveDensity(a.rho as QuantityLike<'density'>, 'rho', units);
       const st = stateFromTV(T, v, out, ctx);
       if (st !== Status.ok) {

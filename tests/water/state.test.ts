@@ -183,7 +183,7 @@ describe('bad input', () => {
       expect.fail('no error');
     } catch (e) {
       expect(e).toBeInstanceOf(OutOfRangeError);
-      expect((e as Error).message).toBe('T = 2400 K is above the upper limit of IAPWS-IF97 (2273.15 K); valid range 273.15 to 2273.15 K');
+      expect((e as Error).message).toBe('T = 2400 K is above the upper limit of IAPWS-IF97 region 5 (2273.15 K); valid range 273.15 to 2273.15 K');
       expect((e as OutOfRangeError).range).toMatchObject({ max: 2273.15, unit: 'K' });
     }
     expect(() => water.state({ T: '260 K', p: '1 MPa' })).toThrow(/below the lower limit of IAPWS-IF97 \(273.15 K\)/);

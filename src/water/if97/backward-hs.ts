@@ -11,7 +11,13 @@ import { backward1HS, backward2aHS, backward2bHS, backward2cHS } from './kernels
 
 const [n1, n2, n3, n4] = data.b2ab as [number, number, number, number];
 
-/** Region 1: p(h, s) in Pa, h in J/kg, s in J/(kg·K) (SR2-01 Eq. 1). */
+/**
+ * Region 1: p(h, s) in Pa, h in J/kg, s in J/(kg·K) (SR2-01 Eq. 1).
+ * @example
+ * ```ts
+ * region1PressureHS(0.001e3, 0);   //=> 980.0980612 (Pa; SR2-01 Table 3 gives 9.800980612e-4 MPa)
+ * ```
+ */
 export function region1PressureHS(h: number, s: number): number {
   return backward1HS(h / 3400e3 + 0.05, s / 7.6e3 + 0.05) * 100e6;
 }
@@ -22,7 +28,13 @@ export function b2abEnthalpy(s: number): number {
   return (n1 + x * (n2 + x * (n3 + x * n4))) * 1e3;
 }
 
-/** Region 2: p(h, s) in Pa, choosing 2a (h ≤ h_2ab(s)), 2b (s ≥ 5.85 kJ/(kg·K)) or 2c (SR2-01 Eqs. 6-8). */
+/**
+ * Region 2: p(h, s) in Pa, choosing 2a (h ≤ h_2ab(s)), 2b (s ≥ 5.85 kJ/(kg·K)) or 2c (SR2-01 Eqs. 6-8).
+ * @example
+ * ```ts
+ * region2PressureHS(2800e3, 6.5e3);   //=> 1371012.767 (Pa; SR2-01 Table 10)
+ * ```
+ */
 export function region2PressureHS(h: number, s: number): number {
   if (h <= b2abEnthalpy(s)) {
     const q = backward2aHS(h / 4200e3 - 0.5, s / 12e3 - 1.2);

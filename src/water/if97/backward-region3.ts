@@ -42,22 +42,46 @@ export function h3abEnthalpy(p: number): number {
   return (a1 + pi * (a2 + pi * (a3 + pi * a4))) * 1e3;
 }
 
-/** Region 3: T(p, h) in K (3a for h ≤ h_3ab(p), else 3b). */
+/**
+ * Region 3: T(p, h) in K (3a for h ≤ h_3ab(p), else 3b).
+ * @example
+ * ```ts
+ * region3TemperaturePH(20e6, 1700e3);   //=> 629.3083892 (K; SR3-03 Table 5)
+ * ```
+ */
 export function region3TemperaturePH(p: number, h: number): number {
   return h <= h3abEnthalpy(p) ? T3aPH(p, h) : T3bPH(p, h);
 }
 
-/** Region 3: v(p, h) in m³/kg. */
+/**
+ * Region 3: v(p, h) in m³/kg.
+ * @example
+ * ```ts
+ * region3VolumePH(20e6, 1700e3);   //=> 0.00174990396 (m³/kg; SR3-03 Table 5)
+ * ```
+ */
 export function region3VolumePH(p: number, h: number): number {
   return h <= h3abEnthalpy(p) ? v3aPH(p, h) : v3bPH(p, h);
 }
 
-/** Region 3: T(p, s) in K (3a for s ≤ s_c, else 3b). */
+/**
+ * Region 3: T(p, s) in K (3a for s ≤ s_c, else 3b).
+ * @example
+ * ```ts
+ * region3TemperaturePS(20e6, 3.8e3);   //=> 628.2959869 (K; SR3-03 Table 12)
+ * ```
+ */
 export function region3TemperaturePS(p: number, s: number): number {
   return s <= S_CRITICAL ? T3aPS(p, s) : T3bPS(p, s);
 }
 
-/** Region 3: v(p, s) in m³/kg. */
+/**
+ * Region 3: v(p, s) in m³/kg.
+ * @example
+ * ```ts
+ * region3VolumePS(20e6, 3.8e3);   //=> 0.001733791463 (m³/kg; SR3-03 Table 12)
+ * ```
+ */
 export function region3VolumePS(p: number, s: number): number {
   return s <= S_CRITICAL ? v3aPS(p, s) : v3bPS(p, s);
 }

@@ -27,7 +27,13 @@ export function regionOfPT(p: number, T: number): number {
   return 2;
 }
 
-/** Phase of a single-phase state: supercritical above both critical values, otherwise liquid or vapour by the saturation pressure. */
+/**
+ * Phase of a single-phase state: supercritical above both critical values, otherwise liquid or vapour by the saturation pressure.
+ * @example
+ * ```ts
+ * phaseOf(1e6, 300, 1);   //=> 0 (PHASE.liquid)
+ * ```
+ */
 export function phaseOf(p: number, T: number, region: number): number {
   if (T >= T_CRITICAL) return p >= P_CRITICAL ? PHASE.supercritical : PHASE.vapor;
   if (region === 1) return PHASE.liquid;

@@ -55,7 +55,13 @@ export class SolverContext {
 
 let shared: SolverContext | undefined;
 
-/** The context used when a caller passes none (created on first use). */
+/**
+ * The context used when a caller passes none (created on first use).
+ * @example
+ * ```ts
+ * stateFromPT(1e6, 300, new WaterState(), defaultContext());   //=> 0
+ * ```
+ */
 export function defaultContext(): SolverContext {
   return (shared ??= new SolverContext());
 }

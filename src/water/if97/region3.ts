@@ -64,6 +64,12 @@ export function region3(rho: number, T: number, out: WaterProperties): WaterProp
 /**
  * Pressure p(ρ, T) in Pa and its derivative (∂p/∂ρ)_T in Pa·m³/kg, written to out[0], out[1]
  * (for density solves).
+ * @example
+ * ```ts
+ * const pr = new Float64Array(2);
+ * region3Pressure(500, 650, pr);
+ * pr[0];   //=> 25583701.82 (Pa; IF97 Table 33)
+ * ```
  */
 export function region3Pressure(rho: number, T: number, out: Float64Array): void {
   const delta = rho / RHO_STAR;
@@ -80,6 +86,12 @@ export function region3Pressure(rho: number, T: number, out: Float64Array): void
  * [p, ∂p/∂ρ, ∂p/∂T, h, ∂h/∂ρ, ∂h/∂T, s, ∂s/∂ρ, ∂s/∂T] (SI units).
  * From IAPWS R7-97(2012) Table 31: p = ρRTδφδ, h = RT(τφτ + δφδ), s = R(τφτ − φ); the derivatives
  * follow by differentiation, with (∂s/∂ρ)_T = −(∂p/∂T)_ρ/ρ² (a Maxwell relation).
+ * @example
+ * ```ts
+ * const d = new Float64Array(9);
+ * region3Derivatives(500, 650, d);
+ * d[0];   //=> 25583701.82 (Pa; IF97 Table 33)
+ * ```
  */
 export function region3Derivatives(rho: number, T: number, out: Float64Array): void {
   const delta = rho / RHO_STAR;

@@ -1,0 +1,151 @@
+/**
+ * The incompressible facade: a substance object over the SI core (model.ts), built from the facade
+ * kit. This file is the worked example of docs/guide/adding-a-model.md: readers with the model's
+ * bounds, results through the result builder, a `state(pair)` with the one result shape, and the
+ * energy differences between two states with the same signature as every other model.
+ *
+ * @module
+ */
+import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
+import { CallUnits } from '../core/call-units.js';
+import { readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
+import { resultQuantity } from '../core/result.js';
+import { Quantity, type QuantityLike } from '../units/quantity.js';
+import { enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
+import type { IncompressibleDefinition } from './schema.js';
+
+/** A state of an incompressible substance: temperature and (absolute) pressure. */
+export interface IncompressibleState {
+  readonly T: QuantityLike<'temperature'>;
+  readonly p: QuantityLike<'pressure'>;
+}
+
+/** A state for `deltaU` and `deltaS`, which depend on T only: a temperature, `{ T }` or `{ T, p }`. */
+export type IncompressibleThermalState = QuantityLike<'temperature'> | { readonly T: QuantityLike<'temperature'>; readonly p?: QuantityLike<'pressure'> };
+
+/** A state as `substance.state` returns it. u, h and s are measured from the substance's reference state. */
+export interface IncompressibleStateResult {
+  readonly T: Quantity<'temperature'>;
+  readonly p: Quantity<'pressure'>;
+  /** c = cp = cv. */
+  readonly c: Quantity<'specificHeat'>;
+  readonly cp: Quantity<'specificHeat'>;
+  readonly cv: Quantity<'specificHeat'>;
+  readonly rho: Quantity<'density'>;
+  readonly v: Quantity<'specificVolume'>;
+  /** u − u_ref = ∫c dT from the reference temperature. */
+  readonly u: Quantity<'specificEnergy'>;
+  /** h − h_ref = (u − u_ref) + v·(p − p_ref). */
+  readonly h: Quantity<'specificEnergy'>;
+  /** s − s_ref = ∫c/T dT from the reference temperature. */
+  readonly s: Quantity<'specificHeat'>;
+}
+
+/** An incompressible liquid or solid, with its property functions. Inputs take quantities or unit text. */
+export interface IncompressibleSubstance {
+  /** The substance's name as catalogued or defined. */
+  readonly name: string;
+  /** `'liquid'` or `'solid'` (the definition's `state`). */
+  readonly phase: 'liquid' | 'solid';
+  /** The definition it was built from, with its source. */
+  readonly definition: IncompressibleDefinition;
+  /** Valid range: the data's temperatures; any positive pressure. */
+  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> }; readonly p: { readonly min: Quantity<'pressure'>; readonly max: undefined } };
+  /**
+   * The reference state of `state(…)`'s u, h and s (u = h = s = 0 there): 25 °C (or the nearest end
+   * of the range) at one standard atmosphere.
+   */
+  readonly reference: { readonly T: Quantity<'temperature'>; readonly p: Quantity<'pressure'> };
+  /** Density ρ (constant). */
+  readonly rho: Quantity<'density'>;
+  /** Specific volume v = 1/ρ (constant). */
+  readonly v: Quantity<'specificVolume'>;
+  /** The plain-number SI core. */
+  readonly core: IncompressibleModel;
+  /** Specific heat c(T) (= cp = cv). Throws {@link OutOfRangeError} outside the range. */
+  c(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cp = c. */
+  cp(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cv = c. */
+  cv(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  /** Mean specific heat between two temperatures, Δu/ΔT (c(T1) when T1 = T2). */
+  averageC(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  /** The state at `{ T, p }`. */
+  state(pair: IncompressibleState): IncompressibleStateResult;
+  /** Δu = ∫c dT from state 1 to state 2 (a temperature, `{ T }` or `{ T, p }` each). */
+  deltaU(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEnergy'>;
+  /** Δs = ∫c/T dT from state 1 to state 2. */
+  deltaS(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificHeat'>;
+  /** Δh = Δu + v·(p2 − p1) between two states `{ T, p }`. Pressures are absolute. */
+  deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
+}
+
+/** The facade object of a compiled substance. */
+export function substanceFacade(definition: IncompressibleDefinition, model: IncompressibleModel): IncompressibleSubstance {
+  const name = definition.name;
+  const bounds: Bounds = { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}` };
+  const temperature = (input: QuantityLike<'temperature'>, parameter: string, units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
+  /** T (and p, NaN when not given) of a state; `prefix` names its inputs. */
+  const resolve = (state: unknown, prefix: string, needP: boolean): [number, number] => {
+    const units = new CallUnits();
+    if (!needP && (typeof state === 'string' || state instanceof Quantity)) return [temperature(state as QuantityLike<'temperature'>, prefix === '' ? 'T' : prefix.slice(0, -1), units), NaN];
+    const key = readPair(state, `${name} ${prefix === '' ? 'state' : prefix.slice(0, -1)}`, needP ? [['T', 'p']] : [['T'], ['T', 'p']]);
+    const a = state as Record<string, unknown>;
+    const T = temperature(a.T as QuantityLike<'temperature'>, `${prefix}T`, units);
+    const p = key === 'T' ? NaN : readAbsolutePressure(a.p as QuantityLike<'pressure'>, `${prefix}p`, undefined, units);
+    return [T, p];
+  };
+  const Tref = Math.min(model.Tmax, Math.max(model.Tmin, 298.15));
+  const pRef = STANDARD_ATMOSPHERE_PA;
+  const c = (T: QuantityLike<'temperature'>): Quantity<'specificHeat'> => resultQuantity(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat', 'c');
+  return {
+    name,
+    phase: definition.state,
+    definition,
+    core: model,
+    range: { T: { min: Quantity.fromSI(model.Tmin, 'temperature'), max: Quantity.fromSI(model.Tmax, 'temperature') }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
+    reference: { T: Quantity.fromSI(Tref, 'temperature'), p: Quantity.fromSI(pRef, 'pressure') },
+    rho: Quantity.fromSI(1 / model.v, 'density'),
+    v: Quantity.fromSI(model.v, 'specificVolume'),
+    c,
+    cp: c,
+    cv: c,
+    averageC(T1, T2) {
+      const units = new CallUnits();
+      const a = temperature(T1, 'T1', units);
+      const b = temperature(T2, 'T2', units);
+      return resultQuantity(a === b ? heatCapacityAt(model, a) : internalEnergyChange(model, a, b) / (b - a), 'specificHeat', 'averageC');
+    },
+    state(pair) {
+      const [T, p] = resolve(pair, '', true);
+      const cT = heatCapacityAt(model, T);
+      return {
+        T: resultQuantity(T, 'temperature', 'T'),
+        p: resultQuantity(p, 'pressure', 'p'),
+        c: resultQuantity(cT, 'specificHeat', 'c'),
+        cp: resultQuantity(cT, 'specificHeat', 'cp'),
+        cv: resultQuantity(cT, 'specificHeat', 'cv'),
+        rho: resultQuantity(1 / model.v, 'density', 'rho'),
+        v: resultQuantity(model.v, 'specificVolume', 'v'),
+        u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u'),
+        h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h'),
+        s: resultQuantity(entropyChange(model, Tref, T), 'specificHeat', 's'),
+      };
+    },
+    deltaU(state1, state2) {
+      const [a] = resolve(state1, 'state1.', false);
+      const [b] = resolve(state2, 'state2.', false);
+      return resultQuantity(internalEnergyChange(model, a, b), 'specificEnergy', 'deltaU');
+    },
+    deltaS(state1, state2) {
+      const [a] = resolve(state1, 'state1.', false);
+      const [b] = resolve(state2, 'state2.', false);
+      return resultQuantity(entropyChange(model, a, b), 'specificHeat', 'deltaS');
+    },
+    deltaH(state1, state2) {
+      const [T1, p1] = resolve(state1, 'state1.', true);
+      const [T2, p2] = resolve(state2, 'state2.', true);
+      return resultQuantity(enthalpyChange(model, T1, p1, T2, p2), 'specificEnergy', 'deltaH');
+    },
+  };
+}
