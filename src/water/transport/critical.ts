@@ -39,7 +39,13 @@ export class CriticalEnhancementInputs {
   dRhoDpReference = 0;
 }
 
-/** Whether the derivative inputs are usable numbers (cp, cv, (∂ρ/∂p)_T positive and finite; the reference value finite). */
+/**
+ * Whether the derivative inputs are usable numbers (cp, cv, (∂ρ/∂p)_T positive and finite; the reference value finite).
+ * @example
+ * ```ts
+ * enhancementInputsValid(new CriticalEnhancementInputs());   //=> false (all zero)
+ * ```
+ */
 export function enhancementInputsValid(d: CriticalEnhancementInputs): boolean {
   return d.cp > 0 && d.cp < Infinity && d.cv > 0 && d.cv < Infinity && d.dRhoDp > 0 && d.dRhoDp < Infinity && Number.isFinite(d.dRhoDpReference);
 }
@@ -52,7 +58,7 @@ export function enhancementInputsValid(d: CriticalEnhancementInputs): boolean {
  * const d = new CriticalEnhancementInputs();
  * d.dRhoDp = 474.6166 / (22.064e6 / 322);   // ζ = 474.6 (IF97, 647.35 K, 322 kg/m³)
  * d.dRhoDpReference = 0.191361 / (22.064e6 / 322);
- * correlationLength(647.35, 322, d);           //=> 2.9e-9 (m, about 2.9 nm)
+ * correlationLength(647.35, 322, d);           //=> 1.2472e-8 (m, 12.5 nm)
  * ```
  */
 export function correlationLength(T: number, rho: number, d: CriticalEnhancementInputs): number {

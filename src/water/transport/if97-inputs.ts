@@ -167,7 +167,7 @@ export function if97StateAtDensity(T: number, rho: number, work: If97InputsWork)
  * @example
  * ```ts
  * const d = new CriticalEnhancementInputs();
- * referenceDensityDerivative(322, d, new If97InputsWork());   //=> 0; d.dRhoDpReference = 2.7929e-6 kg/(m³·Pa)
+ * referenceDensityDerivative(322, d, new If97InputsWork());   //=> 0; d.dRhoDpReference = 2.7927e-6 kg/(m³·Pa)
  * referenceDensityDerivative(750, d, new If97InputsWork());   //=> 1 (Status.outOfRange)
  * ```
  */
@@ -195,9 +195,9 @@ export function referenceDensityDerivative(rho: number, out: CriticalEnhancement
  * positive cp, cv or w (two-phase states, the critical point itself).
  * @example
  * ```ts
- * const st = new WaterProperties();
+ * const st = new WaterProperties(), d = new CriticalEnhancementInputs();
  * region3(322, 647.35, st);
- * enhancementInputsFromState(st, d, new If97InputsWork());   //=> 0; d.dRhoDp = 6.9267e-3 kg/(m³·Pa)
+ * enhancementInputsFromState(st, d, new If97InputsWork());   //=> 0; d.dRhoDp = 6.9265e-3 kg/(m³·Pa)
  * ```
  */
 export function enhancementInputsFromState(state: WaterProperties, out: CriticalEnhancementInputs, work: If97InputsWork): StatusCode {

@@ -119,6 +119,12 @@ function enhancementY(xi: number): number {
 /**
  * The critical-enhancement factor μ̄2 at (T, ρ) from the derivative inputs (Eq. 14), inputs checked
  * by the caller.
+ * @example
+ * ```ts
+ * const d = new CriticalEnhancementInputs();
+ * if97EnhancementInputs(647.35, 322, d, new If97InputsWork());
+ * viscosityEnhancement(647.35, 322, d);   //=> 1.0754 (IF97 derivatives; 7.5 % at the critical density)
+ * ```
  */
 export function viscosityEnhancement(T: number, rho: number, d: CriticalEnhancementInputs): number {
   return Math.exp(X_MU * enhancementY(correlationLength(T, rho, d)));
@@ -127,6 +133,10 @@ export function viscosityEnhancement(T: number, rho: number, d: CriticalEnhancem
 /**
  * Reduced viscosity μ̄ = μ/μ* at (T, ρ), with or without μ̄2, inputs checked by the caller (the
  * thermal-conductivity enhancement divides by it).
+ * @example
+ * ```ts
+ * reducedViscosity(298.15, 998, false, new CriticalEnhancementInputs());   //=> 889.7351 (µPa·s / 1 µPa·s)
+ * ```
  */
 export function reducedViscosity(T: number, rho: number, enhancement: boolean, d: CriticalEnhancementInputs): number {
   const t = T / REF.T;
