@@ -33,6 +33,8 @@ const QC = 1 / C.qCInverse;
 const QD = 1 / C.qDInverse;
 const SERIES_LIMIT = C.seriesLimit;
 
+/** The viscosity unit of the release's reduced values, μ* = 1 µPa·s = 1e-6 Pa·s (Eq. 4). */
+export const MU_REFERENCE = REF.mu;
 /** Lower temperature limit offered here, K: the release starts at the melting line; 273.15 K is IF97's lower limit. */
 export const VISCOSITY_T_MIN = data.range.Tmin;
 /** Upper temperature limit of IAPWS R12-08, 1173.15 K. */
