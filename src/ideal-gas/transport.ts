@@ -60,7 +60,8 @@ const T_CAP = data.range.Tmax;
  * ```
  */
 export function collisionIntegral22(Tstar: number): number {
-  return A * Math.pow(Tstar, -B) + C * Math.exp(-D * Tstar) + E * Math.exp(-F * Tstar);
+  // T*^(−B) as exp(−B ln T*): the same number to rounding, and about twice as fast as Math.pow in V8
+  return A * Math.exp(-B * Math.log(Tstar)) + C * Math.exp(-D * Tstar) + E * Math.exp(-F * Tstar);
 }
 
 /** (5/16) √(π k / N_A) / π: μ = this · √(M T) / (σ² Ω) with M in kg/mol, σ in m. */
@@ -77,6 +78,7 @@ export class ChapmanEnskogModel implements GasTransportModel {
   readonly epsilonOverK: number;
   private readonly thermo: IdealGasModel;
   private readonly muFactor: number;
+  private readonly inverseEpsilon: number;
 
   /** `sigma` in m, `epsilonOverK` in K; the range is the collision-integral fit's (0.3 ≤ T* ≤ 100) within the cp model's and 2000 K. */
   constructor(thermo: IdealGasModel, sigma: number, epsilonOverK: number) {
@@ -86,11 +88,12 @@ export class ChapmanEnskogModel implements GasTransportModel {
     this.epsilonOverK = epsilonOverK;
     this.Tmin = Math.max(thermo.Tmin, CI.TstarMin * epsilonOverK);
     this.Tmax = Math.min(thermo.Tmax, CI.TstarMax * epsilonOverK, T_CAP);
+    this.inverseEpsilon = 1 / epsilonOverK;
     this.muFactor = (CE_FACTOR * Math.sqrt(thermo.M)) / (sigma * sigma);
   }
 
   mu(T: number): number {
-    return (this.muFactor * Math.sqrt(T)) / collisionIntegral22(T / this.epsilonOverK);
+    return (this.muFactor * Math.sqrt(T)) / collisionIntegral22(T * this.inverseEpsilon);
   }
 
   lambda(T: number): number {

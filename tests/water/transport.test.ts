@@ -21,6 +21,7 @@ import {
   If97InputsWork,
   if97StateAtDensity,
   reducedViscosity,
+  reducedViscosityAtLength,
   referenceDensityDerivative,
   REFERENCE_RHO_REGION2_MAX,
   surfaceTension,
@@ -205,6 +206,9 @@ describe('values quoted in the doc comments', () => {
     expectClose(mu.mu, 889.7351e-6, { rel: 1e-9 });
     expect(viscosity(1200, 1, false, none, mu)).toBe(1);
     expectClose(reducedViscosity(298.15, 998, false, none), 889.7351, { rel: 1e-9 });
+    expectClose(reducedViscosityAtLength(647.35, 322, 0), 39.3455, { rel: 2e-6 });
+    if97EnhancementInputs(647.35, 322, d, work);
+    expect(reducedViscosityAtLength(647.35, 322, correlationLength(647.35, 322, d))).toBe(reducedViscosity(647.35, 322, true, d));
     expect(thermalConductivity(298.15, 998, false, none, lam)).toBe(0);
     expectClose(lam.lambda, 0.607712868, { rel: 1e-9 });
     expect(thermalConductivity(298.15, -1, false, none, lam)).toBe(3);

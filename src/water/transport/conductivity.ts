@@ -18,7 +18,7 @@
 import data from '../../../data/transport/water-conductivity.json';
 import { Status, type StatusCode } from '../../core/status.js';
 import { correlationLength, CriticalEnhancementInputs, enhancementInputsValid } from './critical.js';
-import { reducedViscosity } from './viscosity.js';
+import { reducedViscosityAtLength } from './viscosity.js';
 
 const REF = data.reference;
 const L = data.dilute.L;
@@ -94,12 +94,13 @@ function residual(t: number, d: number): number {
 
 /** λ̄2 (Eqs. 18-20), inputs checked by the caller. */
 function criticalPart(T: number, rho: number, t: number, dr: number, d: CriticalEnhancementInputs): number {
-  const y = QD * correlationLength(T, rho, d);
+  const xi = correlationLength(T, rho, d);
+  const y = QD * xi;
   if (y < Y_MIN) return 0;
   const kappaInverse = d.cv / d.cp;
   const Z = (2 / (Math.PI * y)) * ((1 - kappaInverse) * Math.atan(y) + kappaInverse * y - (1 - Math.exp(-1 / (1 / y + (y * y) / (3 * dr * dr)))));
   const cpBar = d.cp / REF.R;
-  return (LAMBDA_CAPITAL * dr * cpBar * t * Z) / reducedViscosity(T, rho, true, d);
+  return (LAMBDA_CAPITAL * dr * cpBar * t * Z) / reducedViscosityAtLength(T, rho, xi);
 }
 
 /**

@@ -66,5 +66,5 @@ export function correlationLength(T: number, rho: number, d: CriticalEnhancement
   const zetaR = d.dRhoDpReference * ZETA_SCALE;
   const deltaChi = (rho / REF.rho) * (zeta - (zetaR * T_REFERENCE) / T);
   if (!(deltaChi > 0)) return 0;
-  return XI0 * Math.pow(deltaChi / GAMMA0, EXPONENT);
+  return XI0 * Math.exp(EXPONENT * Math.log(deltaChi / GAMMA0));
 }

@@ -6,7 +6,7 @@
  * @module
  */
 export { CriticalEnhancementInputs, correlationLength, T_REFERENCE } from './critical.js';
-export { MU_REFERENCE, reducedViscosity, viscosity, viscosityEnhancement, viscosityPressureLimit, ViscosityResult, VISCOSITY_ENHANCEMENT_WINDOW, VISCOSITY_PRESSURE_LIMITS, VISCOSITY_T_MAX, VISCOSITY_T_MIN } from './viscosity.js';
+export { MU_REFERENCE, reducedViscosity, reducedViscosityAtLength, viscosity, viscosityEnhancement, viscosityPressureLimit, ViscosityResult, VISCOSITY_ENHANCEMENT_WINDOW, VISCOSITY_PRESSURE_LIMITS, VISCOSITY_T_MAX, VISCOSITY_T_MIN } from './viscosity.js';
 export { conductivityPressureLimit, ConductivityResult, thermalConductivity, CONDUCTIVITY_PRESSURE_LIMITS, CONDUCTIVITY_T_MAX, CONDUCTIVITY_T_MIN } from './conductivity.js';
 export { surfaceTension, SurfaceTensionResult, SURFACE_TENSION_T_MAX, SURFACE_TENSION_T_MIN } from './surface-tension.js';
 export { enhancementInputsFromState, if97EnhancementInputs, if97StateAtDensity, If97InputsWork, IF97_INPUTS_T_MAX, referenceDensityDerivative, REFERENCE_RHO_MAX, REFERENCE_RHO_REGION2_MAX } from './if97-inputs.js';

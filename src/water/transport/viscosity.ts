@@ -147,6 +147,19 @@ export function reducedViscosity(T: number, rho: number, enhancement: boolean, d
 }
 
 /**
+ * Reduced viscosity μ̄ = μ̄0 μ̄1 μ̄2 at (T, ρ) with μ̄2 from a correlation length ξ (m) the caller has
+ * already computed (the conductivity enhancement shares it).
+ * @example
+ * ```ts
+ * reducedViscosityAtLength(647.35, 322, 0);   //=> 39.3455 (μ̄2 = 1 when ξ = 0)
+ * ```
+ */
+export function reducedViscosityAtLength(T: number, rho: number, xi: number): number {
+  const t = T / REF.T;
+  return dilute(t) * residual(t, rho / REF.rho) * Math.exp(X_MU * enhancementY(xi));
+}
+
+/**
  * Viscosity μ (Pa·s) of water or steam at (T [K], ρ [kg/m³]), IAPWS R12-08, written to `out`.
  *
  * `enhancement = false` leaves the critical enhancement out (μ̄2 = 1, the release's recommendation for
