@@ -235,3 +235,38 @@ describe('values quoted in the doc comments', () => {
     expect(referenceDensityDerivative(750, d, work)).toBe(1);
   });
 });
+
+describe('figures stated in docs/guide/transport.md', () => {
+  const pct = (x: number, digits: number) => `${x >= 0 ? '+' : '−'}${Math.abs(x * 100).toFixed(digits)} %`;
+  it.each([
+    [640, 500, '10 %', 0.095, 0.105],
+    [700, 300, '14 %', 0.135, 0.145],
+    [700, 100, '3 % to 4 %', 0.03, 0.04],
+    [800, 200, '3 % to 4 %', 0.03, 0.04],
+  ])('λ2 share at %d K, %d kg/m³ is about %s', (T, rho, _stated, lo, hi) => {
+    expect(if97EnhancementInputs(T, rho, d, work)).toBe(Status.ok);
+    thermalConductivity(T, rho, true, d, lam);
+    expect(lam.lambda2 / lam.lambda).toBeGreaterThan(lo);
+    expect(lam.lambda2 / lam.lambda).toBeLessThan(hi);
+  });
+  it.each([
+    [222, 367.787459, '−0.44 %', 2],
+    [272, 757.959776, '−9.9 %', 1],
+    [322, 1443.75556, '−18.8 %', 1],
+    [372, 650.319402, '−5.3 %', 1],
+    [422, 448.883487, '−0.19 %', 2],
+  ])('λ at 647.35 K, %d kg/m³ against R15-11 Table 5 (%d): %s', (rho, printed, stated, digits) => {
+    if97EnhancementInputs(647.35, rho, d, work);
+    thermalConductivity(647.35, rho, true, d, lam);
+    expect(pct(lam.lambda * 1e3 / printed - 1, digits)).toBe(stated);
+  });
+  it.each([
+    [272, 36.228143, '−0.40 %', 2],
+    [322, 42.961579, '−1.5 %', 1],
+    [372, 45.688204, '−0.60 %', 2],
+  ])('μ at 647.35 K, %d kg/m³ against R12-08 Table 5 (%d): %s', (rho, printed, stated, digits) => {
+    if97EnhancementInputs(647.35, rho, d, work);
+    viscosity(647.35, rho, true, d, mu);
+    expect(pct(mu.mu * 1e6 / printed - 1, digits)).toBe(stated);
+  });
+});
