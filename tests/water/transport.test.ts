@@ -270,3 +270,11 @@ describe('figures stated in docs/guide/transport.md', () => {
     expect(pct(mu.mu * 1e6 / printed - 1, digits)).toBe(stated);
   });
 });
+
+describe('one correlation length for both releases', () => {
+  it('R12-08 and R15-11 give the same ξ0, Γ0, ν, γ and T̄_R (critical.ts reads them once)', async () => {
+    const v = (await import('../../data/transport/water-viscosity.json')).default.critical;
+    const c = (await import('../../data/transport/water-conductivity.json')).default.critical;
+    expect([c.xi0, c.Gamma0, c.nu, c.gamma, c.TRbar]).toEqual([v.xi0, v.Gamma0, v.nu, v.gamma, v.TRbar]);
+  });
+});

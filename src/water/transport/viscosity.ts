@@ -45,7 +45,7 @@ export const VISCOSITY_T_MAX = data.range.Tmax;
  */
 export const VISCOSITY_PRESSURE_LIMITS: readonly (readonly [number, number])[] = data.range.pressureSteps.map(([T, p]) => [T!, p!] as const);
 /**
- * The window in which μ̄2 exceeds 1.02 (R12-08 Section 2.8): outside it, leaving the enhancement out
+ * The window in which μ̄2 exceeds 1.02 (as recalled from R12-08): outside it, leaving the enhancement out
  * changes μ by less than 2 %.
  */
 export const VISCOSITY_ENHANCEMENT_WINDOW = C.significantRegion;
