@@ -1,0 +1,130 @@
+/**
+ * Benchmark cases for the transport SI cores: water viscosity and thermal conductivity at (T, ρ) with
+ * and without the critical enhancement (derivative inputs precomputed, as a caller holding a state has
+ * them), the IF97 helper that computes those inputs, and dilute-gas μ(T), λ(T). Each case loops over
+ * a spread of states and reports per call.
+ */
+import { type BenchCase, consume } from '../cases.js';
+import { gasTransportModel } from '../../src/ideal-gas/transport.js';
+import { ConductivityResult, CriticalEnhancementInputs, if97EnhancementInputs, If97InputsWork, thermalConductivity, viscosity, ViscosityResult } from '../../src/water/transport/index.js';
+
+const N = 1000;
+// water: liquid, vapour and supercritical states across the range (no enhancement)
+const wT = new Float64Array(N);
+const wRho = new Float64Array(N);
+for (let i = 0; i < N; i++) {
+  const k = i % 4;
+  wT[i] = k === 0 ? 280 + ((i * 31) % 90) : k === 1 ? 400 + ((i * 17) % 600) : k === 2 ? 650 + ((i * 13) % 400) : 300 + ((i * 7) % 300);
+  wRho[i] = k === 0 ? 990 : k === 1 ? 0.5 + ((i * 7) % 20) : k === 2 ? 50 + ((i * 11) % 400) : 900 + ((i * 3) % 100);
+}
+// near-critical states with their IF97 derivative inputs, computed once
+const CN = 200;
+const cT = new Float64Array(CN);
+const cRho = new Float64Array(CN);
+const inputs: CriticalEnhancementInputs[] = [];
+{
+  const work = new If97InputsWork();
+  for (let i = 0; i < CN; i++) {
+    cT[i] = 648 + ((i * 7) % 40);
+    cRho[i] = 150 + ((i * 13) % 300);
+    const d = new CriticalEnhancementInputs();
+    if (if97EnhancementInputs(cT[i]!, cRho[i]!, d, work) !== 0) throw new Error(`bench setup: no IF97 inputs at ${cT[i]} K, ${cRho[i]} kg/m³`);
+    inputs.push(d);
+  }
+}
+const none = new CriticalEnhancementInputs();
+const mu = new ViscosityResult();
+const lambda = new ConductivityResult();
+const helperInputs = new CriticalEnhancementInputs();
+const helperWork = new If97InputsWork();
+
+const gT = Float64Array.from({ length: N }, (_, i) => 250 + ((i * 37) % 1500));
+const n2 = gasTransportModel('N2')!;
+const air = gasTransportModel('air')!;
+
+export const cases: BenchCase[] = [
+  {
+    name: 'transport: water viscosity (T, ρ), no enhancement',
+    fn: () => {
+      for (let i = 0; i < N; i++) {
+        viscosity(wT[i]!, wRho[i]!, false, none, mu);
+        consume(mu.mu);
+      }
+    },
+    perCall: N,
+    targetNs: 150,
+  },
+  {
+    name: 'transport: water conductivity (T, ρ), no enhancement',
+    fn: () => {
+      for (let i = 0; i < N; i++) {
+        thermalConductivity(wT[i]!, wRho[i]!, false, none, lambda);
+        consume(lambda.lambda);
+      }
+    },
+    perCall: N,
+    targetNs: 150,
+  },
+  {
+    name: 'transport: water viscosity (T, ρ), with enhancement (inputs given)',
+    fn: () => {
+      for (let i = 0; i < CN; i++) {
+        viscosity(cT[i]!, cRho[i]!, true, inputs[i]!, mu);
+        consume(mu.mu);
+      }
+    },
+    perCall: CN,
+    targetNs: 1000,
+  },
+  {
+    name: 'transport: water conductivity (T, ρ), with enhancement (inputs given)',
+    fn: () => {
+      for (let i = 0; i < CN; i++) {
+        thermalConductivity(cT[i]!, cRho[i]!, true, inputs[i]!, lambda);
+        consume(lambda.lambda);
+      }
+    },
+    perCall: CN,
+    targetNs: 1000,
+  },
+  {
+    name: 'transport: IF97 enhancement inputs at (T, ρ) (state search + reference derivative)',
+    fn: () => {
+      for (let i = 0; i < CN; i++) {
+        if97EnhancementInputs(cT[i]!, cRho[i]!, helperInputs, helperWork);
+        consume(helperInputs.dRhoDp);
+      }
+    },
+    perCall: CN,
+  },
+  {
+    name: 'transport: gas μ(T), N2 (Chapman-Enskog)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(n2.mu(gT[i]!));
+    },
+    perCall: N,
+    targetNs: 50,
+  },
+  {
+    name: 'transport: gas λ(T), N2 (modified Eucken)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(n2.lambda(gT[i]!));
+    },
+    perCall: N,
+    targetNs: 50,
+  },
+  {
+    name: 'transport: gas μ(T), air (Wilke, 4 components)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(air.mu(gT[i]!));
+    },
+    perCall: N,
+  },
+  {
+    name: 'transport: gas λ(T), air (Mason-Saxena, 4 components)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(air.lambda(gT[i]!));
+    },
+    perCall: N,
+  },
+];
