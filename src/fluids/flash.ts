@@ -326,12 +326,12 @@ export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidS
 
 /**
  * The state at (h [J/kg], s [J/(kg·K)]): Newton steps in ln p on h(p, s) = h, with (∂h/∂p)_s = v,
- * each step a (p, s) flash, inside a bracket from the triple-point pressure to p_max.
+ * each step a (p, s) flash, inside a bracket from 1e-4 of the triple-point pressure to p_max.
  */
 export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidState): StatusCode {
   const m = ctx.model;
   if (!Number.isFinite(h) || !Number.isFinite(s)) return Status.invalidInput;
-  let lo = Math.log(m.pt);
+  let lo = Math.log(1e-4 * m.pt);
   let hi = Math.log(m.pMax);
   let loOk = false;
   let hiOk = false;
@@ -342,9 +342,11 @@ export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidS
     const st = stateFromPS(ctx, p, s, out);
     if (st !== Status.ok && st !== Status.undefinedProperty) {
       if (st !== Status.outOfRange) return st;
-      // s not reachable at this pressure: move into the bracket's middle
-      if (y <= lo || y >= hi) return Status.outOfRange;
-      hi = y;
+      // s not reachable at this pressure (below the triple point only vapour entropies are; at
+      // high pressure only the lower ones): narrow the bracket from that side
+      if (hi - lo < 1e-12 * Math.abs(hi)) return Status.outOfRange;
+      if (p < m.pt) lo = y;
+      else hi = y;
       y = 0.5 * (lo + hi);
       continue;
     }

@@ -18,7 +18,7 @@ import { ancillaryLiquidDensity, ancillaryPressure, ancillaryVaporDensity, FLUID
  * Solves the equilibrium at T from reduced densities dL, dV into ctx.satDL, ctx.satDV, ctx.satP.
  * Stops when |ΔJ| ≤ 1e-13·J (plus the rounding level of the liquid's J, a small difference of large
  * terms at low temperatures) and |ΔK| ≤ 1e-12 (g equal to 1e-12·RT); after six steps, at the rounding floor of K (a sum
- * of terms of order 10), 100·tol J and 1e-11.
+ * of terms of order 10), 10·tol J and 1e-11.
  */
 export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: number, dV0: number): StatusCode {
   const m = ctx.model;
@@ -32,7 +32,6 @@ export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: numb
     const KL = dL * ar[1]! + ar[0]! + Math.log(dL);
     const JdL = 1 + 2 * dL * ar[1]! + dL * dL * ar[2]!;
     const KdL = 2 * ar[1]! + dL * ar[2]! + 1 / dL;
-    const ar1L = ar[1]!;
     m.residual(dV, tau, ar);
     const JV = dV * (1 + dV * ar[1]!);
     const KV = dV * ar[1]! + ar[0]! + Math.log(dV);
@@ -40,9 +39,10 @@ export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: numb
     const KdV = 2 * ar[1]! + dV * ar[2]! + 1 / dV;
     const dJ = JV - JL;
     const dK = KV - KL;
-    // J of the liquid is a small difference of large terms: allow its rounding level
-    const tolJ = 1e-13 * Math.abs(JV) + 1e-15 * dL * (1 + Math.abs(dL * ar1L));
-    if ((Math.abs(dJ) <= tolJ && Math.abs(dK) <= 1e-12) || (i >= 6 && Math.abs(dJ) <= 100 * tolJ && Math.abs(dK) <= 1e-11)) {
+    // J of the liquid is a small difference of large terms (δ² αʳ_δ, with αʳ_δ a sum of terms of
+    // order 10): allow its rounding level, about 2e-14·δ'²
+    const tolJ = 1e-13 * Math.abs(JV) + 2e-14 * dL * dL;
+    if ((Math.abs(dJ) <= tolJ && Math.abs(dK) <= 1e-12) || (i >= 6 && Math.abs(dJ) <= 10 * tolJ && Math.abs(dK) <= 1e-11)) {
       ctx.satDL = dL;
       ctx.satDV = dV;
       ctx.satP = JV * m.rhor * m.R * T;
@@ -62,7 +62,7 @@ export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: numb
     dV += stepV;
     if (stall && i > 2) {
       // at the rounding level (close to the critical point J and K are flat): accept if near
-      if (Math.abs(dJ) <= 100 * tolJ && Math.abs(dK) <= 1e-11) {
+      if (Math.abs(dJ) <= 10 * tolJ && Math.abs(dK) <= 1e-11) {
         ctx.satDL = dL;
         ctx.satDV = dV;
         ctx.satP = JV * m.rhor * m.R * T;
