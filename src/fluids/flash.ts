@@ -42,8 +42,10 @@ function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: n
       b = x;
       hiChecked = true;
     }
+    // converged: a step below 1e-13 (Newton's next would be at rounding), or f at its rounding level
+    if (Math.abs(f) <= 4e-16 * x * Math.abs(df)) return x;
     let next = df > 0 ? x - f / df : NaN;
-    if (Math.abs(next - x) <= 1e-14 * x) return next;
+    if (Math.abs(next - x) <= 1e-13 * x) return next;
     if (!(next > a && next < b)) {
       if (!hiChecked) {
         // the upper end is needed: check that it brackets the root
@@ -259,7 +261,7 @@ function solveIsobar(ctx: FluidContext, p: number, target: number, by: number, l
     }
     if (Math.abs(f) <= 1e-15 * scale) return Status.ok;
     let next = T - f / slopeOf(out, by);
-    if (Math.abs(next - T) <= 1e-13 * T && next > a && next < b) {
+    if (Math.abs(next - T) <= 1e-12 * T && next > a && next < b) {
       T = next;
       const s2 = densityPT(ctx, p, T, rho);
       if (s2 !== Status.ok) return s2;
