@@ -1,7 +1,14 @@
 /**
- * Generates src/water/if97/kernels.generated.ts: straight-line code for the IF97 term sums (basic
- * equations, R7-97 backward equations, SR2-01 p(h, s), SR3-03 region 3 T and v, SR4-04 h-s equations)
- * Σ nᵢ·xᴵⁱ·yᴶⁱ (and their first and second derivatives) from the coefficient files in data/if97.
+ * Generates the straight-line kernels from the coefficient files listed in {@link KERNEL_SOURCES}:
+ *
+ * - src/water/if97/kernels.generated.ts: the IF97 term sums (basic equations, R7-97 backward
+ *   equations, SR2-01 p(h, s), SR3-03 region 3 T and v, SR4-04 h-s equations) Σ nᵢ·xᴵⁱ·yᴶⁱ (and
+ *   their first and second derivatives) from data/if97;
+ * - src/fluids/kernels.generated.ts: for every loadable fluid in data/fluids, the residual
+ *   Helmholtz energy αʳ(δ, τ) of a reference equation of state with αʳ_δ, αʳ_δδ, αʳ_τ, αʳ_ττ,
+ *   αʳ_δτ in one pass (term shapes n δᵈ τᵗ, n δᵈ τᵗ exp(−δᶜ), Gaussian bells
+ *   n δᵈ τᵗ exp(−α(δ−ε)² − β(τ−γ)²), and the non-analytic terms n Δᵇ δ ψ of IAPWS-95 and CO2), and
+ *   the ideal-gas part α°(τ) (without ln δ) with α°_τ, α°_ττ.
  *
  * Powers are built by short multiplication chains (each needed power from two already built),
  * each term's xᴵ·yᴶ is formed once, and the derivative sums carry the constants n·I, n·I·(I−1), …
@@ -23,7 +30,27 @@ interface Terms {
   n: number[];
 }
 
-const read = (name: string): Record<string, unknown> => JSON.parse(readFileSync(resolve(root, 'data/if97', `${name}.json`), 'utf8')) as Record<string, unknown>;
+export const FLUID_KERNELS_PATH = resolve(root, 'src/fluids/kernels.generated.ts');
+
+/**
+ * The coefficient files each generated module is built from (paths relative to the repository).
+ * The IF97 module reads the named files of data/if97; the fluid module reads the listed fluid
+ * files and generates kernels for those marked `"loadable": true` (verified against their source).
+ */
+export const KERNEL_SOURCES = {
+  if97: {
+    directory: 'data/if97',
+    files: ['region1', 'region2', 'region3', 'region5', 'backward-region1', 'backward-region2', 'backward-hs', 'backward-region3', 'backward-hs-region3'],
+  },
+  fluids: {
+    directory: 'data/fluids',
+    files: ['water'],
+  },
+} as const;
+
+const readFrom = (directory: string, name: string): Record<string, unknown> =>
+  JSON.parse(readFileSync(resolve(root, directory, `${name}.json`), 'utf8')) as Record<string, unknown>;
+const read = (name: (typeof KERNEL_SOURCES.if97.files)[number]): Record<string, unknown> => readFrom(KERNEL_SOURCES.if97.directory, name);
 
 /** Statements that define `${v}${k}` = base^k for every k in `needed` (k ≠ 0), by a short multiplication chain. */
 function powerChain(v: string, needed: Iterable<number>): string[] {
@@ -184,7 +211,341 @@ export function renderKernels(): string {
   return out.join('\n');
 }
 
+// ---------------------------------------------------------------------------------------------
+// Reference equations of state in the reduced Helmholtz energy α(δ, τ) = α°(δ, τ) + αʳ(δ, τ)
+// ---------------------------------------------------------------------------------------------
+
+/** The coefficient sets of one fluid file (data/fluids/<file>.json) the generator reads. */
+export interface FluidCoefficients {
+  readonly name: string;
+  readonly loadable?: boolean;
+  readonly ideal: {
+    readonly constant: number;
+    readonly tau: number;
+    readonly lnTau: number;
+    readonly power: { readonly n: readonly number[]; readonly t: readonly number[] };
+    readonly planckEinstein: { readonly n: readonly number[]; readonly theta: readonly number[] };
+  };
+  readonly residual: {
+    readonly polynomial?: { readonly n: readonly number[]; readonly d: readonly number[]; readonly t: readonly number[] };
+    readonly exponential?: { readonly n: readonly number[]; readonly d: readonly number[]; readonly t: readonly number[]; readonly c: readonly number[] };
+    readonly gaussian?: {
+      readonly n: readonly number[];
+      readonly d: readonly number[];
+      readonly t: readonly number[];
+      readonly alpha: readonly number[];
+      readonly beta: readonly number[];
+      readonly gamma: readonly number[];
+      readonly epsilon: readonly number[];
+    };
+    readonly nonAnalytic?: {
+      readonly n: readonly number[];
+      readonly a: readonly number[];
+      readonly b: readonly number[];
+      readonly B: readonly number[];
+      readonly C: readonly number[];
+      readonly D: readonly number[];
+      readonly A: readonly number[];
+      readonly beta: readonly number[];
+    };
+  };
+}
+
+/** The fluid files of {@link KERNEL_SOURCES}, parsed. */
+export function readFluidCoefficients(): { file: string; data: FluidCoefficients }[] {
+  return KERNEL_SOURCES.fluids.files.map((file) => ({ file, data: readFrom(KERNEL_SOURCES.fluids.directory, file) as unknown as FluidCoefficients }));
+}
+
+/** The generated kernel names of a fluid file: `water` → `waterResidual`, `waterIdeal`. */
+export function fluidKernelNames(file: string): { residual: string; ideal: string } {
+  const id = file.replace(/[^A-Za-z0-9]+(.)/g, (_m, c: string) => c.toUpperCase());
+  return { residual: `${id}Residual`, ideal: `${id}Ideal` };
+}
+
+const num = (x: number): string => {
+  const s = String(x);
+  return x < 0 ? `(${s})` : s;
+};
+
+/**
+ * Powers of τ with rational exponents: a common denominator q ≤ 24 of all exponents splits τᵗ into
+ * τᴷ·(τ^(1/q))ʳ, both from multiplication chains; exponents without one use Math.pow.
+ */
+class TauPowers {
+  readonly q: number;
+  private readonly integer = new Set<number>();
+  private readonly root = new Set<number>();
+  private readonly fallback = new Map<number, string>();
+
+  constructor(exponents: readonly number[]) {
+    let q = 0;
+    for (let c = 1; c <= 24 && q === 0; c++) if (exponents.every((t) => Math.abs(t * c - Math.round(t * c)) < 1e-9)) q = c;
+    this.q = q;
+  }
+
+  /** The expression for τᵗ (registers what the chains must build). */
+  power(t: number): string {
+    if (this.q === 0) {
+      if (t === 0) return '';
+      if (!this.fallback.has(t)) this.fallback.set(t, `tp${this.fallback.size}`);
+      return this.fallback.get(t)!;
+    }
+    const k = Math.round(t * this.q);
+    const K = Math.floor(k / this.q);
+    const r = k - K * this.q;
+    if (K !== 0) this.integer.add(K);
+    if (r !== 0) this.root.add(r);
+    return [powName('t', K), powName('r', r)].filter((p) => p !== '').join(' * ');
+  }
+
+  /** Statements building the registered powers (after every {@link power} call). */
+  statements(): string[] {
+    const lines: string[] = [];
+    if ([...this.integer].some((k) => k < 0)) lines.push('const it = 1 / t;');
+    lines.push(...powerChain('t', this.integer));
+    if (this.root.size > 0) {
+      const q = this.q;
+      const rootExpr = q === 2 ? 'Math.sqrt(t)' : q === 4 ? 'Math.sqrt(Math.sqrt(t))' : q === 8 ? 'Math.sqrt(Math.sqrt(Math.sqrt(t)))' : q === 3 ? 'Math.cbrt(t)' : q === 6 ? 'Math.cbrt(Math.sqrt(t))' : `Math.pow(t, ${1 / q})`;
+      lines.push(`const r = ${rootExpr};`);
+      lines.push(...powerChain('r', this.root));
+    }
+    if (this.fallback.size > 0) {
+      lines.push('const lt = Math.log(t);');
+      for (const [t, name] of this.fallback) lines.push(`const ${name} = Math.exp(${t} * lt);`);
+    }
+    return lines;
+  }
+}
+
+const join = (parts: string[]): string => (parts.length === 0 ? '0' : parts.join(' +\n    ').replace(/\+ -/g, '- '));
+
+/**
+ * The residual kernel: out[0..5] = αʳ, αʳ_δ, αʳ_δδ, αʳ_τ, αʳ_ττ, αʳ_δτ at (δ, τ).
+ * Terms n δᵈ τᵗ exp(−δᶜ) (c = 0: polynomial) are grouped by c: per group the sums
+ * S = Σ n δᵈτᵗ, S_d = Σ n d δᵈτᵗ, … are formed once, and with k = c δᶜ
+ * αʳ_δ·δ = e (S_d − k S), αʳ_δδ·δ² = e (S_dd − k (2 S_d + (c − 1) S) + k² S), αʳ_δτ·δτ = e (S_dt − k S_t).
+ */
+function residualFunction(fn: string, doc: string, f: FluidCoefficients): string {
+  const r = f.residual;
+  const tauExponents = [...(r.polynomial?.t ?? []), ...(r.exponential?.t ?? []), ...(r.gaussian?.t ?? [])];
+  const tp = new TauPowers(tauExponents);
+  const deltaNeeded = new Set<number>();
+  interface Term {
+    n: number;
+    d: number;
+    t: number;
+    c: number;
+  }
+  const terms: Term[] = [];
+  r.polynomial?.n.forEach((n, i) => terms.push({ n, d: r.polynomial!.d[i]!, t: r.polynomial!.t[i]!, c: 0 }));
+  r.exponential?.n.forEach((n, i) => terms.push({ n, d: r.exponential!.d[i]!, t: r.exponential!.t[i]!, c: r.exponential!.c[i]! }));
+  const body: string[] = [];
+  const monomial = (d: number, t: number): string => {
+    if (d !== 0) deltaNeeded.add(d);
+    const parts = [powName('d', d), tp.power(t)].filter((p) => p !== '');
+    return parts.length === 0 ? '1' : parts.join(' * ');
+  };
+  const A: string[] = [];
+  const D: string[] = [];
+  const DD: string[] = [];
+  const T: string[] = [];
+  const TT: string[] = [];
+  const DT: string[] = [];
+  const groups = [...new Set(terms.map((x) => x.c))].sort((a, b) => a - b);
+  let m = 0;
+  for (const c of groups) {
+    const g = terms.filter((x) => x.c === c);
+    const names = g.map(() => `m${m++}`);
+    g.forEach((x, i) => body.push(`const ${names[i]} = ${monomial(x.d, x.t)};`));
+    const s = (coef: (x: Term) => number) => sum(g.map(coef), names);
+    body.push(`const s${c} =\n    ${s((x) => x.n)};`);
+    body.push(`const sd${c} =\n    ${s((x) => x.n * x.d)};`);
+    body.push(`const sdd${c} =\n    ${s((x) => x.n * x.d * (x.d - 1))};`);
+    body.push(`const st${c} =\n    ${s((x) => x.n * x.t)};`);
+    body.push(`const stt${c} =\n    ${s((x) => x.n * x.t * (x.t - 1))};`);
+    body.push(`const sdt${c} =\n    ${s((x) => x.n * x.d * x.t)};`);
+    if (c === 0) {
+      A.push(`s0`);
+      D.push(`sd0`);
+      DD.push(`sdd0`);
+      T.push(`st0`);
+      TT.push(`stt0`);
+      DT.push(`sdt0`);
+    } else {
+      deltaNeeded.add(c);
+      body.push(`const e${c} = Math.exp(-${powName('d', c)});`);
+      body.push(`const k${c} = ${c === 1 ? 'd' : `${c} * ${powName('d', c)}`};`);
+      A.push(`e${c} * s${c}`);
+      D.push(`e${c} * (sd${c} - k${c} * s${c})`);
+      DD.push(`e${c} * (sdd${c} - k${c} * (2 * sd${c}${c === 1 ? '' : ` + ${c - 1} * s${c}`}) + k${c} * k${c} * s${c})`);
+      T.push(`e${c} * st${c}`);
+      TT.push(`e${c} * stt${c}`);
+      DT.push(`e${c} * (sdt${c} - k${c} * st${c})`);
+    }
+  }
+  // full derivatives (not multiplied by powers of δ and τ) of the bell-shaped and non-analytic terms
+  const gA: string[] = [];
+  const gD: string[] = [];
+  const gDD: string[] = [];
+  const gT: string[] = [];
+  const gTT: string[] = [];
+  const gDT: string[] = [];
+  const G = r.gaussian;
+  G?.n.forEach((n, j) => {
+    const d = G.d[j]!;
+    const t = G.t[j]!;
+    const al = G.alpha[j]!;
+    const be = G.beta[j]!;
+    const ga = G.gamma[j]!;
+    const ep = G.epsilon[j]!;
+    body.push(`const gx${j} = d - ${num(ep)};`);
+    body.push(`const gy${j} = t - ${num(ga)};`);
+    const mono = monomial(d, t);
+    body.push(`const g${j} = ${num(n)} * ${mono === '1' ? '' : `${mono} * `}Math.exp(${-al} * gx${j} * gx${j} - ${be} * gy${j} * gy${j});`);
+    body.push(`const gd${j} = ${d === 0 ? '' : `${d} * id `}- ${2 * al} * gx${j};`);
+    body.push(`const gt${j} = ${t === 0 ? '' : `${t} * it `}- ${2 * be} * gy${j};`);
+    gA.push(`g${j}`);
+    gD.push(`g${j} * gd${j}`);
+    gDD.push(`g${j} * (gd${j} * gd${j}${d === 0 ? '' : ` - ${d} * id * id`} - ${2 * al})`);
+    gT.push(`g${j} * gt${j}`);
+    gTT.push(`g${j} * (gt${j} * gt${j}${t === 0 ? '' : ` - ${t} * it * it`} - ${2 * be})`);
+    gDT.push(`g${j} * gd${j} * gt${j}`);
+  });
+  const N = r.nonAnalytic;
+  if (N && N.n.length > 0) {
+    body.push('const dm1 = d - 1;');
+    body.push('const tm1 = t - 1;');
+    body.push('const q = dm1 * dm1;');
+  }
+  N?.n.forEach((n, j) => {
+    const a = N.a[j]!;
+    const b = N.b[j]!;
+    const B = N.B[j]!;
+    const C = N.C[j]!;
+    const Dd = N.D[j]!;
+    const Aa = N.A[j]!;
+    const be = N.beta[j]!;
+    const e = 1 / (2 * be);
+    body.push(`// non-analytic term ${j}: n = ${n}, a = ${a}, b = ${b}, B = ${B}, C = ${C}, D = ${Dd}, A = ${Aa}, β = ${be}`);
+    body.push(`const qe${j} = Math.pow(q, ${e - 1});`);
+    body.push(`const qa${j} = Math.pow(q, ${a - 1});`);
+    body.push(`const th${j} = 1 - t + ${Aa} * q * qe${j};`);
+    body.push(`const D${j} = th${j} * th${j} + ${B} * q * qa${j};`);
+    body.push(`const G${j} = ${(2 * Aa) / be} * th${j} * qe${j} + ${2 * B * a} * qa${j};`);
+    body.push(`const Dd${j} = dm1 * G${j};`);
+    body.push(`const Ddd${j} = G${j} + ${4 * B * a * (a - 1)} * qa${j} + ${2 * (Aa / be) ** 2} * Math.pow(q, ${1 / be - 1}) + ${(4 * Aa / be) * (e - 1)} * th${j} * qe${j};`);
+    body.push(`const Db${j} = Math.pow(D${j}, ${b});`);
+    // Δ = 0 only at δ = τ = 1, where the first-derivative limits are 0 and the second derivatives diverge
+    body.push(`const Db1${j} = D${j} > 0 ? Db${j} / D${j} : 0;`);
+    body.push(`const Db2${j} = Db1${j} / D${j};`);
+    body.push(`const Bd${j} = ${b} * Db1${j} * Dd${j};`);
+    body.push(`const Bdd${j} = ${b} * (Db1${j} * Ddd${j} + ${b - 1} * Db2${j} * Dd${j} * Dd${j});`);
+    body.push(`const Bt${j} = ${-2 * b} * th${j} * Db1${j};`);
+    body.push(`const Btt${j} = ${2 * b} * Db1${j} + ${4 * b * (b - 1)} * th${j} * th${j} * Db2${j};`);
+    body.push(`const Bdt${j} = ${(-Aa * b * 2) / be} * Db1${j} * dm1 * qe${j} + ${-2 * b * (b - 1)} * th${j} * Db2${j} * Dd${j};`);
+    body.push(`const ps${j} = Math.exp(${-C} * q - ${Dd} * tm1 * tm1);`);
+    body.push(`const psd${j} = ${-2 * C} * dm1 * ps${j};`);
+    body.push(`const psdd${j} = (${2 * C} * q - 1) * ${2 * C} * ps${j};`);
+    body.push(`const pst${j} = ${-2 * Dd} * tm1 * ps${j};`);
+    body.push(`const pstt${j} = (${2 * Dd} * tm1 * tm1 - 1) * ${2 * Dd} * ps${j};`);
+    body.push(`const psdt${j} = ${4 * C * Dd} * dm1 * tm1 * ps${j};`);
+    const k = num(n);
+    gA.push(`${k} * Db${j} * d * ps${j}`);
+    gD.push(`${k} * (Db${j} * (ps${j} + d * psd${j}) + Bd${j} * d * ps${j})`);
+    gDD.push(`${k} * (Db${j} * (2 * psd${j} + d * psdd${j}) + 2 * Bd${j} * (ps${j} + d * psd${j}) + Bdd${j} * d * ps${j})`);
+    gT.push(`${k} * d * (Bt${j} * ps${j} + Db${j} * pst${j})`);
+    gTT.push(`${k} * d * (Btt${j} * ps${j} + 2 * Bt${j} * pst${j} + Db${j} * pstt${j})`);
+    gDT.push(`${k} * (Db${j} * (pst${j} + d * psdt${j}) + d * Bd${j} * pst${j} + Bt${j} * (ps${j} + d * psd${j}) + Bdt${j} * d * ps${j})`);
+  });
+  const lines: string[] = [];
+  lines.push(`/** ${doc} */`);
+  lines.push(`export function ${fn}(delta: number, tau: number, out: Float64Array): void {`);
+  lines.push('  const d = delta;');
+  lines.push('  const t = tau;');
+  lines.push('  const id = 1 / d;');
+  const tauLines = tp.statements();
+  if (!tauLines.includes('const it = 1 / t;')) lines.push('  const it = 1 / t;');
+  for (const l of powerChain('d', deltaNeeded)) lines.push(`  ${l}`);
+  for (const l of tauLines) lines.push(`  ${l}`);
+  for (const l of body) lines.push(`  ${l}`);
+  const with_ = (scaled: string[], scale: string, full: string[]): string => {
+    const a = scaled.length > 0 ? `(${join(scaled)})${scale}` : '';
+    return join([a, ...full].filter((x) => x !== ''));
+  };
+  lines.push(`  out[0] =\n    ${with_(A, '', gA)};`);
+  lines.push(`  out[1] =\n    ${with_(D, ' * id', gD)};`);
+  lines.push(`  out[2] =\n    ${with_(DD, ' * id * id', gDD)};`);
+  lines.push(`  out[3] =\n    ${with_(T, ' * it', gT)};`);
+  lines.push(`  out[4] =\n    ${with_(TT, ' * it * it', gTT)};`);
+  lines.push(`  out[5] =\n    ${with_(DT, ' * id * it', gDT)};`);
+  lines.push('}');
+  return lines.join('\n');
+}
+
+/**
+ * The ideal-gas kernel: out[0..2] = α° − ln δ, α°_τ, α°_ττ at τ, for
+ * α° = ln δ + a₁ + a₂ τ + a₃ ln τ + Σ nᵢ τ^tᵢ + Σ nᵢ ln(1 − exp(−θᵢ τ)).
+ */
+function idealGasFunction(fn: string, doc: string, f: FluidCoefficients): string {
+  const i = f.ideal;
+  const tp = new TauPowers(i.power.t);
+  const body: string[] = [];
+  const names = i.power.t.map((t) => tp.power(t) || '1');
+  const A: string[] = [String(i.constant), `${num(i.tau)} * t`];
+  const T: string[] = [String(i.tau)];
+  const TT: string[] = [];
+  if (i.lnTau !== 0) {
+    A.push(`${num(i.lnTau)} * Math.log(t)`);
+    T.push(`${num(i.lnTau)} * it`);
+    TT.push(`${num(-i.lnTau)} * it * it`);
+  }
+  if (i.power.n.length > 0) {
+    A.push(sum([...i.power.n], names));
+    T.push(`(${sum(i.power.n.map((n, k) => n * i.power.t[k]!), names)}) * it`);
+    TT.push(`(${sum(i.power.n.map((n, k) => n * i.power.t[k]! * (i.power.t[k]! - 1)), names)}) * it * it`);
+  }
+  i.planckEinstein.n.forEach((n, k) => {
+    const th = i.planckEinstein.theta[k]!;
+    body.push(`const pe${k} = Math.exp(${-th} * t);`);
+    body.push(`const pf${k} = pe${k} / (1 - pe${k});`);
+    A.push(`${num(n)} * Math.log1p(-pe${k})`);
+    T.push(`${n * th} * pf${k}`);
+    TT.push(`${-n * th * th} * pf${k} * (1 + pf${k})`);
+  });
+  const lines: string[] = [];
+  lines.push(`/** ${doc} */`);
+  lines.push(`export function ${fn}(tau: number, out: Float64Array): void {`);
+  lines.push('  const t = tau;');
+  const tauLines = tp.statements();
+  if (!tauLines.includes('const it = 1 / t;')) lines.push('  const it = 1 / t;');
+  for (const l of tauLines) lines.push(`  ${l}`);
+  for (const l of body) lines.push(`  ${l}`);
+  lines.push(`  out[0] =\n    ${join(A)};`);
+  lines.push(`  out[1] =\n    ${join(T)};`);
+  lines.push(`  out[2] =\n    ${join(TT)};`);
+  lines.push('}');
+  return lines.join('\n');
+}
+
+/** The module src/fluids/kernels.generated.ts. */
+export function renderFluidKernels(): string {
+  const out = [
+    `// GENERATED by scripts/generate-kernels.ts from ${KERNEL_SOURCES.fluids.directory}/{${KERNEL_SOURCES.fluids.files.join(',')}}.json (the loadable fluids). Do not edit.`,
+    '/* eslint-disable */',
+    '',
+  ];
+  for (const { file, data } of readFluidCoefficients()) {
+    if (data.loadable !== true) continue;
+    const k = fluidKernelNames(file);
+    out.push(residualFunction(k.residual, `${data.name}: residual part αʳ and αʳ_δ, αʳ_δδ, αʳ_τ, αʳ_ττ, αʳ_δτ into out[0..5] (data/fluids/${file}.json).`, data), '');
+    out.push(idealGasFunction(k.ideal, `${data.name}: ideal-gas part α° − ln δ, α°_τ, α°_ττ into out[0..2] (data/fluids/${file}.json).`, data), '');
+  }
+  return out.join('\n');
+}
+
 if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) {
   writeFileSync(KERNELS_PATH, renderKernels());
   console.log(`wrote ${KERNELS_PATH}`);
+  writeFileSync(FLUID_KERNELS_PATH, renderFluidKernels());
+  console.log(`wrote ${FLUID_KERNELS_PATH}`);
 }

@@ -11,6 +11,8 @@ const r2 = read('region2');
 const b1 = read('backward-region1');
 const b2 = read('backward-region2');
 
+// Every kernel of this module (and of src/fluids/kernels.generated.ts) is also checked against a plain
+// loop in tests/numeric/kernel-oracle.test.ts, which fails when a kernel has no case there.
 describe('src/water/if97/kernels.generated.ts', () => {
   it('is current: regenerating from data/if97 gives the committed file (npm run kernels)', () => {
     expect(readFileSync(KERNELS_PATH, 'utf8')).toBe(renderKernels());

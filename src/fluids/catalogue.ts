@@ -1,0 +1,48 @@
+/**
+ * The fluids the library ships: each data file with its generated kernels, compiled on first use.
+ * Only fluids whose coefficients reproduce their source's verification values are listed here
+ * (`"loadable": true` in the data file; the kernel generator emits kernels only for those).
+ *
+ * @module
+ */
+import water from '../../data/fluids/water.json';
+import type { FluidDefinition } from './definition.js';
+import { waterIdeal, waterResidual } from './kernels.generated.js';
+import { FluidModel, type IdealKernel, type ResidualKernel } from './model.js';
+
+interface Entry {
+  readonly definition: () => FluidDefinition;
+  readonly residual: ResidualKernel;
+  readonly ideal: IdealKernel;
+}
+
+const ENTRIES: Readonly<Record<string, Entry>> = {
+  water: { definition: () => water as unknown as FluidDefinition, residual: waterResidual, ideal: waterIdeal },
+};
+
+/** The catalogue's fluid names. */
+export const FLUID_NAMES: readonly string[] = Object.keys(ENTRIES);
+
+/** The definition (data file contents) of a catalogue fluid, or undefined. */
+export function fluidDefinition(name: string): FluidDefinition | undefined {
+  return ENTRIES[name]?.definition();
+}
+
+const compiled = new Map<string, FluidModel>();
+
+/** The compiled model of a catalogue fluid (built on first use, then shared: it is immutable). */
+export function fluidModel(name: string): FluidModel | undefined {
+  let m = compiled.get(name);
+  if (m === undefined) {
+    const e = ENTRIES[name];
+    if (e === undefined) return undefined;
+    m = new FluidModel(name, e.definition(), e.residual, e.ideal);
+    compiled.set(name, m);
+  }
+  return m;
+}
+
+/** IAPWS-95 water, compiled. */
+export function waterModel(): FluidModel {
+  return fluidModel('water')!;
+}
