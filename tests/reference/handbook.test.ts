@@ -78,23 +78,12 @@ describe('ideal-gas air (common practice)', () => {
 describe('ideal gases at 298.15 K without a JANAF table here: ΔfH°, S°, cp° (handbook thermochemical tables, from memory)', () => {
   it.each([
     // species, ΔfH° kJ/mol, S° J/(mol·K), cp° J/(mol·K)
-    ['He', 0, 126.15, 20.786],
     ['Ne', 0, 146.33, 20.786],
     ['C2H6', -83.8, 229.2, 52.5],
     ['C3H8', -104.7, 270.3, 73.6],
     ['n-C4H10', -125.8, 310.0, 98.5],
-    ['C2H4', 52.4, 219.3, 42.9],
-    ['C2H2', 227.4, 200.9, 44.0],
     ['NO', 91.3, 210.76, 29.86],
-    ['NO2', 33.9, 240.1, 37.0],
-    ['N2O', 81.6, 220.0, 38.6],
     ['SO2', -296.8, 248.2, 39.9],
-    ['H2S', -20.6, 205.8, 34.2],
-    ['O3', 142.7, 238.9, 39.2],
-    ['OH', 37.3, 183.7, 29.9],
-    ['H', 218.0, 114.72, 20.786],
-    ['O', 249.2, 161.06, 21.91],
-    ['N', 472.7, 153.30, 20.786],
   ] as const)('%s: ΔfH° = %d kJ/mol, S° = %d J/(mol·K), cp° = %d J/(mol·K)', (name, fH, S, cp) => {
     const g = idealGas(name, { basis: 'molar' });
     expectClose(g.h('298.15 K').in('kJ/mol'), fH, { abs: 1.5 });
