@@ -5,7 +5,7 @@
  */
 import { OutOfRangeError } from '../errors.js';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
-import { lookupIncompressible } from './catalogue.js';
+import { lookupIncompressible, type CatalogueOptions } from './catalogue.js';
 import { enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
 import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 
@@ -13,7 +13,7 @@ export { incompressibleNames, incompressibleCatalogue } from './catalogue.js';
 export { incompressibleDefinitionSchema, sourceSchema, compileDefinition } from './schema.js';
 export type { IncompressibleDefinition } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
-export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange } from './model.js';
+export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
 
 /** A state of an incompressible substance: temperature and (absolute) pressure. */
@@ -52,13 +52,15 @@ export interface IncompressibleSubstance {
   deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
 }
 
-function checkT(model: IncompressibleModel, name: string, T: number, parameter: string): void {
+function checkT(model: IncompressibleModel, name: string, T: number, parameter: string, rangeNote?: string): void {
   if (T < model.Tmin || T > model.Tmax) {
-    throw new OutOfRangeError(
-      { quantity: parameter, value: T, min: model.Tmin, max: model.Tmax, unit: 'K', scope: `the data for ${name}` },
-    );
+    const range = { quantity: parameter, value: T, min: model.Tmin, max: model.Tmax, unit: 'K', scope: `the data for ${name}` };
+    throw new OutOfRangeError(range, rangeNote === undefined ? undefined : `${new OutOfRangeError(range).message}; ${rangeNote}`);
   }
 }
+
+/** Options of {@link incompressible}: `{ supercooled: true }`, or a solution's `{ massFraction }` / `{ volumeFraction }`. */
+export type IncompressibleOptions = CatalogueOptions;
 
 function readPressure(input: QuantityLike<'pressure'>, parameter: string): number {
   const p = readQuantity(input, 'pressure', parameter);
@@ -87,12 +89,12 @@ function readPressure(input: QuantityLike<'pressure'>, parameter: string): numbe
  * copper.c('900 K');   // throws OutOfRangeError: T = 900 K is above the upper limit of the data for copper (800 K)
  * ```
  */
-export function incompressible(nameOrDefinition: string | IncompressibleDefinition): IncompressibleSubstance {
-  const { definition, model } = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition) : compileDefinition(nameOrDefinition);
+export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {
+  const { definition, model } = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, options) : compileDefinition(nameOrDefinition);
   const name = definition.name;
   const temperature = (input: QuantityLike<'temperature'>, parameter: string): number => {
     const T = readQuantity(input, 'temperature', parameter);
-    checkT(model, name, T, parameter);
+    checkT(model, name, T, parameter, definition.rangeNote);
     return T;
   };
   const c = (T: QuantityLike<'temperature'>): Quantity<'specificHeat'> => Quantity.fromSI(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat');
