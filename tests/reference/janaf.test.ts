@@ -86,3 +86,72 @@ describe('the H2S finding is in the table itself (NIST-JANAF H-080)', () => {
     expect((b.dH - a.dH) * 1000).toBeLessThan(hi * (b.T - a.T));
   });
 });
+
+/**
+ * Condensed phases against NIST-JANAF (Chase 1998): the catalogue's c(T) is the tables' Cp column per
+ * mole; the check that can fail is the interpolation between rows. Δu = ∫c dT and Δs = ∫c/T dT from
+ * 298.15 K (from the melting point for the liquids) must reproduce the tables' H − H(Tref) and S − S(Tref)
+ * at every row of the range within 0.5 % (and the tables' last printed digit, 0.5 J/mol, near Tref).
+ */
+import { incompressible, incompressibleCatalogue } from '../../src/incompressible/index.js';
+import { molarMass } from '../../src/chem/index.js';
+import { readJanafPhases } from './janaf.js';
+
+const CONDENSED = [
+  // name, table, formula, phase at a transition row ('lower' keeps the first row of a pair, 'upper' the second), reference T
+  ['aluminium', 'Al-002.txt', 'Al', 'lower', 298.15],
+  ['copper', 'Cu-002.txt', 'Cu', 'lower', 298.15],
+  ['iron', 'Fe-003.txt', 'Fe', 'lower', 298.15],
+  ['lead', 'Pb-002.txt', 'Pb', 'lower', 298.15],
+  ['liquid lead', 'Pb-004.txt', 'Pb', 'upper', 600.6],
+  ['mercury', 'Hg-002.txt', 'Hg', 'upper', 298.15],
+] as const;
+
+describe.each(CONDENSED)('%s against NIST-JANAF table %s', (name, file, formula, phase, Tref) => {
+  const s = incompressible(name);
+  const M = molarMass(formula).si;
+  const lo = s.range.T.min.si;
+  const hi = s.range.T.max.si;
+  const all = readJanafPhases(file);
+  const rows = all.filter((r, i) => {
+    if (r.T < lo - 1e-9 || r.T > hi + 1e-9) return false;
+    const twin = phase === 'lower' ? all[i - 1] : all[i + 1];
+    return !(twin !== undefined && twin.T === r.T);
+  });
+  const ref = rows.find((r) => Math.abs(r.T - Tref) < 1e-9)!;
+  it('the range ends at the phase change (melting or boiling at 1 bar) or where the data stop, and holds the reference row', () => {
+    expect(ref).toBeDefined();
+    expect(rows.length).toBeGreaterThanOrEqual(7);
+  });
+  it('c at every row is the table’s Cp divided by the CIAAW molar mass (transcription)', () => {
+    for (const r of rows) expectClose(s.c(quantity(r.T, 'K')).si, r.Cp / M, { rel: 1e-12 });
+  });
+  it(`Δu and Δs from ${Tref} K reproduce H − H(${Tref} K) and S − S(${Tref} K) at every row within 0.5 %`, () => {
+    const t0 = quantity(Tref, 'K');
+    for (const r of rows) {
+      if (r.T === Tref) continue;
+      const t = quantity(r.T, 'K');
+      expectClose(s.deltaU(t0, t).si * M, (r.dH - ref.dH) * 1000, { rel: 5e-3, abs: 0.5 });
+      expectClose(s.deltaS(t0, t).si * M, r.S - ref.S, { rel: 5e-3, abs: 5e-4 });
+    }
+  });
+});
+
+describe('condensed phases: ranges and names (NIST-JANAF phase-change rows)', () => {
+  it('lead is solid up to its melting point, 600.6 K, and liquid lead starts there; each error points to the other', () => {
+    expect(incompressible('lead').range.T.max.si).toBe(600.6);
+    expect(incompressible('liquid lead').range.T.min.si).toBe(600.6);
+    expect(() => incompressible('lead').c('650 K')).toThrow(/use 'liquid lead'/);
+    expect(() => incompressible('liquid lead').c('500 K')).toThrow(/use 'lead'/);
+  });
+  it('mercury is liquid from its melting point (234.29 K) to its normal boiling point (629.839 K)', () => {
+    expect([incompressible('mercury').range.T.min.si, incompressible('mercury').range.T.max.si]).toEqual([234.29, 629.839]);
+  });
+  it('every JANAF-based entry cites its table with basis published', () => {
+    for (const [name, file] of CONDENSED) {
+      const def = incompressibleCatalogue().find((d) => d.name === name)!;
+      expect(def.basis).toBe('published');
+      expect(def.source?.table).toContain(file.replace('.txt', ''));
+    }
+  });
+});
