@@ -46,6 +46,15 @@ describe('ideal-gas species data', () => {
     expect(findSpecies('O3')!.provenance).toMatchObject({ basis: 'computed', table: 'NIST-JANAF table O-056' });
     expect(findSpecies('C2H6')!.provenance.basis).toBe('from memory');
   });
+  it('docs/guide/choosing-a-model.md tabulates every fit with the figures of janaf-fits.json', () => {
+    const guide = readFileSync(new URL('../../docs/guide/choosing-a-model.md', import.meta.url), 'utf8');
+    const pct = (x: number) => `${Number((x * 100).toPrecision(2))} %`;
+    const fits = (read('janaf-fits.json') as { species: { id: string; janafTable: string; fitError: { cpRelative: number; sRelative: number; hMinusH298Relative: number; hMinusH298kJPerMol: number } }[] }).species;
+    for (const f of fits) {
+      const e = f.fitError;
+      expect(guide, f.id).toContain(`| ${f.id} | ${f.janafTable} | ${pct(e.cpRelative)} | ${pct(e.sRelative)} | ${pct(e.hMinusH298Relative)} (${e.hMinusH298kJPerMol} kJ/mol) |`);
+    }
+  });
   it('holds every required species, each found by formula and by name', () => {
     expect(speciesNames()).toEqual(expect.arrayContaining(REQUIRED));
     expect(idealGas('nitrogen').name).toBe('N2');

@@ -50,6 +50,12 @@ describe('liquid water from IAPWS-IF97 (saturated liquid, 0.01–350 °C)', () =
     for (let k = 0; k <= n; k++) sum += (k === 0 || k === n ? 1 : k % 2 === 1 ? 4 : 2) * saturatedLiquid(a + ((b - a) * k) / n).cp;
     expectClose(water.deltaU('50 °F', '300 °F').si, (sum * (b - a)) / n / 3, { rel: 1e-4 });
   });
+  it('docs/guide/choosing-a-model.md states the interpolation error the file records', () => {
+    const guide = readFileSync(new URL('../../docs/guide/choosing-a-model.md', import.meta.url), 'utf8');
+    const pct = (x: number) => `${Number((x * 100).toPrecision(2))} %`;
+    expect(guide).toContain(`at most ${pct(file.interpolationError.betweenNodes.c.maxRelative)} in c`);
+    expect(guide).toContain(`and ${pct(file.interpolationError.betweenNodes.rho.maxRelative)} in ρ`);
+  });
   it('beyond 350 °C the error points to heatstate/water', () => {
     expect(() => water.c('360 °C')).toThrow(OutOfRangeError);
     expect(() => water.c('360 °C')).toThrow(/use heatstate\/water/);
