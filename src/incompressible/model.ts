@@ -51,7 +51,7 @@ export interface IncompressibleModel {
  * ρ(T) in kg/m³: constant, or piecewise linear through the tabulated points.
  * @example
  * ```ts
- * densityAt(lookupIncompressible('water').model, 353.15);   //=> 971.77 (kg/m³, saturated liquid at 80 °C)
+ * densityAt(lookupIncompressible('water').model, 353.15);   //=> 971.78 (kg/m³, saturated liquid at 80 °C)
  * densityAt(lookupIncompressible('copper').model, 500);     //=> 8933 (constant)
  * ```
  */
@@ -63,7 +63,7 @@ export function densityAt(m: IncompressibleModel, T: number): number {
  * c(T) in J/(kg·K).
  * @example
  * ```ts
- * heatCapacityAt(lookupIncompressible('water').model, 298.15);   //=> 4182.25 (J/(kg·K))
+ * heatCapacityAt(lookupIncompressible('water').model, 298.15);   //=> 4182.18 (J/(kg·K), IF97 saturated liquid)
  * ```
  */
 export function heatCapacityAt(m: IncompressibleModel, T: number): number {
@@ -97,7 +97,7 @@ export function entropyChange(m: IncompressibleModel, T1: number, T2: number): n
  * @example
  * ```ts
  * const { model } = lookupIncompressible('water');
- * enthalpyChange(model, 293.15, 1e5, 293.15, 5e6);   //=> 4908.8 (J/kg: v(20 °C)·Δp)
+ * enthalpyChange(model, 293.15, 1e5, 293.15, 5e6);   //=> 4909.0 (J/kg: v(20 °C)·Δp)
  * ```
  */
 export function enthalpyChange(m: IncompressibleModel, T1: number, p1: number, T2: number, p2: number): number {
