@@ -47,7 +47,28 @@ export const FITTED_SPECIES = [
   { id: 'H2O', formula: 'H2O', names: ['water vapour', 'water vapor', 'water (gas)'], file: 'H-064.txt' },
   { id: 'CH4', formula: 'CH4', names: ['methane'], file: 'C-067.txt' },
   { id: 'NH3', formula: 'NH3', names: ['ammonia'], file: 'H-083.txt' },
+  { id: 'He', formula: 'He', names: ['helium'], file: 'He-001.txt' },
+  { id: 'C2H4', formula: 'C2H4', names: ['ethylene', 'ethene'], file: 'C-128.txt' },
+  { id: 'C2H2', formula: 'C2H2', names: ['acetylene', 'ethyne'], file: 'C-127.txt' },
+  { id: 'NO2', formula: 'NO2', names: ['nitrogen dioxide'], file: 'N-007.txt' },
+  { id: 'N2O', formula: 'N2O', names: ['nitrous oxide', 'dinitrogen monoxide'], file: 'N-026.txt' },
+  { id: 'H2S', formula: 'H2S', names: ['hydrogen sulfide', 'hydrogen sulphide'], file: 'H-080.txt' },
+  { id: 'O3', formula: 'O3', names: ['ozone'], file: 'O-056.txt' },
+  { id: 'OH', formula: 'OH', names: ['hydroxyl'], file: 'H-038.txt' },
+  { id: 'H', formula: 'H', names: ['atomic hydrogen'], file: 'H-001.txt' },
+  { id: 'O', formula: 'O', names: ['atomic oxygen'], file: 'O-001.txt' },
+  { id: 'N', formula: 'N', names: ['atomic nitrogen'], file: 'N-002.txt' },
 ] as const;
+
+/**
+ * What the fits cannot follow, found by comparing each table with itself (the evidence is recomputable
+ * from the table; tests/reference/janaf.test.ts holds these exceptions to the 0.1 % check).
+ */
+const FINDINGS = {
+  H2S:
+    'Table H-080 is not self-consistent between its 200 K and 298.15 K rows: S°(298.15 K) − S°(200 K) = 13.719 J/(mol·K) in the table, but ∫cp°/T dT over the interval is at most 13.653 J/(mol·K) even with cp° at its larger tabulated end (34.192 J/(mol·K)) throughout, and 13.48 J/(mol·K) with cp° linear in T; H° − H°(298.15 K) at 200 K (−3.310 kJ/mol) does agree with ∫cp° dT. The fit follows cp° and S°(298.15 K), so S° at 200 K is 0.14 % above the table (192.31 against 192.038 J/(mol·K)); above 298.15 K it agrees within 0.002 %. Someone with the printed JANAF table H-080 (or another compilation’s S° of H2S at 200 K) at hand should check the 200 K row.',
+  NH3: 'cp° deviates by up to 0.135 % near 5100 K (80.860 against 80.751 J/(mol·K)): seven terms per interval do not follow the table’s curvature there; below 5000 K the fit is within 0.05 % in cp°.',
+} as const;
 
 function readTable(file: string): Row[] {
   const text = readFileSync(resolve(root, 'tests/reference/data/janaf', file), 'utf8');
@@ -106,8 +127,14 @@ export interface Fit {
   low: number[];
   /** a1..a7, b1, b2 for T ≥ mid. */
   high: number[];
-  /** Largest deviations from the JANAF rows in [min, max]. */
-  fitError: { cpRelative: number; sRelative: number; hMinusH298kJPerMol: number; points: number };
+  /**
+   * Largest deviations from the JANAF rows in [min, max]: relative in cp° and S°; in H° − H°(298.15 K)
+   * absolute (kJ/mol) and relative (over the rows where |H° − H°(298.15 K)| ≥ 1 kJ/mol, so that the
+   * table's last printed digit, 0.001 kJ/mol, stays below 0.05 %).
+   */
+  fitError: { cpRelative: number; sRelative: number; hMinusH298kJPerMol: number; hMinusH298Relative: number; points: number };
+  /** A property of the table that the fit cannot follow, with the evidence (absent when there is none). */
+  finding?: string;
 }
 
 function round(x: number, digits = 3): number {
@@ -156,6 +183,7 @@ export function fitSpecies(spec: (typeof FITTED_SPECIES)[number]): Fit {
   let cpErr = 0;
   let sErr = 0;
   let hErr = 0;
+  let hRel = 0;
   const h298 = (ref.fH * 1000) / R;
   for (const r of rows) {
     const k = r.T < T_MID ? low : high;
@@ -165,6 +193,7 @@ export function fitSpecies(spec: (typeof FITTED_SPECIES)[number]): Fit {
     cpErr = Math.max(cpErr, Math.abs(cp - r.Cp) / r.Cp);
     sErr = Math.max(sErr, Math.abs(s - r.S) / r.S);
     hErr = Math.max(hErr, Math.abs(dH - r.dH));
+    if (Math.abs(r.dH) >= 1) hRel = Math.max(hRel, Math.abs(dH - r.dH) / Math.abs(r.dH));
   }
   return {
     id: spec.id,
@@ -174,7 +203,8 @@ export function fitSpecies(spec: (typeof FITTED_SPECIES)[number]): Fit {
     T: { min: T_MIN, mid: T_MID, max: T_MAX },
     low,
     high,
-    fitError: { cpRelative: round(cpErr), sRelative: round(sErr), hMinusH298kJPerMol: round(hErr), points: rows.length },
+    fitError: { cpRelative: round(cpErr), sRelative: round(sErr), hMinusH298kJPerMol: round(hErr), hMinusH298Relative: round(hRel), points: rows.length },
+    ...(spec.id in FINDINGS ? { finding: FINDINGS[spec.id as keyof typeof FINDINGS] } : {}),
   };
 }
 
@@ -188,8 +218,8 @@ export function renderFits(): string {
       year: 1998,
       table: 'J. Phys. Chem. Ref. Data Monograph 9; one table per species (janafTable)',
     },
-    basis: 'published',
-    notes: 'Coefficients a1..a7, b1, b2 per interval, T in K, p° = 1 bar, h° including ΔfH°(298.15 K). fitError: largest deviation from every JANAF row between T.min and T.max.',
+    basis: 'computed',
+    notes: 'Coefficients a1..a7, b1, b2 per interval, T in K, p° = 1 bar, h° including ΔfH°(298.15 K) as tabulated by JANAF. fitError: largest deviation from every JANAF row between T.min and T.max (cp° and S° relative; H° − H°(298.15 K) in kJ/mol and relative where |H° − H°(298.15 K)| ≥ 1 kJ/mol). The uncertainty of each species is its fitError: the deviation from the table; the tables’ own uncertainty (stated per species in the printed JANAF tables, not in the text files used here) is not included.',
     species: FITTED_SPECIES.map(fitSpecies),
   };
   return `${JSON.stringify(doc, null, 1)}\n`;

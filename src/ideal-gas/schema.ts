@@ -24,6 +24,10 @@ export const sevenCoefficientSpeciesSchema = z
     high: z.array(finite).check(z.length(7)),
     M: z.optional(z.number().check(z.positive())),
     note: z.optional(z.string()),
+    /** Stated uncertainty: "estimate: …" for recalled sets. */
+    uncertainty: z.string().check(z.regex(/^(estimate|source|fit deviation): .{20,}/)),
+    /** ΔfH°(298.15 K) as the coefficients give it, and the compilation whose value it follows. */
+    formationEnthalpy: z.strictObject({ kJPerMol: finite, follows: z.string().check(z.minLength(10)) }),
   })
   .check(z.refine((r) => r.formula !== undefined || r.M !== undefined, { message: 'a species needs a formula or a molar mass M' }));
 
@@ -39,8 +43,9 @@ export const fittedSpeciesSchema = z.strictObject({
   T: interval,
   low: z.array(finite).check(z.length(9)),
   high: z.array(finite).check(z.length(9)),
-  fitError: z.strictObject({ cpRelative: z.number().check(z.nonnegative()), sRelative: z.number().check(z.nonnegative()), hMinusH298kJPerMol: z.number().check(z.nonnegative()), points: z.int().check(z.positive()) }),
+  fitError: z.strictObject({ cpRelative: z.number().check(z.nonnegative()), sRelative: z.number().check(z.nonnegative()), hMinusH298kJPerMol: z.number().check(z.nonnegative()), hMinusH298Relative: z.number().check(z.nonnegative()), points: z.int().check(z.positive()) }),
+  finding: z.optional(z.string().check(z.minLength(20))),
 });
 
 /** data/ideal-gas/janaf-fits.json. */
-export const fittedFileSchema = z.strictObject({ generated: z.string(), source, basis: z.literal('published'), notes: z.string(), species: z.array(fittedSpeciesSchema).check(z.minLength(1)) });
+export const fittedFileSchema = z.strictObject({ generated: z.string(), source, basis: z.literal('computed'), notes: z.string(), species: z.array(fittedSpeciesSchema).check(z.minLength(1)) });

@@ -1,16 +1,35 @@
 /**
  * The built-in ideal-gas species, compiled on first use. The run-time data are generated
  * (scripts/generate-species.ts) from two data files:
- * - data/ideal-gas/janaf-fits.json: N2, O2, Ar, H2, CO, CO2, H2O, CH4, NH3, fitted to NIST-JANAF in
+ * - data/ideal-gas/janaf-fits.json: every species with a NIST-JANAF table in the repository (N2, O2,
+ *   Ar, H2, CO, CO2, H2O, CH4, NH3, He, C2H4, C2H2, NO2, N2O, H2S, O3, OH, H, O, N), fitted to it in
  *   the NASA Glenn 9-constant form by scripts/fit-nasa-glenn.ts (fit errors recorded per species);
- * - data/ideal-gas/nasa7.json: the other species in the older NASA 7-coefficient form (recalled).
+ * - data/ideal-gas/nasa7.json: the species without a table here (Ne, C2H6, C3H8, n-C4H10, NO, SO2,
+ *   air) in the older NASA 7-coefficient form, recalled from memory and marked so.
  *
  * @module
  */
 import { UnknownNameError } from '../errors.js';
 import { closestNames, normaliseName } from '../lookup.js';
 import { NasaPolynomialModel } from './model.js';
-import { SOURCES, SPECIES } from './species.generated.js';
+import { CITATIONS, SOURCES, SPECIES } from './species.generated.js';
+
+/**
+ * Where a data set comes from, how it was obtained, and how far to trust it.
+ * `basis`: `'published'` (transcribed), `'computed'` (fitted or generated here from a published
+ * source), `'from memory'` (recalled, not transcribed). `uncertainty` starts with its kind:
+ * `fit deviation:` (largest deviation from the source), `source:` (the source's own statement) or
+ * `estimate:` (an honest estimate, no stated figure behind it).
+ */
+export interface DataSource {
+  readonly title: string;
+  readonly authors?: string;
+  readonly year?: number;
+  /** Table, equation or record within the source. */
+  readonly table?: string;
+  readonly basis: 'published' | 'computed' | 'from memory';
+  readonly uncertainty: string;
+}
 
 /** One built-in species, with its constants in the 9-constant form. */
 export interface SpeciesRecord {
@@ -27,12 +46,14 @@ export interface SpeciesRecord {
   readonly high: readonly number[];
   /** Molar mass, kg/mol. */
   readonly M: number;
-  /** Where the constants come from, and how they were checked. */
+  /** Where the constants come from, and how they were checked (one line). */
   readonly source: string;
+  /** The same, structured: title, authors, year, table, basis and stated uncertainty. */
+  readonly provenance: DataSource;
   readonly note?: string;
 }
 
-const RECORDS: readonly SpeciesRecord[] = SPECIES.map(([id, formula, names, min, mid, max, low, high, M, source, note]) => ({
+const RECORDS: readonly SpeciesRecord[] = SPECIES.map(([id, formula, names, min, mid, max, low, high, M, source, note, table, uncertainty]) => ({
   id,
   ...(formula === '' ? {} : { formula }),
   names,
@@ -41,6 +62,7 @@ const RECORDS: readonly SpeciesRecord[] = SPECIES.map(([id, formula, names, min,
   high,
   M,
   source: SOURCES[source]!,
+  provenance: { ...CITATIONS[source]!, table, uncertainty },
   ...(note === '' ? {} : { note }),
 }));
 

@@ -7,7 +7,7 @@
 import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { runBatch, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
 import { Status, type StatusCode } from '../core/status.js';
-import { enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange } from './model.js';
+import { densityAt, enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange } from './model.js';
 import type { IncompressibleSubstance } from './substance.js';
 
 /** Properties an incompressible batch can return (SI), u, h and s from the substance's reference state; `h` needs pressures. */
@@ -60,8 +60,8 @@ export function incompressibleBatch<P extends IncompressibleBatchProperty>(
       c: (pt) => heatCapacityAt(m, pt.T),
       cp: (pt) => heatCapacityAt(m, pt.T),
       cv: (pt) => heatCapacityAt(m, pt.T),
-      rho: () => 1 / m.v,
-      v: () => m.v,
+      rho: (pt) => densityAt(m, pt.T),
+      v: (pt) => 1 / densityAt(m, pt.T),
       u: (pt) => internalEnergyChange(m, Tref, pt.T),
       h: (pt) => enthalpyChange(m, Tref, pRef, pt.T, pt.p),
       s: (pt) => entropyChange(m, Tref, pt.T),

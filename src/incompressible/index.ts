@@ -3,7 +3,7 @@
  *
  * @packageDocumentation
  */
-import { lookupIncompressible } from './catalogue.js';
+import { lookupIncompressible, type CatalogueOptions } from './catalogue.js';
 import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 import { substanceFacade, type IncompressibleSubstance } from './substance.js';
 
@@ -11,8 +11,10 @@ export { incompressibleNames, incompressibleCatalogue } from './catalogue.js';
 export { incompressibleDefinitionSchema, sourceSchema, compileDefinition } from './schema.js';
 export type { IncompressibleDefinition } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
-export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange } from './model.js';
+export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
+/** Options of {@link incompressible}: `{ supercooled: true }`, or a solution's `{ massFraction }` / `{ volumeFraction }`. */
+export type IncompressibleOptions = CatalogueOptions;
 export type { IncompressibleSubstance, IncompressibleState, IncompressibleThermalState, IncompressibleStateResult } from './substance.js';
 export { incompressibleBatch, INCOMPRESSIBLE_BATCH_STATUS } from './batch.js';
 export type { IncompressibleBatchProperty } from './batch.js';
@@ -38,9 +40,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * copper.c('900 K');   // throws OutOfRangeError: T = 900 K is above the upper limit of the data for copper (800 K)
  * ```
  */
-export function incompressible(nameOrDefinition: string | IncompressibleDefinition): IncompressibleSubstance {
-  const { definition, model } = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition) : compileDefinition(nameOrDefinition);
-  return substanceFacade(definition, model);
+export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {
+  const compiled = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, options) : compileDefinition(nameOrDefinition);
+  return substanceFacade(compiled);
 }
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';

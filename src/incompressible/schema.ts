@@ -27,6 +27,13 @@ const tabulatedHeatCapacity = z.strictObject({
   temperatureUnit: z.string(),
 });
 
+const tabulatedDensity = z.strictObject({
+  /** Node temperatures (in `temperatureUnit`, strictly increasing) and ρ values (in `unit`); ρ is linear between nodes. */
+  table: z.strictObject({ T: z.array(z.number()).check(z.minLength(2)), rho: z.array(z.number()).check(z.minLength(2)) }),
+  unit: z.string(),
+  temperatureUnit: z.string(),
+});
+
 /** Where a definition's numbers come from. */
 export const sourceSchema = z.strictObject({
   title: text,
@@ -42,11 +49,33 @@ export const incompressibleDefinitionSchema = z.strictObject({
   state: z.enum(['liquid', 'solid']),
   /** Constant c as a quantity (`"4.18 kJ/(kg·K)"`), a polynomial, or a table. */
   c: z.union([quantityInput, polynomialHeatCapacity, tabulatedHeatCapacity]),
-  density: quantityInput,
-  T: z.strictObject({ min: quantityInput, max: quantityInput }),
+  /**
+   * Molar mass (`"63.546 g/mol"`), when c is given per mole (a `unit` such as `J/(mol·K)`, as
+   * thermochemical tables print it); c is divided by it.
+   */
+  molarMass: z.optional(quantityInput),
+  /** Constant ρ as a quantity (`"997 kg/m³"`) or a table ρ(T). */
+  density: z.union([quantityInput, tabulatedDensity]),
+  /**
+   * Valid temperatures. A liquid's range starts at its melting point; `supercooledMin`, when given,
+   * is the lowest temperature the data reach as supercooled liquid, used only on request
+   * (`incompressible(name, { supercooled: true })`).
+   */
+  T: z.strictObject({ min: quantityInput, max: quantityInput, supercooledMin: z.optional(quantityInput) }),
   source: z.optional(sourceSchema),
-  basis: z.optional(z.enum(['published', 'from memory', 'common practice', 'measured', 'user'])),
+  /** `computed`: generated here from a published formulation or table (with the generator named in the source). */
+  basis: z.optional(z.enum(['published', 'computed', 'from memory', 'common practice', 'measured', 'user'])),
+  /**
+   * The stated uncertainty of c and ρ, starting with its kind: `fit deviation:` (largest deviation of
+   * the entry from its source), `source:` (the source's own statement) or `estimate:` (an honest
+   * estimate with no stated figure behind it).
+   */
+  uncertainty: z.optional(z.string().check(z.regex(/^(fit deviation|source|estimate): /))),
   note: z.optional(z.string()),
+  /** Appended to out-of-range errors: where to go instead (`"for steam and compressed liquid use heatstate/water"`). */
+  rangeNote: z.optional(z.string()),
+  /** Something found while checking the data that a user should know (a disagreement between sources, a value left out). */
+  finding: z.optional(z.string()),
 });
 
 /** A substance definition, as accepted by `incompressible()`. */

@@ -11,7 +11,8 @@ import { CallUnits } from '../core/call-units.js';
 import { readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
 import { Quantity, type QuantityLike } from '../units/quantity.js';
-import { enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
+import type { CompiledSubstance, SubstanceSource } from './compile.js';
+import { densityAt, enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
 
 /** A state of an incompressible substance: temperature and (absolute) pressure. */
@@ -47,8 +48,10 @@ export interface IncompressibleSubstance {
   readonly name: string;
   /** `'liquid'` or `'solid'` (the definition's `state`). */
   readonly phase: 'liquid' | 'solid';
-  /** The definition it was built from, with its source. */
+  /** The definition it was built from. */
   readonly definition: IncompressibleDefinition;
+  /** Where the numbers come from, their basis and their stated uncertainty. */
+  readonly source: SubstanceSource;
   /** Valid range: the data's temperatures; any positive pressure. */
   readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> }; readonly p: { readonly min: Quantity<'pressure'>; readonly max: undefined } };
   /**
@@ -56,10 +59,12 @@ export interface IncompressibleSubstance {
    * of the range) at one standard atmosphere.
    */
   readonly reference: { readonly T: Quantity<'temperature'>; readonly p: Quantity<'pressure'> };
-  /** Density ρ (constant). */
+  /** Density ρ at the reference temperature (for liquids with ρ(T), `state({ T, p }).rho` or {@link IncompressibleSubstance.density} gives it at T). */
   readonly rho: Quantity<'density'>;
-  /** Specific volume v = 1/ρ (constant). */
+  /** Specific volume v = 1/ρ at the reference temperature. */
   readonly v: Quantity<'specificVolume'>;
+  /** ρ(T): constant for solids and for liquids given with one density, tabulated otherwise. */
+  density(T: QuantityLike<'temperature'>): Quantity<'density'>;
   /** The plain-number SI core. */
   readonly core: IncompressibleModel;
   /** Specific heat c(T) (= cp = cv). Throws {@link OutOfRangeError} outside the range. */
@@ -76,14 +81,15 @@ export interface IncompressibleSubstance {
   deltaU(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEnergy'>;
   /** Δs = ∫c/T dT from state 1 to state 2. */
   deltaS(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificHeat'>;
-  /** Δh = Δu + v·(p2 − p1) between two states `{ T, p }`. Pressures are absolute. */
+  /** Δh = Δu + v̄·(p2 − p1) between two states `{ T, p }`, v̄ the mean of v(T1) and v(T2). Pressures are absolute. */
   deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
 }
 
 /** The facade object of a compiled substance. */
-export function substanceFacade(definition: IncompressibleDefinition, model: IncompressibleModel): IncompressibleSubstance {
+export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubstance {
+  const { definition, model } = compiled;
   const name = definition.name;
-  const bounds: Bounds = { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}` };
+  const bounds: Bounds = { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}`, ...(definition.rangeNote === undefined ? {} : { hint: `; ${definition.rangeNote}` }) };
   const temperature = (input: QuantityLike<'temperature'>, parameter: string, units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
   /** T (and p, NaN when not given) of a state; `prefix` names its inputs. */
   const resolve = (state: unknown, prefix: string, needP: boolean): [number, number] => {
@@ -102,6 +108,7 @@ export function substanceFacade(definition: IncompressibleDefinition, model: Inc
     name,
     phase: definition.state,
     definition,
+    source: compiled.provenance,
     core: model,
     range: { T: { min: Quantity.fromSI(model.Tmin, 'temperature'), max: Quantity.fromSI(model.Tmax, 'temperature') }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
     reference: { T: Quantity.fromSI(Tref, 'temperature'), p: Quantity.fromSI(pRef, 'pressure') },
@@ -110,6 +117,7 @@ export function substanceFacade(definition: IncompressibleDefinition, model: Inc
     c,
     cp: c,
     cv: c,
+    density: (T) => resultQuantity(densityAt(model, temperature(T, 'T')), 'density', 'rho'),
     averageC(T1, T2) {
       const units = new CallUnits();
       const a = temperature(T1, 'T1', units);
@@ -125,8 +133,8 @@ export function substanceFacade(definition: IncompressibleDefinition, model: Inc
         c: resultQuantity(cT, 'specificHeat', 'c'),
         cp: resultQuantity(cT, 'specificHeat', 'cp'),
         cv: resultQuantity(cT, 'specificHeat', 'cv'),
-        rho: resultQuantity(1 / model.v, 'density', 'rho'),
-        v: resultQuantity(model.v, 'specificVolume', 'v'),
+        rho: resultQuantity(densityAt(model, T), 'density', 'rho'),
+        v: resultQuantity(1 / densityAt(model, T), 'specificVolume', 'v'),
         u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u'),
         h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h'),
         s: resultQuantity(entropyChange(model, Tref, T), 'specificHeat', 's'),

@@ -4,6 +4,7 @@ import { FITS_PATH, renderFits } from '../../scripts/fit-nasa-glenn.js';
 import { renderSpeciesModule, SPECIES_MODULE_PATH } from '../../scripts/generate-species.js';
 import { fittedFileSchema, sevenCoefficientFileSchema } from '../../src/ideal-gas/schema.js';
 import { idealGas, speciesNames, speciesRecords } from '../../src/ideal-gas/index.js';
+import { findSpecies } from '../../src/ideal-gas/species.js';
 
 const read = (name: string) => JSON.parse(readFileSync(new URL(`../../data/ideal-gas/${name}`, import.meta.url), 'utf8')) as unknown;
 
@@ -24,11 +25,34 @@ describe('ideal-gas species data', () => {
   it('src/ideal-gas/species.generated.ts is current (npm run species)', () => {
     expect(readFileSync(SPECIES_MODULE_PATH, 'utf8')).toBe(renderSpeciesModule());
   });
-  it('every fit stays within 0.15 % in cp and 0.01 % in S° of every JANAF row it was fitted to (NIST-JANAF, Chase 1998)', () => {
-    const fits = (read('janaf-fits.json') as { species: { id: string; fitError: { cpRelative: number; sRelative: number } }[] }).species;
+  it('every fit is within 0.1 % of its JANAF table in cp°, S° and H° − H°(298.15 K), or records a finding (NIST-JANAF, Chase 1998)', () => {
+    const fits = (read('janaf-fits.json') as { species: { id: string; finding?: string; fitError: { cpRelative: number; sRelative: number; hMinusH298Relative: number } }[] }).species;
+    // the findings and their figures: H2S S° at 200 K (table H-080 inconsistent with its own cp°), NH3 cp° near 5100 K
+    const excepted: Record<string, { cpRelative?: number; sRelative?: number }> = { H2S: { sRelative: 1.5e-3 }, NH3: { cpRelative: 1.4e-3 } };
     for (const f of fits) {
-      expect(f.fitError.cpRelative, f.id).toBeLessThan(1.5e-3);
-      expect(f.fitError.sRelative, f.id).toBeLessThan(1e-4);
+      const bound = excepted[f.id] ?? {};
+      expect(f.fitError.cpRelative, f.id).toBeLessThan(bound.cpRelative ?? 1e-3);
+      expect(f.fitError.sRelative, f.id).toBeLessThan(bound.sRelative ?? 1e-3);
+      expect(f.fitError.hMinusH298Relative, f.id).toBeLessThan(1e-3);
+      expect(f.finding !== undefined, f.id).toBe(f.id in excepted);
+    }
+  });
+  it('every species carries a structured source: title, basis and a stated uncertainty of a named kind', () => {
+    for (const r of speciesRecords()) {
+      expect(r.provenance.title.length, r.id).toBeGreaterThan(10);
+      expect(['published', 'computed', 'from memory'], r.id).toContain(r.provenance.basis);
+      expect(r.provenance.uncertainty, r.id).toMatch(/^(fit deviation|source|estimate): /);
+    }
+    expect(findSpecies('O3')!.provenance).toMatchObject({ basis: 'computed', table: 'NIST-JANAF table O-056' });
+    expect(findSpecies('C2H6')!.provenance.basis).toBe('from memory');
+  });
+  it('docs/guide/choosing-a-model.md tabulates every fit with the figures of janaf-fits.json', () => {
+    const guide = readFileSync(new URL('../../docs/guide/choosing-a-model.md', import.meta.url), 'utf8');
+    const pct = (x: number) => `${Number((x * 100).toPrecision(2))} %`;
+    const fits = (read('janaf-fits.json') as { species: { id: string; janafTable: string; fitError: { cpRelative: number; sRelative: number; hMinusH298Relative: number; hMinusH298kJPerMol: number } }[] }).species;
+    for (const f of fits) {
+      const e = f.fitError;
+      expect(guide, f.id).toContain(`| ${f.id} | ${f.janafTable} | ${pct(e.cpRelative)} | ${pct(e.sRelative)} | ${pct(e.hMinusH298Relative)} (${e.hMinusH298kJPerMol} kJ/mol) |`);
     }
   });
   it('holds every required species, each found by formula and by name', () => {

@@ -5,7 +5,9 @@
  */
 import { describe, expect, it } from 'vitest';
 import { gasConstant } from '../../src/chem/index.js';
-import { incompressible } from '../../src/incompressible/index.js';
+import { densityAt, incompressible } from '../../src/incompressible/index.js';
+import { lookupIncompressible } from '../../src/incompressible/catalogue.js';
+import { molarMass } from '../../src/chem/index.js';
 import { expectClose } from '../helpers/tolerance.js';
 
 describe('liquid water (common practice)', () => {
@@ -22,25 +24,33 @@ describe('liquid water (common practice)', () => {
   });
 });
 
-describe('solids and liquids near 300 K (handbook thermophysical property tables, from memory)', () => {
+describe('metals from NIST-JANAF against handbook values near 300 K (thermophysical property tables of solids, from memory; the data are JANAF, so this compares two sources)', () => {
   it.each([
-    ['copper', '300 K', 385, 8933],
-    ['aluminium', '300 K', 903, 2702],
-    ['stainless steel', '300 K', 477, 7900],
-    ['carbon steel', '300 K', 434, 7854],
-    ['lead', '300 K', 129, 11340],
-    ['mercury', '300 K', 139.5, 13529],
-    ['engine oil', '300 K', 1909, 884],
-    ['ethylene glycol', '300 K', 2415, 1114],
-    ['glass', '300 K', 750, 2500],
-    ['granite', '300 K', 775, 2630],
-  ] as const)('%s at %s: c = %d J/(kg·K), ρ = %d kg/m³', (name, T, c, rho) => {
-    const s = incompressible(name);
-    expectClose(s.c(T).si, c, { rel: 0.01 });
-    expectClose(s.rho.si, rho, { rel: 0.01 });
+    ['copper', '300 K', 385],
+    ['aluminium', '300 K', 903],
+    ['lead', '300 K', 129],
+    ['mercury', '300 K', 139.5],
+    ['iron', '300 K', 447],
+  ] as const)('%s at %s: c = %d J/(kg·K) within 1 %', (name, T, c) => {
+    expectClose(incompressible(name).c(T).si, c, { rel: 0.01 });
   });
-  it('ice: cp ≈ 2.1 kJ/(kg·K) near 0 °C (IAPWS R10-06, from memory)', () => {
-    expectClose(incompressible('ice').c('0 °C').in('kJ/(kg·K)'), 2.097, { rel: 0.01 });
+  it('ice: cp = 2096.78 J/(kg·K) at the triple point, 273.16 K (IAPWS R10-06 verification table, from memory), checked at 273.15 K', () => {
+    expectClose(incompressible('ice').c('273.15 K').si, 2096.78, { rel: 0.01 });
+  });
+});
+
+describe('organic liquids against a second handbook table (CRC Handbook of Chemistry and Physics, from memory): molar cp at 25 °C from the standard thermodynamic properties table, density at 20 °C from the physical constants of organic compounds', () => {
+  it.each([
+    // name, formula, cp J/(mol·K) at 25 °C, ρ g/cm³ at 20 °C
+    ['ethanol', 'C2H6O', 112.3, 0.7893],
+    ['methanol', 'CH4O', 81.1, 0.7914],
+    ['ethylene glycol', 'C2H6O2', 149.8, 1.1135],
+    ['propylene glycol', 'C3H8O2', 190.8, 1.0361],
+    ['glycerin', 'C3H8O3', 218.9, 1.2613],
+  ] as const)('%s (%s): cp = %d J/(mol·K) within 3 %, ρ(20 °C) = %d g/cm³ within 0.7 %', (name, formula, cpMolar, rho) => {
+    const s = incompressible(name);
+    expectClose(s.c('25 °C').si * molarMass(formula).si, cpMolar, { rel: 0.03 });
+    expectClose(densityAt(lookupIncompressible(name).model, 293.15) / 1000, rho, { rel: 0.007 });
   });
 });
 
@@ -78,23 +88,12 @@ describe('ideal-gas air (common practice)', () => {
 describe('ideal gases at 298.15 K without a JANAF table here: ΔfH°, S°, cp° (handbook thermochemical tables, from memory)', () => {
   it.each([
     // species, ΔfH° kJ/mol, S° J/(mol·K), cp° J/(mol·K)
-    ['He', 0, 126.15, 20.786],
     ['Ne', 0, 146.33, 20.786],
     ['C2H6', -83.8, 229.2, 52.5],
     ['C3H8', -104.7, 270.3, 73.6],
     ['n-C4H10', -125.8, 310.0, 98.5],
-    ['C2H4', 52.4, 219.3, 42.9],
-    ['C2H2', 227.4, 200.9, 44.0],
     ['NO', 91.3, 210.76, 29.86],
-    ['NO2', 33.9, 240.1, 37.0],
-    ['N2O', 81.6, 220.0, 38.6],
     ['SO2', -296.8, 248.2, 39.9],
-    ['H2S', -20.6, 205.8, 34.2],
-    ['O3', 142.7, 238.9, 39.2],
-    ['OH', 37.3, 183.7, 29.9],
-    ['H', 218.0, 114.72, 20.786],
-    ['O', 249.2, 161.06, 21.91],
-    ['N', 472.7, 153.30, 20.786],
   ] as const)('%s: ΔfH° = %d kJ/mol, S° = %d J/(mol·K), cp° = %d J/(mol·K)', (name, fH, S, cp) => {
     const g = idealGas(name, { basis: 'molar' });
     expectClose(g.h('298.15 K').in('kJ/mol'), fH, { abs: 1.5 });

@@ -6,7 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Status } from '../../src/core/status.js';
-import { stateFromPT, WaterState } from '../../src/water/if97/flash.js';
+import { stateFromPT, WaterState } from '../../src/water/if97/index.js';
 import { WaterProperties } from '../../src/water/if97/properties.js';
 import { region1 } from '../../src/water/if97/region1.js';
 import { region2 } from '../../src/water/if97/region2.js';

@@ -23,8 +23,9 @@
  */
 import { Status, type StatusCode } from '../../core/status.js';
 import { b23Pressure } from '../if97/b23.js';
-import { P_MAX, P_MAX_5, R_IF97, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from '../if97/constants.js';
-import { region3Density } from '../if97/flash.js';
+import { P_MAX, P_MAX_5, R_IF97, T_13, T_B23_MAX, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from '../if97/constants.js';
+import { SolverContext } from '../if97/context.js';
+import { region3DensityAt } from '../if97/region3-density.js';
 import { WaterProperties } from '../if97/properties.js';
 import { region1 } from '../if97/region1.js';
 import { region2 } from '../if97/region2.js';
@@ -33,8 +34,6 @@ import { saturationPressure } from '../if97/region4.js';
 import { region5 } from '../if97/region5.js';
 import { CriticalEnhancementInputs, T_REFERENCE } from './critical.js';
 
-/** Upper limit of region 2 in temperature's B23 band, K (IAPWS R7-97 Section 4). */
-const T_B23_MAX = 863.15;
 /** Highest temperature for which this helper finds states: the transport releases end at 1173.15 K (IF97 region 5 goes on to 2273.15 K). */
 export const IF97_INPUTS_T_MAX = Math.min(T_MAX_5, 1173.15);
 
@@ -50,6 +49,8 @@ export class If97InputsWork {
   readonly pressure = new Float64Array(2);
   /** IF97 region of `state` (1, 2, 3 or 5), 0 before a successful call. */
   region = 0;
+  /** The IF97 solver context of the saturated-density searches. */
+  readonly solver = new SolverContext();
 }
 
 /** Density of region 2 at T_R and 100 MPa, kg/m³ (283.7): the densest state IF97 has at T_R. */
@@ -146,9 +147,10 @@ export function if97StateAtDensity(T: number, rho: number, work: If97InputsWork)
       region = 3;
       if (T < T_CRITICAL) {
         const ps = saturationPressure(T);
-        const rl = region3Density(ps, T, 1);
-        const rv = region3Density(ps, T, 2);
-        if (Number.isNaN(rl) || Number.isNaN(rv)) return Status.noConvergence;
+        if (region3DensityAt(ps, T, 1, work.solver) !== Status.ok) return Status.noConvergence;
+        const rl = work.solver.rho;
+        if (region3DensityAt(ps, T, 2, work.solver) !== Status.ok) return Status.noConvergence;
+        const rv = work.solver.rho;
         if (rho > rv && rho < rl) return Status.outOfRange;
       }
       region3(rho, T, out);
