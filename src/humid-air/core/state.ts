@@ -49,7 +49,9 @@ export const T_MAX = 473.15;
 /** Highest total pressure, Pa (1 MPa). */
 export const P_MAX = 1e6;
 /** Solves stop when the temperature bracket is this narrow, K. */
-const T_TOLERANCE = 1e-11;
+const T_TOLERANCE = 1e-13;
+/** A solved dry-bulb may fall this far (relative) below Twb or Tdp by rounding and count as equal. */
+const ROUNDING = 1e-12;
 /** A humidity ratio may exceed Ws by this relative amount (rounding of round trips) and still count as saturated. */
 const SATURATION_SLACK = 1e-10;
 
@@ -187,7 +189,12 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   const f = enhancementFactor(model, p, T);
   const psat = f * pws;
   const Ws = psat < p ? humidityRatioFromVaporPressure(p, psat) : NO_SATURATION;
-  if (Ws !== NO_SATURATION && W > Ws * (1 + SATURATION_SLACK)) return fail(out, Status.outOfRange, REASON.supersaturated);
+  if (Ws !== NO_SATURATION && W > Ws) {
+    // an h carries W only to about ε·|h|/h_g: at −100 °C, W ~ 1e-8, that is 1e-9 of W
+    const slack = Ws * SATURATION_SLACK + (8 * 2.220446049250313e-16 * (Math.abs(CP_DRY_AIR * (T - 273.15)) + W * H_VAPOR_0)) / H_VAPOR_0;
+    if (W > Ws + slack) return fail(out, Status.outOfRange, REASON.supersaturated);
+    W = Ws; // saturated within rounding
+  }
   let status: StatusCode = Status.ok;
   let reason: number = REASON.none;
   const pw = vaporPressureFromHumidityRatio(p, W);
@@ -197,7 +204,8 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   out.pw = pw;
   out.pws = pws;
   out.f = f;
-  out.RH = pw / psat;
+  const RH = pw / psat;
+  out.RH = RH > 1 ? 1 : RH; // W ≤ Ws was checked: above 1 only by rounding
   if (Ws === NO_SATURATION) {
     out.Ws = NaN;
     out.mu = NaN;
@@ -206,6 +214,7 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   } else {
     out.Ws = Ws;
     out.mu = W / Ws;
+    if (out.mu > 1) out.mu = 1;
   }
   out.h = moistAirEnthalpy(T, W);
   out.v = moistAirVolume(p, T, W);
@@ -382,7 +391,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       const flo = residual(RESIDUAL.wetBulbAtRH, Twb, a, Twb, 0, p, model);
       const fhi = residual(RESIDUAL.wetBulbAtRH, hi, a, Twb, 0, p, model);
       if (fhi > 0) return fail(out, Status.outOfRange, REASON.temperature);
-      T = brent(RESIDUAL.wetBulbAtRH, Twb, hi, flo, fhi, a, Twb, 0, p, model, T_TOLERANCE);
+      // flo = Ws*·(1 − RH) ≥ 0 up to rounding: at RH within rounding of 1 the root is t* itself
+      T = flo <= 0 ? Twb : brent(RESIDUAL.wetBulbAtRH, Twb, hi, flo, fhi, a, Twb, 0, p, model, T_TOLERANCE);
       if (T < 0) return fail(out, Status.noConvergence, REASON.none);
       W = humidityRatioAtRH(p, T, a, model);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
@@ -402,7 +412,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
       T = temperatureFromWetBulbAndW(p, Twb, W, model);
       if (T === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
-      if (T < Twb) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb) T = Twb;
       break;
     }
     case PAIR.h_Tdp:
@@ -411,7 +422,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       W = humidityRatioAtRH(p, Tdp, 1, model);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       T = temperatureFromEnthalpy(a, W);
-      if (T < Tdp) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Tdp * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Tdp) T = Tdp;
       break;
     case PAIR.h_Twb: {
       Twb = b;
@@ -424,7 +436,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       W = (a - K) / hw;
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.noState);
       T = temperatureFromEnthalpy(a, W);
-      if (T < Twb) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb) T = Twb;
       break;
     }
     case PAIR.Tdp_Twb: {
@@ -437,7 +450,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       T = Tdp === Twb ? Twb : temperatureFromWetBulbAndW(p, Twb, W, model);
       if (T === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
-      if (T < Twb) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
+      if (T < Twb) T = Twb;
       break;
     }
     default:
