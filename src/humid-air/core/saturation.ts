@@ -22,6 +22,7 @@ const TT = sublimation.Tt;
 const PT = sublimation.pt;
 const [A1, A2, A3] = sublimation.a as [number, number, number];
 const [B1, B2, B3] = sublimation.b as [number, number, number];
+const LN_PT = Math.log(PT);
 
 /** Temperature below which saturation is over ice, K (0 °C; IF97's saturation line starts here). */
 export const T_ICE = 273.15;
@@ -38,13 +39,16 @@ export const P_WATER_AT_ICE = saturationPressure(T_ICE);
  */
 export function sublimationPressure(T: number): number {
   const th = T / TT;
-  return PT * Math.exp((A1 * th ** B1 + A2 * th ** B2 + A3 * th ** B3) / th);
+  // θ^b as exp(b ln θ): one logarithm for the three powers
+  const L = Math.log(th);
+  return PT * Math.exp((A1 * Math.exp(B1 * L) + A2 * Math.exp(B2 * L) + A3 * Math.exp(B3 * L)) / th);
 }
 
 /** d ln p_subl / dT in 1/K (derivative of Eq. 6). */
 export function sublimationLogSlope(T: number): number {
   const th = T / TT;
-  return (A1 * (B1 - 1) * th ** (B1 - 2) + A2 * (B2 - 1) * th ** (B2 - 2) + A3 * (B3 - 1) * th ** (B3 - 2)) / TT;
+  const L = Math.log(th);
+  return (A1 * (B1 - 1) * Math.exp((B1 - 2) * L) + A2 * (B2 - 1) * Math.exp((B2 - 2) * L) + A3 * (B3 - 1) * Math.exp((B3 - 2) * L)) / TT;
 }
 
 /** Sublimation pressure at 273.15 K, Pa: the top of the ice branch. */
@@ -119,11 +123,16 @@ export function saturationTemperatureAt(pw: number, p: number, model: number, Tl
   if (pw / fWater >= P_WATER_AT_ICE) {
     T = saturationTemperature(pw / fWater);
     if (model !== MODEL.ideal) {
+      // a contraction by about 4e-4 per pass (f varies slowly with T): once a step is below
+      // 1e-9 K, one more pass leaves an error below 1e-12 K
       for (let i = 0; i < 20; i++) {
         const next = saturationTemperature(pw / enhancementFactor(model, p, T));
-        const done = Math.abs(next - T) <= 1e-13 * T;
+        const step = Math.abs(next - T);
         T = next;
-        if (done) break;
+        if (step <= 1e-9) {
+          T = saturationTemperature(pw / enhancementFactor(model, p, T));
+          break;
+        }
       }
     }
   } else if (pw / fIce < P_ICE_AT_WATER) {
@@ -134,8 +143,15 @@ export function saturationTemperatureAt(pw: number, p: number, model: number, Tl
     if (T > T_ICE) T = T_ICE - 1e-6;
     let ok = false;
     for (let i = 0; i < 60; i++) {
-      const g = Math.log(sublimationPressure(T) * enhancementFactor(model, p, T)) - lnTarget;
-      let next = T - g / sublimationLogSlope(T);
+      const th = T / TT;
+      const L = Math.log(th);
+      const e1 = A1 * Math.exp(B1 * L);
+      const e2 = A2 * Math.exp(B2 * L);
+      const e3 = A3 * Math.exp(B3 * L);
+      // ln p_subl = ln pt + Σ a_i θ^(b_i − 1); its slope Σ a_i (b_i − 1) θ^(b_i − 2)/Tt
+      const g = LN_PT + (e1 + e2 + e3) / th + (model === MODEL.ideal ? 0 : Math.log(enhancementFactor(model, p, T))) - lnTarget;
+      const slope = (e1 * (B1 - 1) + e2 * (B2 - 1) + e3 * (B3 - 1)) / (th * th * TT);
+      let next = T - g / slope;
       if (next >= T_ICE) next = 0.5 * (T + T_ICE);
       if (next < 0.5 * T) next = 0.5 * T;
       const step = Math.abs(next - T);
