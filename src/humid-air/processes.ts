@@ -190,7 +190,7 @@ export type CoolingCoilInput =
  * @example
  * ```ts
  * const coil = humidAir.coolingCoil({ inlet: mixed.leaving, flow: '4 kg/s', ADP: '10 °C', bypassFactor: 0.15 });
- * coil.heat.in('kW');   //=> −74.7 (negative: heat removed; the coil duty is 74.7 kW)
+ * coil.heat.in('kW');   //=> -81.98 (negative: heat removed; the coil duty is 82.0 kW)
  * ```
  */
 export function coolingCoil(input: CoolingCoilInput): ProcessResult {

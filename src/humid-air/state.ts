@@ -278,9 +278,9 @@ export function toResult(st: HumidAirState, from: HumidAirResult['pressureFrom']
  * s.W;                      //=> 0.0133735 (kg/kg dry air)
  * s.Twb?.in('°C');          //=> 21.997
  * s.pressureFrom;           //=> 'default 101.325 kPa'
- * humidAir.state({ T: '86 °F', RH: '50 %', altitude: '1500 m' }).W;   //=> 0.0161...
+ * humidAir.state({ T: '86 °F', RH: '50 %', altitude: '1500 m' }).W;   //=> 0.016084
  * humidAir.state({ T: '60 °C', RH: 0.2 });
- * // throws OutOfRangeError: T = 333.15 K is above the upper limit of humid air, enhanced model … (323.15 K)
+ * // throws OutOfRangeError: T = 333.15 K is above the upper limit of humid air, enhanced model (…) (323.15 K)
  * ```
  */
 export function humidAirState(input: HumidAirStateInput): HumidAirResult {
@@ -316,7 +316,7 @@ export function fromGrainsPerPound(grainsPerPound: number): number {
  * Standard-atmosphere pressure at an altitude: ASHRAE Fundamentals ch. 1, Eq. 3, −5000 m … 11 000 m.
  * @example
  * ```ts
- * pressureAtAltitude('1000 m').in('kPa');   //=> 89.8746 (Table 1: 89.875)
+ * pressureAtAltitude('1000 m').in('kPa');   //=> 89.8745 (Table 1: 89.875)
  * ```
  */
 export function pressureAtAltitude(altitude: QuantityLike<'length'>): Quantity<'pressure'> {

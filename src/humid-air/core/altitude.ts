@@ -22,7 +22,7 @@ const N = ashrae.altitude.exponent;
  * (or for a non-finite Z); see {@link altitudePressureStatus} for the status.
  * @example
  * ```ts
- * standardAtmospherePressure(1000);   //=> 89874.6 (Pa; ASHRAE Table 1 prints 89.875 kPa)
+ * standardAtmospherePressure(1000);   //=> 89874.5 (Pa; ASHRAE Table 1 prints 89.875 kPa)
  * ```
  */
 export function standardAtmospherePressure(Z: number): number {

@@ -12,7 +12,7 @@
  * Loads (W), positive when the air gains, negative when it loses:
  * - `total` = ṁa (h2 − h1), the change of the air's enthalpy;
  * - `sensible` = ṁa (h(T2, W1) − h(T1, W1)) = ṁa (1006 + 1860 W1)(T2 − T1);
- * - `latent` = `total` − `sensible` = ṁa (W2 − W1)(2501 kJ/kg + 1.86 kJ/(kg·K)·t2);
+ * - `latent` = ṁa (W2 − W1)(2501 kJ/kg + 1.86 kJ/(kg·K)·t2) = `total` − `sensible`;
  * - `heat` = Q = `total` − ṁw hw, the heat the apparatus adds to the streams (a coil's duty is −heat);
  * - `sensibleHeatRatio` = sensible/total (NaN with Status.undefinedProperty when total = 0).
  *
@@ -97,7 +97,8 @@ function liquidWater(p: number, T: number, loads: ProcessLoads): StatusCode {
 function finishLoads(inlet: HumidAirState, mda: number, outlet: HumidAirState, loads: ProcessLoads, stateStatus: StatusCode): StatusCode {
   loads.total = mda * (outlet.h - inlet.h);
   loads.sensible = mda * (CP_DRY_AIR + CP_VAPOR * inlet.W) * (outlet.T - inlet.T);
-  loads.latent = loads.total - loads.sensible;
+  // h2 − h1 = (1006 + 1860 W1)(t2 − t1) + (W2 − W1)(2501e3 + 1860 t2) exactly: the second term is the latent part
+  loads.latent = mda * (outlet.W - inlet.W) * (H_VAPOR_0 + CP_VAPOR * (outlet.T - 273.15));
   loads.waterFlow = mda * (outlet.W - inlet.W);
   loads.heat = loads.total - (loads.waterFlow === 0 ? 0 : loads.waterFlow * loads.waterEnthalpy);
   if (loads.total === 0) {
