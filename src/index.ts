@@ -15,6 +15,8 @@ export * from './units/index.js';
 export * from './incompressible/index.js';
 export * from './ideal-gas/index.js';
 export * from './water/index.js';
+export * from './humid-air/index.js';
+export * from './fluids/index.js';
 export * from './tables/index.js';
 export { molarMass, gasConstant, parseFormula, atomicWeight, knownElements } from './chem/index.js';
 export { MOLAR_GAS_CONSTANT, AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K, STANDARD_ATMOSPHERE_PA, STANDARD_GRAVITY, STANDARD_STATE_PRESSURE_PA, REFERENCE_TEMPERATURE_K } from './chem/constants.js';

@@ -45,7 +45,7 @@ export interface FluidStateResult {
 }
 
 /** Properties of one saturated phase. */
-export interface SaturatedPhase {
+export interface FluidSaturatedPhase {
   readonly rho: Quantity<'density'>;
   readonly v: Quantity<'specificVolume'>;
   readonly u: Quantity<'specificEnergy'>;
@@ -57,8 +57,8 @@ export interface SaturatedPhase {
 export interface FluidSaturationResult {
   readonly T: Quantity<'temperature'>;
   readonly p: Quantity<'pressure'>;
-  readonly liquid: SaturatedPhase;
-  readonly vapor: SaturatedPhase;
+  readonly liquid: FluidSaturatedPhase;
+  readonly vapor: FluidSaturatedPhase;
   /** h'' − h', the enthalpy of vaporisation. */
   readonly hfg: Quantity<'specificEnergy'>;
   readonly sfg: Quantity<'specificHeat'>;
@@ -280,7 +280,7 @@ class CatalogueFluid implements Fluid {
       what = `p = ${fmt(p)} Pa`;
     } else throw new InvalidInputError('input.invalid', 'at', `${this.name}.saturation takes { T } or { p }`);
     if (st !== Status.ok && st !== Status.undefinedProperty) this.fail(st, what);
-    const phase = (x: FluidState): SaturatedPhase => ({
+    const phase = (x: FluidState): FluidSaturatedPhase => ({
       rho: Quantity.fromSI(x.rho, 'density'),
       v: Quantity.fromSI(x.v, 'specificVolume'),
       u: Quantity.fromSI(x.u, 'specificEnergy'),

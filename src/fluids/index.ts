@@ -1,12 +1,17 @@
 /**
- * Real fluids on reference equations of state in the Helmholtz energy: the facade `fluid(name)`
- * and the SI core (model, context, properties at (T, ρ), saturation, flashes).
+ * `heatstate/fluids`: real fluids from reference equations of state in the Helmholtz energy, starting
+ * with water by IAPWS-95. The facade is {@link fluid}; the SI core (model, context, properties at
+ * (T, ρ), saturation, flashes) is the low-level entry `heatstate/fluids/core`.
  *
- * @module
+ * Results are engineering estimates: for pressure equipment, refrigerating systems and steam, defer
+ * to the applicable codes and to licensed professionals.
+ *
+ * @packageDocumentation
  */
-export { fluid, fluidNames, type Fluid, type FluidPair, type FluidPhase, type FluidSaturationResult, type FluidStateResult, type SaturatedPhase } from './fluid.js';
-export { FLUID_PHASE, FluidContext, FluidModel, FluidState, propertiesAt, type IdealKernel, type ResidualKernel } from './model.js';
-export { saturationAtP, saturationAtT } from './saturation.js';
-export { stateFromHS, stateFromPH, stateFromPS, stateFromPT, stateFromPX, stateFromTRho, stateFromTV, stateFromTX } from './flash.js';
-export { fluidModel } from './catalogue.js';
-export type { FluidDefinition, FluidSource } from './definition.js';
+export { fluid, fluidNames, type Fluid, type FluidPair, type FluidPhase, type FluidSaturationResult, type FluidStateResult, type FluidSaturatedPhase } from './fluid.js';
+export type { FluidSource } from './definition.js';
+export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, UnknownNameError, ResultError } from '../errors.js';
+export { Status } from '../core/status.js';
+export type { StatusCode } from '../core/status.js';
+export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
+export type { QuantityLike } from '../units/quantity.js';

@@ -7,7 +7,8 @@
  * enhancement factor. Results are engineering estimates: defer to local codes and licensed
  * professionals for design decisions.
  *
- * The documented facade is {@link humidAir}. The plain-number SI core is exported for hot loops.
+ * The documented facade is {@link humidAir}. The plain-number SI core is the low-level entry
+ * `heatstate/humid-air/core`.
  *
  * @packageDocumentation
  */
@@ -29,43 +30,11 @@ export type { AirStream, ProcessResult, SensibleInput, CoolingCoilInput, SteamHu
 export { humidAirBatch, HUMID_AIR_BATCH_STATUS } from './batch.js';
 export type { HumidAirBatchProperty, HumidAirBatchInputs, HumidAirBatchResult } from './batch.js';
 
-// the SI core
-export { HumidAirState, humidAirState as humidAirStateSI, PAIR, REASON, T_MIN, T_MAX, P_MAX, saturationHumidityRatioAt } from './core/state.js';
-export {
-  MODEL,
-  waterSaturationPressure,
-  sublimationPressure,
-  enhancementFactor,
-  enhancementInRange,
-  saturationTemperatureAt,
-  ENHANCED_T_MIN,
-  ENHANCED_T_MAX,
-  ENHANCED_P_MIN,
-  ENHANCED_P_MAX,
-} from './core/saturation.js';
-export {
-  humidityRatioFromVaporPressure,
-  vaporPressureFromHumidityRatio,
-  moistAirEnthalpy,
-  moistAirVolume,
-  temperatureFromEnthalpy,
-  humidityRatioFromWetBulb,
-  saturatorWaterEnthalpy,
-} from './core/relations.js';
-export {
-  ProcessLoads,
-  PROCESS_REASON,
-  TARGET,
-  mixStreams,
-  sensibleToTemperature,
-  sensibleByHeat,
-  coolingCoilBypass,
-  coolingCoilToState,
-  steamHumidifier as steamHumidifierSI,
-  evaporativeHumidifier as evaporativeHumidifierSI,
-} from './core/processes.js';
-export { standardAtmospherePressure, altitudePressureStatus, ALTITUDE_MIN, ALTITUDE_MAX } from './core/altitude.js';
-export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError } from '../errors.js';
+export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, ResultError } from '../errors.js';
+export { Status } from '../core/status.js';
+export type { StatusCode } from '../core/status.js';
+export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
+export type { QuantityLike } from '../units/quantity.js';
 
 /**
  * Psychrometrics: `humidAir.state({ T: '30 °C', RH: 0.5 })`, processes (`mix`, `heat`,

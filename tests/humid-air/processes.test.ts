@@ -4,7 +4,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { humidAir, HumidAirState, humidAirStateSI, mixStreams, MODEL, PAIR } from '../../src/humid-air/index.js';
+import { humidAir } from '../../src/humid-air/index.js';
+import { HumidAirState, humidAirStateSI, mixStreams, MODEL, PAIR } from '../../src/humid-air/core/index.js';
 import { water } from '../../src/water/index.js';
 import { Status } from '../../src/core/status.js';
 import { quantity } from '../../src/units/quantity.js';

@@ -4,22 +4,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  HumidAirState,
-  humidAir,
-  humidAirBatch,
-  humidAirStateSI,
-  InvalidInputError,
-  MODEL,
-  OutOfRangeError,
-  PAIR,
-  REASON,
-  fromGrainsPerPound,
-  fromGramsPerKilogram,
-  toGramsPerKilogram,
-  moistAirEnthalpy,
-  saturatorWaterEnthalpy,
-} from '../../src/humid-air/index.js';
+import { humidAir, humidAirBatch, InvalidInputError, OutOfRangeError, fromGrainsPerPound, fromGramsPerKilogram, toGramsPerKilogram } from '../../src/humid-air/index.js';
+import { HumidAirState, humidAirStateSI, MODEL, PAIR, REASON, moistAirEnthalpy, saturatorWaterEnthalpy } from '../../src/humid-air/core/index.js';
 import { Status } from '../../src/core/status.js';
 import { quantity } from '../../src/units/quantity.js';
 import { expectClose } from '../helpers/tolerance.js';

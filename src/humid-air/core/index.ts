@@ -1,0 +1,44 @@
+/**
+ * `heatstate/humid-air/core`: the plain-number SI core of the humid-air model (K, Pa, kg/kg,
+ * J/kg dry air), on the library's model contract: caller-owned output objects and a status code
+ * per call, no throwing. The documented facade is `heatstate/humid-air`.
+ *
+ * @packageDocumentation
+ */
+export { Status, statusName } from '../../core/status.js';
+export type { StatusCode } from '../../core/status.js';
+export { HumidAirState, humidAirState as humidAirStateSI, PAIR, REASON, T_MIN, T_MAX, P_MAX, saturationHumidityRatioAt } from './state.js';
+export {
+  MODEL,
+  waterSaturationPressure,
+  sublimationPressure,
+  enhancementFactor,
+  enhancementInRange,
+  saturationTemperatureAt,
+  ENHANCED_T_MIN,
+  ENHANCED_T_MAX,
+  ENHANCED_P_MIN,
+  ENHANCED_P_MAX,
+} from './saturation.js';
+export {
+  humidityRatioFromVaporPressure,
+  vaporPressureFromHumidityRatio,
+  moistAirEnthalpy,
+  moistAirVolume,
+  temperatureFromEnthalpy,
+  humidityRatioFromWetBulb,
+  saturatorWaterEnthalpy,
+} from './relations.js';
+export {
+  ProcessLoads,
+  PROCESS_REASON,
+  TARGET,
+  mixStreams,
+  sensibleToTemperature,
+  sensibleByHeat,
+  coolingCoilBypass,
+  coolingCoilToState,
+  steamHumidifier as steamHumidifierSI,
+  evaporativeHumidifier as evaporativeHumidifierSI,
+} from './processes.js';
+export { standardAtmospherePressure, altitudePressureStatus, ALTITUDE_MIN, ALTITUDE_MAX } from './altitude.js';
