@@ -20,9 +20,8 @@ import { stateFromPS } from './if97/ps.js';
 import { stateFromPT } from './if97/pt.js';
 import { WaterProperties } from './if97/properties.js';
 import { stateFromPX, stateFromTX } from './if97/quality.js';
-import { saturationTemperature } from './if97/region4.js';
 import { evaluateForward } from './if97/regions.js';
-import { P_SAT_MIN, saturationAtP, saturationAtT } from './if97/saturation.js';
+import { P_SAT_MIN, saturationAtP, saturationAtT, saturationTemperatureOnLine } from './if97/saturation.js';
 import { stateFromTV } from './if97/tv.js';
 import { PHASE, WaterState } from './if97/water-state.js';
 
@@ -123,7 +122,7 @@ const P_SATURATION: Bounds = { min: P_SAT_MIN, max: P_CRITICAL, scope: 'the satu
 function toResult(st: WaterState): WaterStateResult {
   const two = st.phase === PHASE.twoPhase;
   const hasSat = st.p >= P_SAT_MIN && st.p <= P_CRITICAL;
-  const Tsat = two ? st.T : hasSat ? Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(st.p))) : NaN;
+  const Tsat = two ? st.T : hasSat ? saturationTemperatureOnLine(st.p) : NaN;
   const vapor = st.phase === PHASE.vapor && hasSat;
   const liquid = st.phase === PHASE.liquid && hasSat;
   return {

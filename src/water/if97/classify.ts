@@ -6,7 +6,7 @@
  */
 import { Status, type StatusCode } from '../../core/status.js';
 import { b23Pressure } from './b23.js';
-import { P_CRITICAL, P_MAX, P_MAX_5, T_13, T_B23_MAX, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
+import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_B23_MAX, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
 import { saturationPressure } from './region4.js';
 import { PHASE, type WaterState } from './water-state.js';
 
@@ -28,16 +28,21 @@ export function regionOfPT(p: number, T: number): number {
 }
 
 /**
- * Phase of a single-phase state: supercritical above both critical values, otherwise liquid or vapour by the saturation pressure.
+ * Phase of a single-phase state: supercritical above both critical values; otherwise liquid in
+ * region 1 and vapour in regions 2 and 5; in region 3 below T_c by the side of the dome the state lies
+ * on, that is by its density against ρc when `rho` is given (single-phase region 3 states lie outside
+ * the dome, whose liquid side is denser than ρc and vapour side lighter): on the saturation line a
+ * pressure comparison flips by rounding, the density does not.
  * @example
  * ```ts
  * phaseOf(1e6, 300, 1);   //=> 0 (PHASE.liquid)
  * ```
  */
-export function phaseOf(p: number, T: number, region: number): number {
+export function phaseOf(p: number, T: number, region: number, rho = NaN): number {
   if (T >= T_CRITICAL) return p >= P_CRITICAL ? PHASE.supercritical : PHASE.vapor;
   if (region === 1) return PHASE.liquid;
   if (region === 2 || region === 5) return PHASE.vapor;
+  if (rho === rho) return rho >= RHO_CRITICAL ? PHASE.liquid : PHASE.vapor;
   return p >= saturationPressure(T) ? PHASE.liquid : PHASE.vapor;
 }
 
@@ -45,6 +50,6 @@ export function phaseOf(p: number, T: number, region: number): number {
 export function finishSinglePhase(out: WaterState, region: number): StatusCode {
   out.region = region;
   out.x = NaN;
-  out.phase = phaseOf(out.p, out.T, region);
+  out.phase = phaseOf(out.p, out.T, region, out.rho);
   return Status.ok;
 }

@@ -48,3 +48,15 @@ export const RHO_SEARCH_MIN_3 = 5;
  * (above 200 MPa on every isotherm of region 3) and is not valid beyond.
  */
 export const RHO_SEARCH_MAX_3 = 800;
+/**
+ * Width of the near-critical band of the saturation line, K: within 1e-4 K of T_c the region 3
+ * isotherms no longer cross p_s(T) of Eq. 30 twice (IF97's region 3 and region 4 equations meet the
+ * critical point within their consistency tolerance, not exactly: region 3 gives p(ρc, Tc) =
+ * 22.063 999 999 95 MPa), so the saturated densities are scaled toward ρc from the band's edge
+ * (see saturation.ts).
+ */
+export const T_NEAR_CRITICAL_BAND = 1e-4;
+/** Critical exponent β of the coexistence curve, ρ′ − ρ″ ∝ (Tc − T)^β (common practice, β ≈ 0.325). */
+export const CRITICAL_EXPONENT_BETA = 0.325;
+/** Temperature window around T_c where a region 3 density search on a branch may fall back to the single root of a loop-free isotherm, K. */
+export const T_LOOP_FREE_WINDOW = 1e-2;

@@ -23,7 +23,7 @@ export { stateFromPS } from './ps.js';
 export { stateFromHS } from './hs.js';
 export { stateFromTX, stateFromPX } from './quality.js';
 export { stateFromTV } from './tv.js';
-export { saturationAtT, saturationAtP, P_SAT_MIN, P_SAT_13 } from './saturation.js';
+export { saturationAtT, saturationAtP, saturationLinePressure, saturationTemperatureOnLine, P_SAT_MIN, P_SAT_13 } from './saturation.js';
 export { region1 } from './region1.js';
 export { region2, region2Metastable } from './region2.js';
 export { region3, region3Pressure, region3Derivatives } from './region3.js';

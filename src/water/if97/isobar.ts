@@ -183,11 +183,11 @@ export function stateOnIsobar(p: number, target: number, by: Matched, out: Water
   const end1 = valueAt(1, p, T_13, by, ctx);
   if (target <= end1) return polishT(1, p, target, by, backwardRegion1(p, target, by), T_MIN, T_13, out);
   if (p < P_CRITICAL) {
-    const Ts = saturationTemperature(p);
     const liq = ctx.satLiquid;
     const vap = ctx.satVapor;
     const status = saturationAtP(p, liq, vap, ctx);
     if (status !== Status.ok) return status;
+    const Ts = liq.T;
     if (target <= valueOf(liq, by)) return solveRegion3(p, target, by, T_13, Ts, 1, out, ctx);
     if (target < valueOf(vap, by)) return mixPhases((target - valueOf(liq, by)) / (valueOf(vap, by) - valueOf(liq, by)), liq, vap, out);
     const TB = b23Temperature(p);

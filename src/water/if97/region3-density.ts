@@ -9,7 +9,7 @@
 import satData from '../../../data/if97/saturation-densities.json';
 import { brent } from '../../core/root.js';
 import { Status, type StatusCode } from '../../core/status.js';
-import { RHO_CRITICAL, RHO_SEARCH_MAX_3, RHO_SEARCH_MIN_3, T_CRITICAL } from './constants.js';
+import { RHO_CRITICAL, RHO_SEARCH_MAX_3, RHO_SEARCH_MIN_3, T_CRITICAL, T_LOOP_FREE_WINDOW } from './constants.js';
 import type { SolverContext } from './context.js';
 import { region3Pressure } from './region3.js';
 import { saturationPressure } from './region4.js';
@@ -67,6 +67,19 @@ function polishDensity(p: number, T: number, a: number, b: number, ctx: SolverCo
  * ```
  */
 export function region3DensityAt(p: number, T: number, branch: 0 | 1 | 2, ctx: SolverContext): StatusCode {
+  const status = branchDensity(p, T, branch, ctx);
+  if (status === Status.ok || !(T > T_CRITICAL - T_LOOP_FREE_WINDOW)) return status;
+  // within T_LOOP_FREE_WINDOW below T_c the isotherm at this pressure may have lost its loop (the
+  // region 3 and region 4 equations meet the critical point only within their tolerance): take the
+  // single root over the whole density range, if it is mechanically stable
+  if (!(pressure3(RHO_SEARCH_MIN_3, T, ctx) < p && pressure3(RHO_SEARCH_MAX_3, T, ctx) > p)) return status;
+  if (polishDensity(p, T, RHO_SEARCH_MIN_3, RHO_SEARCH_MAX_3, ctx) !== Status.ok) return status;
+  region3Pressure(ctx.rho, T, ctx.pr);
+  return ctx.pr[1]! >= 0 ? Status.ok : status;
+}
+
+/** The density search on its branch (see {@link region3DensityAt}). */
+function branchDensity(p: number, T: number, branch: 0 | 1 | 2, ctx: SolverContext): StatusCode {
   if (T >= T_CRITICAL) {
     if (!(pressure3(RHO_SEARCH_MIN_3, T, ctx) < p && pressure3(RHO_SEARCH_MAX_3, T, ctx) > p)) return Status.noConvergence;
     return polishDensity(p, T, RHO_SEARCH_MIN_3, RHO_SEARCH_MAX_3, ctx);

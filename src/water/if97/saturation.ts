@@ -6,7 +6,7 @@
  * @module
  */
 import { Status, type StatusCode } from '../../core/status.js';
-import { P_CRITICAL, RHO_CRITICAL, T_13, T_CRITICAL, T_MIN } from './constants.js';
+import { CRITICAL_EXPONENT_BETA, P_CRITICAL, RHO_CRITICAL, T_13, T_CRITICAL, T_MIN, T_NEAR_CRITICAL_BAND } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
 import type { WaterProperties } from './properties.js';
 import { region1 } from './region1.js';
@@ -32,7 +32,7 @@ export const P_SAT_13 = saturationPressure(T_13);
 export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {
   if (!Number.isFinite(T)) return Status.invalidInput;
   if (!(T >= T_MIN && T <= T_CRITICAL)) return Status.outOfRange;
-  const p = T === T_CRITICAL ? P_CRITICAL : saturationPressure(T);
+  const p = T === T_CRITICAL ? P_CRITICAL : saturationLinePressure(T);
   if (T <= T_13) {
     region1(p, T, liquid);
     region2(p, T, vapor);
@@ -41,10 +41,23 @@ export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterPr
   if (T === T_CRITICAL) {
     region3(RHO_CRITICAL, T, liquid);
     region3(RHO_CRITICAL, T, vapor);
+  } else if (T > T_CRITICAL - T_NEAR_CRITICAL_BAND) {
+    // the near-critical band: the saturated densities at the band's edge, scaled toward ρc with the
+    // coexistence curve's exponent; properties from region 3 at (ρ, T). The isotherm is flat here,
+    // so p₃(ρ, T) stays within a few 1e-10 of p_s(T).
+    const edge = T_CRITICAL - T_NEAR_CRITICAL_BAND;
+    const pEdge = saturationPressure(edge);
+    if (region3DensityAt(pEdge, edge, 1, ctx) !== Status.ok) return Status.noConvergence;
+    const rlEdge = ctx.rho;
+    if (region3DensityAt(pEdge, edge, 2, ctx) !== Status.ok) return Status.noConvergence;
+    const scale = ((T_CRITICAL - T) / T_NEAR_CRITICAL_BAND) ** CRITICAL_EXPONENT_BETA;
+    region3(RHO_CRITICAL + (rlEdge - RHO_CRITICAL) * scale, T, liquid);
+    region3(RHO_CRITICAL + (ctx.rho - RHO_CRITICAL) * scale, T, vapor);
   } else {
     if (region3DensityAt(p, T, 1, ctx) !== Status.ok) return Status.noConvergence;
     const rl = ctx.rho;
     if (region3DensityAt(p, T, 2, ctx) !== Status.ok) return Status.noConvergence;
+    if (!(rl > ctx.rho)) return Status.noConvergence;
     region3(rl, T, liquid);
     region3(ctx.rho, T, vapor);
   }
@@ -64,7 +77,7 @@ export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterPr
 export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {
   if (!Number.isFinite(p)) return Status.invalidInput;
   if (!(p >= P_SAT_MIN && p <= P_CRITICAL)) return Status.outOfRange;
-  const T = p === P_CRITICAL ? T_CRITICAL : Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(p)));
+  const T = saturationTemperatureOnLine(p);
   if (p <= P_SAT_13) {
     // by pressure, so that p_s(623.15 K) itself stays with regions 1 and 2 as saturationAtT does
     const Tl = Math.min(T, T_13);
@@ -76,6 +89,51 @@ export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterPr
   liquid.p = p;
   vapor.p = p;
   return status;
+}
+
+/**
+ * The saturation pressure used on the saturation line: Eq. 30, and inside the near-critical band
+ * Eq. 30 plus a linear share of its miss at the critical point (Eq. 30 gives p_s(T_c) = p_c +
+ * 0.32 mPa, within its stated accuracy), so that the line ends exactly at (T_c, p_c) and T_s(p_c) = T_c.
+ * The correction is at most 0.32 mPa (1.5e-11 relative).
+ */
+export function saturationLinePressure(T: number): number {
+  const ps = saturationPressure(T);
+  if (!(T > T_CRITICAL - T_NEAR_CRITICAL_BAND)) return ps;
+  return ps - CRITICAL_MISS * ((T - (T_CRITICAL - T_NEAR_CRITICAL_BAND)) / T_NEAR_CRITICAL_BAND);
+}
+
+/** Eq. 30's miss at the critical point, p_s(T_c) − p_c, Pa. */
+const CRITICAL_MISS = saturationPressure(T_CRITICAL) - P_CRITICAL;
+
+/**
+ * T_s(p) above 16.5 MPa: Eq. 31, then Newton steps on the saturation line's pressure
+ * ({@link saturationLinePressure}). Near the critical point Eq. 31 loses digits to cancellation
+ * (1e-9 K at p_c); the Newton steps keep them, so T_s(p) runs continuously into T_c.
+ */
+function nearCriticalSaturationTemperature(p: number): number {
+  let T = Math.min(T_CRITICAL, saturationTemperature(p));
+  for (let i = 0; i < 4; i++) {
+    const h = 1e-6;
+    const slope = (saturationLinePressure(T) - saturationLinePressure(T - h)) / h;
+    const next = Math.min(T_CRITICAL, T - (saturationLinePressure(T) - p) / slope);
+    if (next === T) break;
+    T = next;
+  }
+  return T;
+}
+
+/**
+ * T_s(p) in K for 611.213 Pa ≤ p ≤ 22.064 MPa as the saturation functions use it: Eq. 31, refined
+ * above 16.5 MPa so that it ends exactly at T_c (see {@link saturationLinePressure}).
+ * @example
+ * ```ts
+ * saturationTemperatureOnLine(22.064e6);   //=> 647.096
+ * ```
+ */
+export function saturationTemperatureOnLine(p: number): number {
+  if (p >= P_CRITICAL) return T_CRITICAL;
+  return p > P_SAT_13 ? nearCriticalSaturationTemperature(p) : Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(p)));
 }
 
 /** Fills `out` with the mixture of quality x of the saturated phases `liquid` and `vapor`. */
