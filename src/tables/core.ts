@@ -222,14 +222,26 @@ function tableMethodStatus(t: TableCore, c: TableColumn, method: number): Status
 export function tableValue(t: TableCore, column: number, x: number, method: number, extrapolate: boolean, out: TableValue): StatusCode {
   const c = t.columns[column];
   if (c === undefined || !Number.isFinite(x)) return Status.invalidInput;
-  const methodStatus = tableMethodStatus(t, c, method);
-  if (methodStatus !== Status.ok) return methodStatus;
+  if (method !== Method.linear) {
+    const methodStatus = tableMethodStatus(t, c, method);
+    if (methodStatus !== Status.ok) return methodStatus;
+  }
   const keys = t.keys;
   const outside = x < keys[0]! || x > keys[keys.length - 1]!;
-  const i = segmentIndex(keys, x);
-  out.segment = i;
   out.extrapolated = outside;
   if (outside && !extrapolate) return Status.outOfRange;
+  const i = segmentIndex(keys, x);
+  out.segment = i;
+  if (method === Method.linear && !outside) {
+    // the hot path: lerp returns the row values exactly at the rows
+    out.value = lerp(keys[i]!, keys[i + 1]!, c.values[i]!, c.values[i + 1]!, x);
+    return Status.ok;
+  }
+  return otherMethods(t, c, i, x, method, out);
+}
+
+/** tableValue's path for the other methods and for extrapolation (method already checked). */
+function otherMethods(t: TableCore, c: TableColumn, i: number, x: number, method: number, out: TableValue): StatusCode {
   if (method === Method.logKey && !(x > 0)) return Status.outOfRange;
   const v = segmentValue(t, c, i, x, method);
   if (!Number.isFinite(v)) return Status.outOfRange;

@@ -149,8 +149,8 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
    * SI core: the value of `column` at (x, y) (SI), written to `out.value` (SI) with the segments.
    * Never throws, never allocates.
    *
-   * @returns {@link Status.ok}; {@link Status.outOfRange} outside the grid or where a needed cell is
-   *   missing; {@link Status.invalidInput} for a NaN input, an unknown column or method
+   * @returns `Status.ok`; `Status.outOfRange` outside the grid or where a needed cell is
+   *   missing; `Status.invalidInput` for a NaN input, an unknown column or method
    * @example
    * ```ts
    * const out = new GridValue();

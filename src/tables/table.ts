@@ -165,8 +165,8 @@ export class PropertyTable<C extends string = string> {
    * SI core: the value of `column` at key `x` (SI), written to `out.value` (SI), with the segment
    * (rows in ascending key order) and the extrapolation flag. Never throws, never allocates.
    *
-   * @returns {@link Status.ok}; {@link Status.outOfRange} outside the table unless `extrapolate`;
-   *   {@link Status.invalidInput} for a NaN key, an unknown column or method, log-linear on a column
+   * @returns `Status.ok`; `Status.outOfRange` outside the table unless `extrapolate`;
+   *   `Status.invalidInput` for a NaN key, an unknown column or method, log-linear on a column
    *   with values ≤ 0 or log-key on keys ≤ 0
    * @example
    * ```ts
