@@ -222,7 +222,7 @@ function tableMethodStatus(t: TableCore, c: TableColumn, method: number): Status
 export function tableValue(t: TableCore, column: number, x: number, method: number, extrapolate: boolean, out: TableValue): StatusCode {
   const c = t.columns[column];
   if (c === undefined || !Number.isFinite(x)) return Status.invalidInput;
-  if (method !== Method.linear) {
+  if (method !== Method.linear && method !== Method.monotoneCubic) {
     const methodStatus = tableMethodStatus(t, c, method);
     if (methodStatus !== Status.ok) return methodStatus;
   }
@@ -232,10 +232,16 @@ export function tableValue(t: TableCore, column: number, x: number, method: numb
   if (outside && !extrapolate) return Status.outOfRange;
   const i = segmentIndex(keys, x);
   out.segment = i;
-  if (method === Method.linear && !outside) {
-    // the hot path: lerp returns the row values exactly at the rows
-    out.value = lerp(keys[i]!, keys[i + 1]!, c.values[i]!, c.values[i + 1]!, x);
-    return Status.ok;
+  if (!outside) {
+    // the hot paths: lerp and hermite return the row values exactly at the rows
+    if (method === Method.linear) {
+      out.value = lerp(keys[i]!, keys[i + 1]!, c.values[i]!, c.values[i + 1]!, x);
+      return Status.ok;
+    }
+    if (method === Method.monotoneCubic) {
+      out.value = hermite(keys[i]!, keys[i + 1]!, c.values[i]!, c.values[i + 1]!, c.slopes[i]!, c.slopes[i + 1]!, x);
+      return Status.ok;
+    }
   }
   return otherMethods(t, c, i, x, method, out);
 }
