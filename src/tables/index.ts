@@ -5,8 +5,13 @@
  *
  * @packageDocumentation
  */
-export { PropertyTable, PropertyGrid, defineTable, defineGrid } from './table.js';
-export type { InterpolationMethod, LookupOptions, LookupResult } from './table.js';
+export { PropertyTable, defineTable } from './table.js';
+export { PropertyGrid, defineGrid } from './grid.js';
+export type { GridLookupOptions } from './grid.js';
+export { TableValue, GridValue } from './core.js';
+export { Status } from '../core/status.js';
+export type { StatusCode } from '../core/status.js';
+export type { InterpolationMethod, InverseResult, LookupOptions, LookupResult } from './validate.js';
 export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';
 export type { CsvOptions } from './load.js';
 export { tableSchema, gridSchema, columnSchema, axisSchema, tableSourceSchema } from './schema.js';

@@ -7,12 +7,38 @@
  *
  * @module
  */
-import { DefinitionError, type DefinitionIssue } from '../errors.js';
-import { PropertyGrid, PropertyTable } from './table.js';
+import { describeValue, readOptions } from '../core/read.js';
+import { DefinitionError, InvalidInputError, type DefinitionIssue } from '../errors.js';
+import { PropertyGrid } from './grid.js';
 import type { GridData, TableData } from './schema.js';
+import { PropertyTable } from './table.js';
+
+/** The largest text a loader reads (characters): a guard against a wrong file, not a limit of tables. */
+const MAX_TEXT = 50_000_000;
+
+/** A decimal number as a CSV cell may hold it: sign, digits, point, exponent; nothing else. */
+const DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+
+/** Reads the `json` argument of a loader: JSON text, or an already-parsed object. */
+function readJSON(json: unknown, fn: string): unknown {
+  if (typeof json === 'string') {
+    if (json.length > MAX_TEXT) throw new InvalidInputError('input.invalid', 'json', `${fn}: json is ${json.length} characters long, more than ${MAX_TEXT}`);
+    return parseJSON(json);
+  }
+  if (typeof json === 'object' && json !== null && !Array.isArray(json)) return json;
+  throw new InvalidInputError('input.invalid', 'json', `${fn}: json must be JSON text or a parsed object; got ${describeValue(json)}`);
+}
+
+/** Reads an optional non-empty string option. */
+function readText(value: unknown, parameter: string): string | undefined {
+  if (value === undefined) return undefined;
+  if (typeof value === 'string' && value.trim() !== '') return value;
+  throw new InvalidInputError('input.invalid', parameter, `${parameter} must be a non-empty string; got ${describeValue(value)}`);
+}
 
 /**
  * A one-dimensional table from JSON text or an already-parsed object (see `tableSchema`).
+ * @throws {@link InvalidInputError} when `json` is neither text nor an object
  * @throws {@link DefinitionError} naming the row and column of each problem
  * @example
  * ```ts
@@ -20,20 +46,20 @@ import type { GridData, TableData } from './schema.js';
  * ```
  */
 export function tableFromJSON(json: string | object): PropertyTable {
-  const data = typeof json === 'string' ? parseJSON(json) : json;
-  return new PropertyTable(data as TableData);
+  return new PropertyTable(readJSON(json, 'tableFromJSON') as TableData);
 }
 
 /**
  * A grid table from JSON text or an already-parsed object (see `gridSchema`).
+ * @throws {@link InvalidInputError} when `json` is neither text nor an object
+ * @throws {@link DefinitionError} naming the axis, row and cell of each problem
  * @example
  * ```ts
  * gridFromJSON(readFileSync('superheated.json', 'utf8')).lookup('h', { p: '1 MPa', T: '300 °C' });
  * ```
  */
 export function gridFromJSON(json: string | object): PropertyGrid {
-  const data = typeof json === 'string' ? parseJSON(json) : json;
-  return new PropertyGrid(data as GridData);
+  return new PropertyGrid(readJSON(json, 'gridFromJSON') as GridData);
 }
 
 function parseJSON(text: string): unknown {
@@ -75,19 +101,28 @@ export interface CsvOptions {
 }
 
 /**
- * A one-dimensional table from CSV text with a header of `name [unit]` cells.
+ * A one-dimensional table from CSV text with a header of `name [unit]` cells. Cells are decimal
+ * numbers (`12`, `-0.5`, `1.2e5`); hexadecimal, binary, octal, digit separators (`1_000`) and
+ * `Infinity` are refused.
  *
+ * @throws {@link InvalidInputError} when `text` is not a string or `options` is malformed
  * @throws {@link DefinitionError} naming the row and column of each problem (header without a unit,
- *   unknown unit, non-numeric or missing cell, ragged row, non-monotone or duplicate key, empty table)
+ *   unknown unit, non-numeric or missing cell, ragged row, non-monotone or duplicate key, empty table,
+ *   reserved column name, a value outside its quantity's physical bounds)
  * @example
  * ```ts
- * const t = tableFromCSV('T [°F], cp [Btu/(lbm·°F)]\n100, 0.45\n200, 0.48\n', { name: 'thermal oil' });
- * t.lookup('cp', '150 °F').value.in('Btu/(lbm·°F)');   //=> 0.465
+ * const t = tableFromCSV('T [°F], cp [Btu/(lbm·°R)]\n100, 0.45\n200, 0.48\n', { name: 'thermal oil' });
+ * t.lookup('cp', '150 °F').value.in('Btu/(lbm·°R)');   //=> 0.465
  * ```
  */
-export function tableFromCSV(text: string, options: CsvOptions = {}): PropertyTable {
+export function tableFromCSV(text: string, options?: CsvOptions): PropertyTable {
+  if (typeof text !== 'string') throw new InvalidInputError('input.invalid', 'text', `tableFromCSV: text must be a string of CSV; got ${describeValue(text)}`);
+  if (text.length > MAX_TEXT) throw new InvalidInputError('input.invalid', 'text', `tableFromCSV: text is ${text.length} characters long, more than ${MAX_TEXT}`);
+  const opts = readOptions<CsvOptions>(options, 'options', ['name', 'key', 'source']);
+  const name = readText(opts.name, 'options.name') ?? 'CSV table';
+  const key = readText(opts.key, 'options.key');
   const lines = text.split(/\r?\n/);
-  let source = options.source;
+  let source = readText(opts.source, 'options.source');
   const content: { line: number; text: string }[] = [];
   lines.forEach((raw, i) => {
     const t = raw.trim();
@@ -127,18 +162,19 @@ export function tableFromCSV(text: string, options: CsvOptions = {}): PropertyTa
       continue;
     }
     cells.forEach((cell, c) => {
-      const v = cell === '' ? NaN : Number(cell);
+      const v = DECIMAL.test(cell) ? Number(cell) : NaN;
       if (!Number.isFinite(v)) {
-        issues.push({ path: ['rows', line, names[c]!], message: `line ${line}, column "${names[c]}": ${cell === '' ? 'missing cell' : `"${cell}" is not a number`}` });
+        const shown = cell.length > 40 ? `${cell.slice(0, 40)}…` : cell;
+        const why = cell === '' ? 'missing cell' : /^[+-]?(?:\d|\.\d|inf|nan)/i.test(cell) ? `"${shown}" is not a decimal number (hexadecimal, binary, octal, digit separators, Infinity and NaN are refused)` : `"${shown}" is not a number`;
+        issues.push({ path: ['rows', line, names[c]!], message: `line ${line}, column "${names[c]}": ${why}` });
         values[c]!.push(null);
       } else values[c]!.push(v);
     });
   }
   if (content.length === 1) issues.push({ path: ['rows'], message: 'the CSV has a header but no data rows' });
-  if (issues.length > 0) throw new DefinitionError(`CSV table "${options.name ?? 'CSV table'}"`, issues);
-  const columns: Record<string, { unit: string; values: (number | null)[] }> = {};
-  names.forEach((n, c) => {
-    columns[n] = { unit: units[c]!, values: values[c]! };
-  });
-  return new PropertyTable({ name: options.name ?? 'CSV table', source: source ?? 'user CSV', key: options.key ?? names[0]!, columns });
+  if (issues.length > 0) throw new DefinitionError(`CSV table "${name}"`, issues);
+  // own properties for every name (an assignment to "__proto__" would set the prototype instead),
+  // so the table's check refuses reserved names by name
+  const columns = Object.fromEntries(names.map((n, c) => [n, { unit: units[c]!, values: values[c]! }])) as Record<string, { unit: string; values: (number | null)[] }>;
+  return new PropertyTable({ name, source: source ?? 'user CSV', key: key ?? names[0]!, columns });
 }

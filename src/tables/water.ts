@@ -15,7 +15,8 @@ import satPUs from '../../data/water-tables/saturation-by-p-us.json';
 import superUs from '../../data/water-tables/superheated-vapor-us.json';
 import compUs from '../../data/water-tables/compressed-liquid-us.json';
 import type { GridData, TableData } from './schema.js';
-import { PropertyGrid, PropertyTable } from './table.js';
+import { PropertyGrid } from './grid.js';
+import { PropertyTable } from './table.js';
 
 /** Columns of the saturation tables: the key, the other of T and p, and f/fg/g properties. */
 export type SaturationColumn = 'T' | 'p' | 'vf' | 'vg' | 'uf' | 'ufg' | 'ug' | 'hf' | 'hfg' | 'hg' | 'sf' | 'sfg' | 'sg';

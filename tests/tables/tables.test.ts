@@ -46,7 +46,9 @@ describe('one-dimensional tables', () => {
     } catch (e) {
       expect(e).toBeInstanceOf(OutOfRangeError);
       expectClose((e as OutOfRangeError).range.max, 413.15, { rel: 1e-12 });
-      expect((e as Error).message).toContain('thermal oil data sheet');
+      // in the caller's unit, with SI in parentheses
+      expect((e as Error).message).toContain('T = 200 °C (473.15 K) is above the upper limit of table "thermal oil data sheet" (140 °C (413.15 K)); valid range 20 to 140 °C; pass { extrapolate: true }');
+      expect((e as OutOfRangeError).range.given).toMatchObject({ unit: '°C' });
     }
     const r = oil.lookup('cp', '180 °C', { extrapolate: true });
     expect(r.extrapolated).toBe(true);
@@ -55,7 +57,8 @@ describe('one-dimensional tables', () => {
   });
   it('inverse lookup: the key where a column takes a value', () => {
     const r = oil.inverse('rho', '832.5 kg/m³');
-    expectClose(r.key.in('°C'), 80, { rel: 1e-12 });
+    expectClose(r.value.in('°C'), 80, { rel: 1e-12 });
+    expect(r.axis).toBe('T');
     expect(r.rows).toEqual([1, 2]);
     expect(() => oil.inverse('rho', '900 kg/m³')).toThrow(OutOfRangeError);
   });
@@ -74,7 +77,7 @@ describe('one-dimensional tables', () => {
     fc.assert(
       fc.property(fc.array(fc.double({ min: -100, max: 100, noNaN: true }), { minLength: 3, maxLength: 12 }), fc.double({ min: 0, max: 1, noNaN: true }), (ys, frac) => {
         const xs = ys.map((_, i) => i * 10 + 1);
-        const t = defineTable({ name: 'random', source: 'test', key: 'x', columns: { x: { unit: 'K', values: xs }, y: { unit: 'K', values: ys } } });
+        const t = defineTable({ name: 'random', source: 'test', key: 'x', columns: { x: { unit: 'K', values: xs }, y: { unit: 'J/kg', values: ys } } });
         const x = xs[0]! + frac * (xs[xs.length - 1]! - xs[0]!);
         const r = t.lookup('y', quantity(x, 'K'), { method: 'monotone-cubic' });
         const [i, j] = r.rows as [number, number];
@@ -91,7 +94,7 @@ describe('validation names the row and column', () => {
     ['non-monotone key', { T: { unit: 'K', values: [300, 320, 310] }, h: { unit: 'kJ/kg', values: [1, 2, 3] } }, /row 3: key T = 310 breaks the ascending order/],
     ['duplicate key', { T: { unit: 'K', values: [300, 300, 310] }, h: { unit: 'kJ/kg', values: [1, 2, 3] } }, /row 2: duplicate key T = 300/],
     ['missing cell', { T: { unit: 'K', values: [300, 310, 320] }, h: { unit: 'kJ/kg', values: [1, null, 3] } }, /row 2, column "h": missing or non-numeric cell/],
-    ['unknown unit', { T: { unit: 'K', values: [300, 310] }, h: { unit: 'kJ/furlong', values: [1, 2] } }, /columns\.h\.unit: unknown unit "furlong"/],
+    ['unknown unit', { T: { unit: 'K', values: [300, 310] }, h: { unit: 'kJ/furlong', values: [1, 2] } }, /columns\.h\.unit: column "h": unknown unit "furlong"/],
     ['ragged rows', { T: { unit: 'K', values: [300, 310, 320] }, h: { unit: 'kJ/kg', values: [1, 2] } }, /ragged rows/],
     ['empty table', { T: { unit: 'K', values: [] }, h: { unit: 'kJ/kg', values: [] } }, /the table is empty/],
   ])('%s', (_name, columns, message) => {
@@ -155,11 +158,46 @@ describe('grid tables', () => {
   });
   it('a lookup that needs an empty cell throws', () => {
     expect(() => g.lookup('h', { T: '450 K', p: '1.5 MPa' })).toThrow(/empty/);
+    // its bounds are where h has data at p = 1.5 MPa: T from 300 to 400 K (numbers, never NaN)
+    try {
+      g.lookup('h', { T: '450 K', p: '1.5 MPa' });
+    } catch (e) {
+      expect((e as OutOfRangeError).range).toMatchObject({ quantity: 'T', value: 450, min: 300, max: 400, unit: 'K' });
+    }
   });
   it('outside the grid throws with its range', () => {
     expect(() => g.lookup('h', { T: '350 K', p: '3 MPa' })).toThrow(OutOfRangeError);
+    expect(() => g.lookup('h', { T: '350 K', p: '3 MPa' })).toThrow('p = 3 MPa (3000000 Pa) is above the upper limit of grid "test grid" (2 MPa (2000000 Pa))');
+  });
+  it('a point on the first grid row needs no cell of the row above (cells missing there)', () => {
+    const h = defineGrid({
+      kind: 'grid', name: 'edge', source: 'test construction',
+      x: { name: 'T', unit: 'K', values: [300, 400, 500] }, y: { name: 'p', unit: 'MPa', values: [1, 2] },
+      columns: { h: { unit: 'kJ/kg', values: [[301, 401, 501], [null, null, 502]] } },
+    } as const);
+    expectClose(h.lookup('h', { T: '350 K', p: '1 MPa' }).value.in('kJ/kg'), 351, { rel: 1e-14 });
+    expect(h.lookup('h', { T: '400 K', p: '1 MPa' }).value.in('kJ/kg')).toBe(401);
+    expect(() => h.lookup('h', { T: '350 K', p: '1.5 MPa' })).toThrow(OutOfRangeError);
+  });
+  it('inverse that is not reached: bounds are the column\'s range on that line', () => {
+    try {
+      g.inverse('h', '900 kJ/kg', { p: '1 MPa' });
+      expect.fail('no error');
+    } catch (e) {
+      expect(e).toBeInstanceOf(OutOfRangeError);
+      expect((e as OutOfRangeError).range).toMatchObject({ quantity: 'h', value: 900e3, min: 301e3, max: 401e3, unit: 'J/kg' });
+      expect((e as Error).message).toContain('h = 900 kJ/kg (900000 J/kg) is not reached along p = 1 MPa (1000000 Pa) in grid "test grid"');
+    }
   });
   it('inverse along an axis', () => {
-    expectClose(g.inverse('h', '351.5 kJ/kg', { p: '1.5 MPa' }).value.in('K'), 350, { rel: 1e-12 });
+    const r = g.inverse('h', '351.5 kJ/kg', { p: '1.5 MPa' });
+    expectClose(r.value.in('K'), 350, { rel: 1e-12 });
+    expect(r.axis).toBe('T');
+    expect(r.rows).toEqual([0, 1]);
+    // along T at fixed p, and along p at fixed T: the same shape
+    const q = g.inverse('h', '351.5 kJ/kg', { T: '350 K' });
+    expectClose(q.value.in('MPa'), 1.5, { rel: 1e-12 });
+    expect(q.axis).toBe('p');
+    expect(q.rows).toEqual([0, 1]);
   });
 });
