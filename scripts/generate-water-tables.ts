@@ -15,6 +15,18 @@ import { resolveUnit, toSI, fromSI, DEFAULT_AMBIENT_PA } from '../src/units/regi
 import { PHASE, saturationAtP, saturationAtT, Status as STATUS, stateFromPT, WaterState } from '../src/water/if97/index.js';
 import { WaterProperties } from '../src/water/if97/properties.js';
 import { PropertyGrid, PropertyTable, type InterpolationMethod } from '../src/tables/table.js';
+import { GridValue, TableValue } from '../src/tables/core.js';
+
+const tableOut = new TableValue();
+const gridOut = new GridValue();
+/** A table's SI value at x, NaN where the core reports no value (for the error survey). */
+function tableAt(table: PropertyTable, column: string, x: number, method: InterpolationMethod): number {
+  return table.valueAt(column, x, tableOut, method) === STATUS.ok ? tableOut.value : NaN;
+}
+/** A grid's SI value at (x, y), NaN where the core reports no value (a missing cell). */
+function gridAt(grid: PropertyGrid, column: string, x: number, y: number, method: 'linear' | 'monotone-cubic'): number {
+  return grid.valueAt(column, x, y, gridOut, method) === STATUS.ok ? gridOut.value : NaN;
+}
 import type { GridData, TableData } from '../src/tables/schema.js';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
@@ -145,11 +157,11 @@ function saturationTable(by: 'T' | 'p', u: UnitSystem, keys: number[]): TableDat
     // by T, p_sat(T) varies exponentially (log-linear); by p, everything varies with ln p (log-key)
     const extra: InterpolationMethod[] = by === 'T' ? [] : ['log-key'];
     for (const m of [...methods, ...extra, ...(by === 'T' ? (['log-linear'] as const) : [])]) {
-      both(other, m, table.valueAt(other as never, x, m), truthOther, by === 'T' ? 'Pa' : 'K', 1);
+      both(other, m, tableAt(table, other, x, m), truthOther, by === 'T' ? 'Pa' : 'K', 1);
     }
     for (const c of SAT_COLUMNS) {
       const scale = Math.max(...table.data.columns[c]!.values.map((v) => Math.abs(conv(satUnit(c, u)).from(v as number))));
-      for (const m of [...methods, ...extra]) both(c, m, table.valueAt(c as never, x, m), sat.row[c], siUnit(c), scale);
+      for (const m of [...methods, ...extra]) both(c, m, tableAt(table, c, x, m), sat.row[c], siUnit(c), scale);
     }
   }
   return { ...data, interpolationError: finishErrors(errors) };
@@ -201,13 +213,13 @@ function gridTable(kind: 'superheated' | 'compressed', u: UnitSystem, pValues: n
       const alongT = state(pc.from(pValues[j]!), tc.from(Tm));
       for (const c of GRID_COLUMNS) {
         if (truth) {
-          const v = grid.valueAt(c as never, tc.from(Tm), pc.from(pm), 'linear');
+          const v = gridAt(grid, c, tc.from(Tm), pc.from(pm), 'linear');
           if (!Number.isNaN(v)) track(errors, `${c}|bilinear`, v, truth[c], siUnit(c), where, 1);
         }
         if (alongT) {
           const truthAlong = alongT[c];
           for (const m of ['linear', 'monotone-cubic'] as const) {
-            const v = grid.valueAt(c as never, tc.from(Tm), pc.from(pValues[j]!), m);
+            const v = gridAt(grid, c, tc.from(Tm), pc.from(pValues[j]!), m);
             if (!Number.isNaN(v)) track(errors, `${c}|${m === 'linear' ? 'linear-along-T' : 'monotone-cubic-along-T'}`, v, truthAlong, siUnit(c), `p = ${pValues[j]} ${pUnit}, T = ${round(Tm)} ${u.T}`, 1);
           }
         }

@@ -6,7 +6,7 @@
  * Run: npx tsx examples/metering/metering.ts [readings.csv]
  */
 import { readFileSync } from 'node:fs';
-import { quantity, tableFromCSV } from 'heatstate';
+import { quantity, Status, tableFromCSV, TableValue } from 'heatstate';
 import { water, waterBatch } from 'heatstate/water';
 
 const file = process.argv[2] ?? new URL('./readings.csv', import.meta.url);
@@ -15,7 +15,8 @@ const rows = log.rowCount;
 
 // the table holds every column in SI; read the rows at their own timestamps
 const t = Float64Array.from(log.data.columns.t!.values as number[]);
-const at = (column: 'p' | 'T' | 'm') => Float64Array.from(t, (ti) => log.valueAt(column, ti));
+const out = new TableValue();
+const at = (column: 'p' | 'T' | 'm') => Float64Array.from(t, (ti) => (log.valueAt(column, ti, out) === Status.ok ? out.value : NaN));
 const p = at('p');
 const T = at('T');
 const m = at('m');

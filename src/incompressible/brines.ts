@@ -12,6 +12,8 @@
  *
  * @module
  */
+import { Status } from '../core/status.js';
+import { GridValue } from '../tables/core.js';
 import data from '../../data/incompressible/brines.json';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
 import { normaliseName } from '../lookup.js';
@@ -107,6 +109,7 @@ function gridOf(solution: Solution): PropertyGrid<'c' | 'rho', 'massFraction', '
  */
 export function solutionDefinition(solution: Solution, massFraction: number): IncompressibleDefinition {
   const grid = gridOf(solution);
+  const cell = new GridValue();
   const Tc = solution.grid.y.values;
   const freezeC = piecewiseLinear(solution.freezingPoint.massFraction, solution.freezingPoint.T, massFraction);
   const T: number[] = [];
@@ -114,8 +117,8 @@ export function solutionDefinition(solution: Solution, massFraction: number): In
   const rho: number[] = [];
   for (const t of Tc) {
     const TK = t + 273.15;
-    let cv = grid.valueAt('c', massFraction, TK);
-    let rv = grid.valueAt('rho', massFraction, TK);
+    let cv = grid.valueAt('c', massFraction, TK, cell) === Status.ok ? cell.value : NaN;
+    let rv = grid.valueAt('rho', massFraction, TK, cell) === Status.ok ? cell.value : NaN;
     // at the last tabulated concentration the grid's bilinear weight of the empty neighbour is 0 but
     // its NaN still spoils the sum: read the node itself (what interpolation at a node returns)
     const column = solution.grid.x.values.indexOf(massFraction);

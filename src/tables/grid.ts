@@ -158,20 +158,10 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
    * out.value;                         //=> 351500 (J/kg)
    * ```
    */
-  valueAt(column: C, x: number, y: number, out: GridValue, method?: 'linear' | 'monotone-cubic'): StatusCode;
-  /**
-   * @deprecated The number-returning form (NaN outside the grid or at a missing cell), kept only
-   * until scripts/generate-water-tables.ts moves to the form with an output object.
-   */
-  valueAt(column: C, x: number, y: number, method?: 'linear' | 'monotone-cubic'): number;
-  valueAt(column: C, x: number, y: number, a?: GridValue | 'linear' | 'monotone-cubic', b?: 'linear' | 'monotone-cubic'): StatusCode | number {
-    if (typeof a === 'object' && a !== null) {
-      const i = typeof column === 'string' ? this.index.get(column) : undefined;
-      if (i === undefined) return Status.invalidInput;
-      return gridValue(this.core, i, x, y, b === undefined ? Method.linear : methodCode(b), a);
-    }
-    const out = new GridValue();
-    return this.valueAt(column, x, y, out, a) === Status.ok ? out.value : NaN;
+  valueAt(column: C, x: number, y: number, out: GridValue, method?: 'linear' | 'monotone-cubic'): StatusCode {
+    const i = typeof column === 'string' ? this.index.get(column) : undefined;
+    if (i === undefined) return Status.invalidInput;
+    return gridValue(this.core, i, x, y, method === undefined ? Method.linear : methodCode(method), out);
   }
 
   /** Reads the point `at` ({ p, T }: both axes, or with `one`, exactly one of them). */

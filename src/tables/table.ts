@@ -175,21 +175,11 @@ export class PropertyTable<C extends string = string> {
    * out.value;                        //=> 2090 (J/(kg·K), SI)
    * ```
    */
-  valueAt(column: C, x: number, out: TableValue, method?: InterpolationMethod, extrapolate?: boolean): StatusCode;
-  /**
-   * @deprecated The number-returning form (NaN outside the table), kept only until
-   * scripts/generate-water-tables.ts and examples/metering move to the form with an output object.
-   */
-  valueAt(column: C, x: number, method?: InterpolationMethod, extrapolate?: boolean): number;
-  valueAt(column: C, x: number, a?: TableValue | InterpolationMethod, b?: InterpolationMethod | boolean, c?: boolean): StatusCode | number {
-    if (typeof a === 'object' && a !== null) {
-      const i = typeof column === 'string' ? this.index.get(column) : undefined;
-      if (i === undefined) return Status.invalidInput;
-      const code = b === undefined ? Method.linear : methodCode(b);
-      return tableValue(this.core, i, x, code, c === true, a);
-    }
-    const out = new TableValue();
-    return this.valueAt(column, x, out, a, b as boolean | undefined) === Status.ok ? out.value : NaN;
+  valueAt(column: C, x: number, out: TableValue, method?: InterpolationMethod, extrapolate?: boolean): StatusCode {
+    const i = typeof column === 'string' ? this.index.get(column) : undefined;
+    if (i === undefined) return Status.invalidInput;
+    const code = method === undefined ? Method.linear : methodCode(method);
+    return tableValue(this.core, i, x, code, extrapolate === true, out);
   }
 
   /**
