@@ -20,10 +20,34 @@ export type ErrorCode =
   | 'formula.invalid'
   | 'definition.invalid'
   | 'solve.no-convergence'
-  | 'result.not-finite';
+  | 'result.not-finite'
+  | 'internal.unexpected';
 
-/** Base class of every error heatstate throws on purpose. */
+/**
+ * The kinds an error instance belongs to, under a registry symbol, so that `instanceof` holds across
+ * copies of heatstate loaded into one process (its ESM and CommonJS builds, say): the check asks for
+ * the kind, not for one copy's class object.
+ */
+const KINDS = Symbol.for('heatstate.error.kinds');
+
+/**
+ * Base class of every error heatstate throws on purpose.
+ *
+ * `instanceof` works across module formats: an error thrown by the CommonJS build is an instance of
+ * the ESM build's classes and the other way round.
+ */
 export class HeatstateError extends Error {
+  /** The kind this class stands for (its stable name), for `instanceof` across copies of the library. */
+  static readonly kind: string = 'HeatstateError';
+
+  /** True for errors of this kind from any copy of heatstate in the process. */
+  static override [Symbol.hasInstance](value: unknown): boolean {
+    if (!Object.hasOwn(this, 'kind')) return Function.prototype[Symbol.hasInstance].call(this, value);
+    if (typeof value !== 'object' || value === null) return false;
+    const kinds = (value as Record<symbol, unknown>)[KINDS];
+    return Array.isArray(kinds) ? kinds.includes(this.kind) : Function.prototype[Symbol.hasInstance].call(this, value);
+  }
+
   /** A stable, machine-readable code. */
   readonly code: ErrorCode;
 
@@ -31,6 +55,11 @@ export class HeatstateError extends Error {
     super(message);
     this.code = code;
     this.name = new.target.name;
+    const kinds: string[] = [];
+    for (let c: unknown = new.target; typeof c === 'function' && c !== Error; c = Object.getPrototypeOf(c)) {
+      if (Object.hasOwn(c, 'kind')) kinds.push((c as unknown as { kind: string }).kind);
+    }
+    Object.defineProperty(this, KINDS, { value: kinds, enumerable: false });
   }
 
   /**
@@ -53,6 +82,7 @@ function jsonSafe(value: unknown): unknown {
 
 /** A unit text that could not be read, or a unit that is not in the registry. */
 export class UnitError extends HeatstateError {
+  static override readonly kind: string = 'UnitError';
   /** The unit text as given. */
   readonly unit: string;
 
@@ -64,6 +94,7 @@ export class UnitError extends HeatstateError {
 
 /** A quantity of one dimension where another was expected (a pressure passed as a temperature). */
 export class DimensionError extends HeatstateError {
+  static override readonly kind: string = 'DimensionError';
   /** The dimension that was expected. */
   readonly expected: string;
   /** The dimension that was given. */
@@ -81,6 +112,7 @@ export class DimensionError extends HeatstateError {
 
 /** A NaN or infinite number, or an input of the wrong shape. */
 export class InvalidInputError extends HeatstateError {
+  static override readonly kind: string = 'InvalidInputError';
   /** The parameter or field that was wrong. */
   readonly parameter: string;
 
@@ -122,6 +154,7 @@ export interface ValidRange {
 
 /** An input outside the range where a model or data set is valid. */
 export class OutOfRangeError extends HeatstateError {
+  static override readonly kind: string = 'OutOfRangeError';
   /** The offending value and the valid range, as data. */
   readonly range: ValidRange;
 
@@ -153,6 +186,7 @@ function describeRange(r: ValidRange): string {
 
 /** A substance, species or other name that is not in a catalogue. */
 export class UnknownNameError extends HeatstateError {
+  static override readonly kind: string = 'UnknownNameError';
   /** The name as given. */
   readonly given: string;
   /** The catalogue that was searched. */
@@ -171,6 +205,7 @@ export class UnknownNameError extends HeatstateError {
 
 /** A chemical formula that could not be read. */
 export class FormulaError extends HeatstateError {
+  static override readonly kind: string = 'FormulaError';
   /** The formula as given. */
   readonly formula: string;
   /** Zero-based character position of the problem. */
@@ -193,6 +228,7 @@ export interface DefinitionIssue {
 
 /** A substance definition, data set or table that failed validation. */
 export class DefinitionError extends HeatstateError {
+  static override readonly kind: string = 'DefinitionError';
   /** Every problem found, each with its path. */
   readonly issues: readonly DefinitionIssue[];
 
@@ -205,6 +241,7 @@ export class DefinitionError extends HeatstateError {
 
 /** An iterative solve that did not reach its tolerance. Never returned as a value. */
 export class ConvergenceError extends HeatstateError {
+  static override readonly kind: string = 'ConvergenceError';
   /** Iterations performed, when the solver reports them; `undefined` when it does not. */
   readonly iterations: number | undefined;
 
@@ -216,6 +253,7 @@ export class ConvergenceError extends HeatstateError {
 
 /** A model produced a value that is not a finite number (an overflow inside the model, not the caller's input). */
 export class ResultError extends HeatstateError {
+  static override readonly kind: string = 'ResultError';
   /** The property whose value was not finite. */
   readonly property: string;
 

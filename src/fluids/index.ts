@@ -12,6 +12,8 @@ export { fluid, fluidNames, type Fluid, type FluidPair, type FluidPhase, type Fl
 export type { FluidSource } from './definition.js';
 export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, UnknownNameError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';

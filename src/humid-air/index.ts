@@ -32,6 +32,8 @@ export type { HumidAirBatchProperty, HumidAirBatchInputs, HumidAirBatchResult } 
 
 export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';

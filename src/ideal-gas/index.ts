@@ -11,6 +11,8 @@ export type { IdealGasBatchProperty } from './batch.js';
 export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation } from './processes.js';
 export { IdealGasSolver, isentropicTemperatureConstantCp } from './solve.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';

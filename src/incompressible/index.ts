@@ -46,6 +46,8 @@ export function incompressible(nameOrDefinition: string | IncompressibleDefiniti
 }
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';

@@ -10,6 +10,8 @@ export { PropertyGrid, defineGrid } from './grid.js';
 export type { GridLookupOptions } from './grid.js';
 export { TableValue, GridValue } from './core.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export type { InterpolationMethod, InverseResult, LookupOptions, LookupResult } from './validate.js';
 export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';

@@ -11,13 +11,15 @@
  *
  * @packageDocumentation
  */
-export { water, waterState, waterSaturation } from './state.js';
+export { water, waterState, waterSaturation, waterDeltaH, waterDeltaU, waterDeltaS, WATER_RANGE } from './state.js';
 export type { WaterStateResult, SaturationResult, SaturatedPhase, WaterPair, WaterPhase } from './state.js';
 export { waterBatch, WATER_BATCH_STATUS } from './batch.js';
 export type { WaterBatchProperty, WaterBatchInputs, WaterBatchResult } from './batch.js';
 export { approximateLiquid, compareLiquidProcess, LIQUID_APPROXIMATIONS } from './approximations.js';
 export type { LiquidApproximation, LiquidStateInput, ApproximateLiquid, Deviation, ProcessEstimate } from './approximations.js';
 export { Status } from '../core/status.js';
+export { safe } from '../core/safe.js';
+export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';

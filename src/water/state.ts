@@ -10,8 +10,8 @@ import { throwForStatus } from '../core/fail.js';
 import { rangeError, readAbsolutePressure, readInput, readPair, readPositiveDensity, readQuality, readTemperature, type Bounds } from '../core/read.js';
 import { optionalQuantity, resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
-import { formatNumber } from '../errors.js';
-import type { Quantity, QuantityLike } from '../units/quantity.js';
+import { formatNumber, InvalidInputError } from '../errors.js';
+import { Quantity, type QuantityLike } from '../units/quantity.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, P_SEARCH_MIN, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './if97/constants.js';
 import { defaultContext } from './if97/context.js';
 import { stateFromHS } from './if97/hs.js';
@@ -360,8 +360,50 @@ export function waterSaturation(at: { readonly T: QuantityLike<'temperature'> } 
   };
 }
 
-/** Water and steam by IAPWS-IF97: `water.state(pair)` and `water.saturation({ T } | { p })`. */
+/**
+ * Δh = h(state2) − h(state1) between two states given by any {@link WaterPair}.
+ * @example
+ * ```ts
+ * water.deltaH({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/kg');   //=> -1030.2...
+ * ```
+ */
+export function waterDeltaH(state1: WaterPair, state2: WaterPair): Quantity<'specificEnergy'> {
+  return resultQuantity(stateOrNamed(state2, 'state2').h.si - stateOrNamed(state1, 'state1').h.si, 'specificEnergy', 'deltaH');
+}
+
+/** Δu = u(state2) − u(state1) between two states given by any {@link WaterPair}. */
+export function waterDeltaU(state1: WaterPair, state2: WaterPair): Quantity<'specificEnergy'> {
+  return resultQuantity(stateOrNamed(state2, 'state2').u.si - stateOrNamed(state1, 'state1').u.si, 'specificEnergy', 'deltaU');
+}
+
+/** Δs = s(state2) − s(state1) between two states given by any {@link WaterPair}. */
+export function waterDeltaS(state1: WaterPair, state2: WaterPair): Quantity<'specificHeat'> {
+  return resultQuantity(stateOrNamed(state2, 'state2').s.si - stateOrNamed(state1, 'state1').s.si, 'specificHeat', 'deltaS');
+}
+
+/** A state, with the argument's name put in front of an input error's message. */
+function stateOrNamed(pair: WaterPair, name: string): WaterStateResult {
+  if (typeof pair !== 'object' || pair === null) throw new InvalidInputError('input.invalid', name, `${name} must be a pair such as { p: '1 MPa', T: '300 °C' }; got ${String(pair)}`);
+  return waterState(pair);
+}
+
+/** The range of IAPWS-IF97 (R7-97(2012) Section 3). */
+export const WATER_RANGE = {
+  T: { min: Quantity.fromSI(T_MIN, 'temperature'), max: Quantity.fromSI(T_MAX_5, 'temperature') },
+  p: { min: Quantity.fromSI(P_SEARCH_MIN, 'pressure'), max: Quantity.fromSI(P_MAX, 'pressure') },
+  /** Above 1073.15 K (region 5) the pressure limit is 50 MPa. */
+  pAboveT1073: { max: Quantity.fromSI(P_MAX_5, 'pressure') },
+} as const;
+
+/**
+ * Water and steam by IAPWS-IF97: `water.state(pair)`, `water.saturation({ T } | { p })`, the
+ * differences `deltaH`, `deltaU`, `deltaS` between two states, and `range`.
+ */
 export const water = {
   state: waterState,
   saturation: waterSaturation,
+  deltaH: waterDeltaH,
+  deltaU: waterDeltaU,
+  deltaS: waterDeltaS,
+  range: WATER_RANGE,
 } as const;
