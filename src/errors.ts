@@ -15,6 +15,7 @@ export type ErrorCode =
   | 'dimension.mismatch'
   | 'input.not-finite'
   | 'input.invalid'
+  | 'result.not-finite'
   | 'range.outside'
   | 'name.unknown'
   | 'formula.invalid'
@@ -37,10 +38,13 @@ export class HeatstateError extends Error {
 export class UnitError extends HeatstateError {
   /** The unit text as given. */
   readonly unit: string;
+  /** Known spellings close to an unknown name, best first (empty when none is close). */
+  readonly suggestions: readonly string[];
 
-  constructor(code: 'unit.unknown' | 'unit.syntax', unit: string, message: string) {
+  constructor(code: 'unit.unknown' | 'unit.syntax', unit: string, message: string, suggestions: readonly string[] = []) {
     super(code, message);
     this.unit = unit;
+    this.suggestions = suggestions;
   }
 }
 
@@ -61,12 +65,16 @@ export class DimensionError extends HeatstateError {
   }
 }
 
-/** A NaN or infinite number, or an input of the wrong shape. */
+/**
+ * A NaN or infinite number, or an input of the wrong shape (`input.not-finite`, `input.invalid`);
+ * or a computed result that is not finite (`result.not-finite`: an overflow in arithmetic or a
+ * conversion, or a model that produced NaN or infinity), which is not the caller's input at fault.
+ */
 export class InvalidInputError extends HeatstateError {
-  /** The parameter or field that was wrong. */
+  /** The parameter or field that was wrong (for `result.not-finite`: the quantity computed). */
   readonly parameter: string;
 
-  constructor(code: 'input.not-finite' | 'input.invalid', parameter: string, message: string) {
+  constructor(code: 'input.not-finite' | 'input.invalid' | 'result.not-finite', parameter: string, message: string) {
     super(code, message);
     this.parameter = parameter;
   }
