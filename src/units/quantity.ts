@@ -98,8 +98,8 @@ type IsScalar<D> = [D] extends [ScalarDimension] ? true : false;
 type ScaleFactor<D> = IsTemperature<D> extends true ? never : number;
 type ProductAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : IsScalar<D> extends true ? (IsTemperature<O> extends true ? never : unknown) : unknown;
 type QuotientAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : unknown;
-/** An absolute temperature has no sign: negate() and abs() of one are typed `never` (and throw). */
-type Signed<D extends AnyDimension> = IsTemperature<D> extends true ? never : QuantityOf<D>;
+/** negate() and abs() keep the dimension (and throw for an absolute temperature, which has no sign). */
+type Signed<D extends AnyDimension> = QuantityOf<D>;
 type MinusOperand<D extends AnyDimension> = D extends 'temperature' ? 'temperature' | 'temperatureDifference' : D;
 type MinusResult<D extends AnyDimension, O extends AnyDimension> = D extends 'temperature' ? (O extends 'temperature' ? 'temperatureDifference' : 'temperature') : D;
 /** A quantity operand whose dimension `O` is inferred from its `dimension` field alone. */
@@ -267,7 +267,7 @@ export class BaseQuantity<out D extends AnyDimension> {
     const into = sign === 1 ? 'to' : 'from';
     if (a === 'temperature' && b === 'temperature') {
       if (sign === 1) throw new DimensionError('temperatureDifference', b, `cannot add two temperatures (${other.toString()} to ${this.toString()}): add a temperature difference ("Δ°F", temperatureDifference()) instead`);
-      return this.temperatureDifferenceTo(other);
+      return this.temperatureDifferenceTo(other) as unknown as BaseQuantity<AnyDimension>;
     }
     const ok = a === 'temperature' ? b === 'temperatureDifference' : a === b && (a !== 'derived' || sameVector(this.vector, other.vector));
     if (!ok) {
@@ -479,7 +479,7 @@ export class BaseQuantity<out D extends AnyDimension> {
     }
     if (typeof other === 'string' && this.dimension !== 'derived') {
       const [value, unit] = splitQuantityText(other);
-      return build(value, unit, undefined, this.dimension as Dimension, 'other');
+      return build(value, unit, undefined, this.dimension as Dimension, 'other') as unknown as BaseQuantity<AnyDimension>;
     }
     throw new InvalidInputError('input.invalid', 'other', `compare needs a quantity${this.dimension === 'derived' ? '' : ' or unit text'} of ${describe(this.dimension)}; got ${describeValue(other)}`);
   }
@@ -549,8 +549,14 @@ export class Quantity<out D extends Dimension = Dimension> extends BaseQuantity<
  */
 export class DerivedQuantity extends BaseQuantity<'derived'> {}
 
-/** The quantity class of a dimension: `Quantity<D>` for a named one, {@link DerivedQuantity} for `'derived'`. */
-export type QuantityOf<D extends AnyDimension> = D extends Dimension ? Quantity<D> : DerivedQuantity;
+/**
+ * The quantity class of a dimension: `Quantity<D>` for a named one, {@link DerivedQuantity} for
+ * `'derived'`, and `BaseQuantity<AnyDimension>` where the compiler cannot tell (a product off the
+ * table): that one converts, takes part in arithmetic and narrows with `.as(...)`.
+ */
+export type QuantityOf<D extends AnyDimension> = [D] extends [Dimension] ? NamedQuantity<D> : [D] extends ['derived'] ? DerivedQuantity : BaseQuantity<D>;
+
+type NamedQuantity<D> = D extends Dimension ? Quantity<D> : never;
 
 type TargetOf<D extends AnyDimension> = D extends Dimension ? TargetUnitOf<D> : never;
 
@@ -587,7 +593,7 @@ function build(value: number, unit: string, options: QuantityOptions | undefined
     throw new InvalidInputError('input.not-finite', 'value', `${value} ${unit} overflows double precision in SI (${SI_UNIT[resolved.dimension]})`);
   }
   if (si === 0 && value !== 0 && resolved.kind !== 'temperature' && resolved.kind !== 'gauge') {
-    throw new InvalidInputError('input.not-finite', 'value', `${value} ${unit} underflows to 0 in SI (${SI_UNIT[resolved.dimension]})`);
+    throw new InvalidInputError('input.invalid', 'value', `${value} ${unit} underflows to 0 in SI (${SI_UNIT[resolved.dimension]}); no measurement is that small`);
   }
   if (resolved.dimension === 'temperature' && si < 0) {
     throw new OutOfRangeError(
@@ -663,7 +669,11 @@ export function splitQuantityText(text: string, counter?: ParseCounter): [number
   if (numberText.length > 64) fail('a number of more than 64 characters');
   const unit = text.slice(i).trim();
   if (counter) counter.steps += n - i;
-  return [Number(numberText), unit === '' ? '1' : unit];
+  const value = Number(numberText);
+  if (value === 0 && /[1-9]/.test(numberText.split(/[eE]/)[0]!)) {
+    throw new InvalidInputError('input.invalid', 'value', `${numberText} underflows to 0 in double precision; no measurement is that small`);
+  }
+  return [value, unit === '' ? '1' : unit];
 }
 
 /**

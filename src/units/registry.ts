@@ -68,7 +68,7 @@ for (const [dimension, list] of Object.entries(UNIT_SPELLINGS) as [Dimension, re
 let suggestionPool: string[] | undefined;
 
 function foldKey(name: string): string {
-  return name.toLowerCase().replace(/μ/g, 'µ').replace(/^(?:delta\s*|δ\s*)/, '').replace(/°|deg|[\s_·*.]/g, '');
+  return name.toLowerCase().replace(/μ/g, 'µ').replace(/°|deg|[\s_·*.]/g, '');
 }
 
 function distance(a: string, b: string, limit: number): number {
