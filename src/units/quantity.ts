@@ -133,18 +133,13 @@ function notFinite(what: string, message: string): InvalidInputError {
  *   the product's dimension (see `arithmetic.ts` for the table the compiler knows), held in SI.
  *   An absolute temperature enters a product or quotient as its value in kelvins (T·s, R·T, T2/T1);
  *   scaling it by a plain number (`times(2)`) is refused, since "twice 50 °F" depends on the scale.
- * - `abs`, `negate` keep the unit; both are refused for absolute temperatures.
+ * - `abs`, `negate` keep the unit; both are refused (at run time) for absolute temperatures.
  * - `compare`, `lt`, `le`, `gt`, `ge`, `eq` (the last two with an optional tolerance) take a quantity
  *   or text of the same dimension.
  * No result holds NaN or infinity: an overflow throws {@link InvalidInputError} (`result.not-finite`).
  *
  * @example
  * ```ts
- * const p = quantity(500, 'psia');
- * p.in('kPa');            //=> 3447.3786465841806
- * quantity('50 °F').in('K');                 //=> 283.15
- * temperatureDifference(50, '°F').in('K');   //=> 27.77777777777778 (a rise, not a temperature)
- * quantity('14.7 psig').in('psia');          //=> 29.39594... (ambient: standard atmosphere)
  * quantity('300 °F').minus(quantity('50 °F')).in('Δ°F');   //=> 250
  * quantity('2 kg/s').times(quantity('100 kJ/kg')).in('kW'); //=> 200 (a Quantity<'power'>)
  * ```
@@ -389,10 +384,12 @@ export class BaseQuantity<out D extends AnyDimension> {
   }
 
   /**
-   * The quantity with its sign flipped, in the same unit. Refused for an absolute temperature.
+   * The quantity with its sign flipped, in the same unit. Refused at run time for an absolute
+   * temperature, which has no sign (the compiler does not refuse it: see `abs`).
    * @example
    * ```ts
-   * quantity('-3 Δ°F').abs().toString();   //=> '3 Δ°F'
+   * quantity('3 Δ°F').negate().toString();   //=> '-3 Δ°F'
+   * quantity('300 K').negate();               // throws DimensionError
    * ```
    */
   negate(): Signed<D> {
@@ -401,7 +398,15 @@ export class BaseQuantity<out D extends AnyDimension> {
     return this.scaled(-this.value, `−${this.toString()}`) as Signed<D>;
   }
 
-  /** The magnitude, in the same unit. Refused for an absolute temperature. */
+  /**
+   * The magnitude, in the same unit. Refused at run time for an absolute temperature. (A compile-time
+   * refusal, typing the result `never`, would make every temperature quantity unassignable to
+   * `BaseQuantity<AnyDimension>`, so it is left to the run time.)
+   * @example
+   * ```ts
+   * quantity('-3 Δ°F').abs().toString();   //=> '3 Δ°F'
+   * ```
+   */
   abs(): Signed<D> {
     this.refuseTemperature('take the absolute value of');
     if (this.unitFactor().kind === 'gauge') return this.withSIValue(Math.abs(this.si), 'the magnitude') as Signed<D>;
@@ -507,10 +512,10 @@ export class BaseQuantity<out D extends AnyDimension> {
  * @example
  * ```ts
  * const p = quantity(500, 'psia');
- * p.in('kPa');            //=> 3447.3786465841806
- * quantity('50 °F').in('K');                 //=> 283.15
+ * p.in('kPa');            //=> 3447.378646584181
+ * quantity('50 °F').in('K');                 //=> 283.15000000000003
  * temperatureDifference(50, '°F').in('K');   //=> 27.77777777777778 (a rise, not a temperature)
- * quantity('14.7 psig').in('psia');          //=> 29.39594... (ambient: standard atmosphere)
+ * quantity('14.7 psig').in('psia');          //=> 29.395948775513446 (ambient: standard atmosphere)
  * ```
  */
 export class Quantity<out D extends Dimension = Dimension> extends BaseQuantity<D> {
@@ -695,9 +700,9 @@ export function splitQuantityText(text: string, counter?: ParseCounter): [number
  *
  * @example
  * ```ts
- * quantity(500, 'psia').in('MPa');      //=> 3.4473786465841806
- * quantity('300 °F').in('K');           //=> 422.0388888888889
- * quantity('2.5 kJ/kg/K').in('Btu/(lbm·°R)'); //=> 0.5971147415687399
+ * quantity(500, 'psia').in('MPa');      //=> 3.4473786465841805
+ * quantity('300 °F').in('K');           //=> 422.03888888888895
+ * quantity('2.5 kJ/kg/K').in('Btu/(lbm·°R)'); //=> 0.5971147415687398
  * quantity('-500 °F');                  // throws OutOfRangeError: below absolute zero
  * quantity(1, 'C');                     // throws UnitError: unknown unit "C"; did you mean "°C" or "degC"?
  * ```
@@ -748,7 +753,7 @@ export function temperatureDifference<U extends UnitOf<'temperature'> | UnitOf<'
  * @throws {@link DimensionError} wrong dimension; {@link InvalidInputError} NaN, infinity, bare number
  * @example
  * ```ts
- * readQuantity('14.7 psig', 'pressure', 'p');   //=> 202677.9 (Pa)
+ * readQuantity('14.7 psig', 'pressure', 'p');   //=> 202677.9322095749 (Pa)
  * readQuantity('300 K', 'pressure', 'p');      // throws DimensionError: p must be a pressure
  * ```
  */

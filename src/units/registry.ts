@@ -243,7 +243,14 @@ export function asDimension(u: ResolvedUnit, dimension: Dimension, parameter: st
   throw new DimensionError(dimension, u.dimension, `"${previewText(u.text)}" is a unit of ${describe(u.dimension)}, but a ${describe(dimension)} is expected here`, parameter);
 }
 
-/** {@link resolveUnit}, read as the expected dimension (see {@link asDimension}). */
+/**
+ * {@link resolveUnit}, read as the expected dimension (see {@link asDimension}).
+ * @example
+ * ```ts
+ * resolveUnitAs('kJ/(kg·K)', 'specificEntropy').dimension;   //=> 'specificEntropy'
+ * resolveUnitAs('kJ/kg', 'specificEntropy');                 // throws DimensionError
+ * ```
+ */
 export function resolveUnitAs(text: string, dimension: Dimension, parameter = 'unit'): ResolvedUnit {
   return asDimension(resolveUnit(text), dimension, parameter);
 }
@@ -252,6 +259,11 @@ export function resolveUnitAs(text: string, dimension: Dimension, parameter = 'u
  * Resolves a linear unit expression of any dimension, named or not (`W/K`, `kg·m²/(s³·K)`):
  * for quantities from arithmetic whose dimension heatstate does not name. Temperature
  * scales, differences and gauge units are refused here (they are not plain factors).
+ * @example
+ * ```ts
+ * resolveExpression('Btu/(h·°F)').factor;   //=> 0.52752792631
+ * resolveExpression('W/K').dimension;       //=> undefined (heatstate names no such dimension)
+ * ```
  */
 export function resolveExpression(text: string): ResolvedExpression {
   checkString(text, 'unit');
