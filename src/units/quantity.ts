@@ -98,8 +98,6 @@ type IsScalar<D> = [D] extends [ScalarDimension] ? true : false;
 type ScaleFactor<D> = IsTemperature<D> extends true ? never : number;
 type ProductAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : IsScalar<D> extends true ? (IsTemperature<O> extends true ? never : unknown) : unknown;
 type QuotientAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : unknown;
-/** negate() and abs() keep the dimension (and throw for an absolute temperature, which has no sign). */
-type Signed<D extends AnyDimension> = QuantityOf<D>;
 type MinusOperand<D extends AnyDimension> = D extends 'temperature' ? 'temperature' | 'temperatureDifference' : D;
 type MinusResult<D extends AnyDimension, O extends AnyDimension> = D extends 'temperature' ? (O extends 'temperature' ? 'temperatureDifference' : 'temperature') : D;
 /** A quantity operand whose dimension `O` is inferred from its `dimension` field alone. */
@@ -392,10 +390,10 @@ export class BaseQuantity<out D extends AnyDimension> {
    * quantity('300 K').negate();               // throws DimensionError
    * ```
    */
-  negate(): Signed<D> {
+  negate(): QuantityOf<D> {
     this.refuseTemperature('negate');
-    if (this.unitFactor().kind === 'gauge') return this.withSIValue(-this.si, 'the negation') as Signed<D>;
-    return this.scaled(-this.value, `−${this.toString()}`) as Signed<D>;
+    if (this.unitFactor().kind === 'gauge') return this.withSIValue(-this.si, 'the negation') as QuantityOf<D>;
+    return this.scaled(-this.value, `−${this.toString()}`) as QuantityOf<D>;
   }
 
   /**
@@ -407,10 +405,10 @@ export class BaseQuantity<out D extends AnyDimension> {
    * quantity('-3 Δ°F').abs().toString();   //=> '3 Δ°F'
    * ```
    */
-  abs(): Signed<D> {
+  abs(): QuantityOf<D> {
     this.refuseTemperature('take the absolute value of');
-    if (this.unitFactor().kind === 'gauge') return this.withSIValue(Math.abs(this.si), 'the magnitude') as Signed<D>;
-    return this.scaled(Math.abs(this.value), `|${this.toString()}|`) as Signed<D>;
+    if (this.unitFactor().kind === 'gauge') return this.withSIValue(Math.abs(this.si), 'the magnitude') as QuantityOf<D>;
+    return this.scaled(Math.abs(this.value), `|${this.toString()}|`) as QuantityOf<D>;
   }
 
   /**
@@ -445,7 +443,8 @@ export class BaseQuantity<out D extends AnyDimension> {
       const gap = Math.abs(this.si - o.si);
       if (gap <= abs + rel * Math.max(Math.abs(this.si), Math.abs(o.si))) return 0;
     }
-    const [x, y] = o.unit === this.unit ? [this.value, o.value] : [this.si, o.si];
+    // same unit (and, for gauge units, the same ambient pressure): compare the values as given
+    const [x, y] = o.unit === this.unit && o.ambientPa === this.ambientPa ? [this.value, o.value] : [this.si, o.si];
     return x < y ? -1 : x > y ? 1 : 0;
   }
 

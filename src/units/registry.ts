@@ -244,7 +244,9 @@ export function asDimension(u: ResolvedUnit, dimension: Dimension, parameter: st
 }
 
 /**
- * {@link resolveUnit}, read as the expected dimension (see {@link asDimension}).
+ * {@link resolveUnit}, read as the expected dimension: a unit of the same shape is relabelled
+ * (`kJ/(kg·K)` as a specificEntropy), a bare temperature scale reads as a difference where a
+ * difference is expected; anything else throws {@link DimensionError} naming `parameter`.
  * @example
  * ```ts
  * resolveUnitAs('kJ/(kg·K)', 'specificEntropy').dimension;   //=> 'specificEntropy'

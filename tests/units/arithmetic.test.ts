@@ -237,6 +237,12 @@ describe('comparisons', () => {
     expect(quantity('1 atm').eq('14.7 psia', { abs: '0.001 psi' })).toBe(false);
     expect(quantity('212 °F').eq('100.01 °C', { abs: '0.02 Δ°C' })).toBe(true);
   });
+  it('gauge pressures with different ambient pressures compare as absolute pressures', () => {
+    const high = quantity(10, 'psig');
+    const low = quantity(10, 'psig', { ambient: '12.2 psia' });
+    expect(low.lt(high)).toBe(true);
+    expect(high.eq(low)).toBe(false);
+  });
   it('same-unit comparison is by value, exactly', () => {
     expect(quantity(0.1, '°F').eq(quantity(0.1, '°F'))).toBe(true);
     expect(quantity(0.1, '°F').lt(quantity(0.1000000000000001, '°F'))).toBe(true);
