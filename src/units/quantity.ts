@@ -723,6 +723,10 @@ export function quantity(a: number | string, b?: string | QuantityOptions, c?: Q
   return build(a, b, c);
 }
 
+type DifferenceUnit = UnitOf<'temperature'> | UnitOf<'temperatureDifference'>;
+/** A literal must be a temperature or difference spelling; a run-time string is checked at run time. */
+type DifferenceUnitCheck<U> = string extends U ? unknown : U extends DifferenceUnit ? unknown : DifferenceUnit;
+
 /**
  * A temperature difference (a rise or a drop), in K, °C, °F or °R degrees.
  * A difference of 50 °F is 27.78 K; compare `quantity(50, '°F')`, the temperature 283.15 K.
@@ -733,7 +737,7 @@ export function quantity(a: number | string, b?: string | QuantityOptions, c?: Q
  * temperatureDifference(10, 'K').in('Δ°F');  //=> 18
  * ```
  */
-export function temperatureDifference<U extends UnitOf<'temperature'> | UnitOf<'temperatureDifference'> | (string & {})>(value: number, unit: UnitInput<'temperatureDifference', U>): Quantity<'temperatureDifference'> {
+export function temperatureDifference<U extends DifferenceUnit | (string & {})>(value: number, unit: U & DifferenceUnitCheck<U>): Quantity<'temperatureDifference'> {
   checkFinite(value, 'value');
   checkString(unit, 'unit');
   return build(value, unit, undefined, 'temperatureDifference') as Quantity<'temperatureDifference'>;

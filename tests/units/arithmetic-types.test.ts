@@ -152,9 +152,13 @@ describe('run-time unit text: plain strings are accepted, literals are still che
     const junk: string = '500 furlongs';
     expect(() => boilingMargin(junk)).toThrow(UnitError);
   });
-  it('temperatureDifference takes a plain string unit too', () => {
+  it('temperatureDifference takes a plain string unit too; a literal must be a temperature unit', () => {
     const unit: string = '°F';
     expect(temperatureDifference(9, unit).in('ΔK')).toBe(5);
+    // @ts-expect-error psia is not a temperature unit
+    expect(() => temperatureDifference(9, 'psia')).toThrow(DimensionError);
+    // @ts-expect-error nor is an unknown literal
+    expect(() => temperatureDifference(9, 'furlong')).toThrow(UnitError);
   });
   it('in() and to() take any string (checked at run time), as before', () => {
     const unit: string = 'kPa';
