@@ -30,6 +30,7 @@ interface UnitsData {
   atoms: { symbol: string; aliases: string[]; dims: number[]; factor: string; prefixable: boolean; scale?: boolean; definition: string }[];
   offsets: Record<string, { offset: string; unit: string; definition: string }>;
   gauge: { ambientDefault: string; definition: string; units: Record<string, string> };
+  ambiguous: { definition: string; names: Record<string, { meaning: string; use: string[] }> };
 }
 
 /** Evaluates an exact factor expression: decimal numbers joined by `*`, `/` and `^` (integer powers). */
@@ -149,6 +150,9 @@ export function renderFactorsModule(): string {
   lines.push('');
   lines.push('/** Gauge pressure units and the absolute unit each is read in. */');
   lines.push(`export const GAUGE_UNITS: Readonly<Record<string, string>> = ${JSON.stringify(data.gauge.units)};`);
+  lines.push('');
+  lines.push('/** Names the trade uses for more than one unit: refused, with the unambiguous spellings to use instead. */');
+  lines.push(`export const AMBIGUOUS_NAMES: Readonly<Record<string, { readonly meaning: string; readonly use: readonly string[] }>> = ${JSON.stringify(data.ambiguous.names)};`);
   lines.push('');
   lines.push('/** Default ambient pressure for gauge units: the standard atmosphere, 101 325 Pa (exact). */');
   lines.push(`export const DEFAULT_AMBIENT_PA = ${String(nearestDouble(evaluateExact(data.gauge.ambientDefault)))};`);

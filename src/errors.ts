@@ -15,12 +15,12 @@ export type ErrorCode =
   | 'dimension.mismatch'
   | 'input.not-finite'
   | 'input.invalid'
+  | 'result.not-finite'
   | 'range.outside'
   | 'name.unknown'
   | 'formula.invalid'
   | 'definition.invalid'
   | 'solve.no-convergence'
-  | 'result.not-finite'
   | 'internal.unexpected';
 
 /**
@@ -85,10 +85,13 @@ export class UnitError extends HeatstateError {
   static override readonly kind: string = 'UnitError';
   /** The unit text as given. */
   readonly unit: string;
+  /** Known spellings close to an unknown name, best first (empty when none is close). */
+  readonly suggestions: readonly string[];
 
-  constructor(code: 'unit.unknown' | 'unit.syntax', unit: string, message: string) {
+  constructor(code: 'unit.unknown' | 'unit.syntax', unit: string, message: string, suggestions: readonly string[] = []) {
     super(code, message);
     this.unit = unit;
+    this.suggestions = suggestions;
   }
 }
 
@@ -110,7 +113,7 @@ export class DimensionError extends HeatstateError {
   }
 }
 
-/** A NaN or infinite number, or an input of the wrong shape. */
+/** A NaN or infinite number, or an input of the wrong shape (`input.not-finite`, `input.invalid`). */
 export class InvalidInputError extends HeatstateError {
   static override readonly kind: string = 'InvalidInputError';
   /** The parameter or field that was wrong. */
@@ -251,7 +254,10 @@ export class ConvergenceError extends HeatstateError {
   }
 }
 
-/** A model produced a value that is not a finite number (an overflow inside the model, not the caller's input). */
+/**
+ * A computed value that is not a finite number (`result.not-finite`): an overflow in arithmetic or a
+ * unit conversion, or a model that produced NaN or infinity. Not the caller's input at fault.
+ */
 export class ResultError extends HeatstateError {
   static override readonly kind: string = 'ResultError';
   /** The property whose value was not finite. */

@@ -55,7 +55,7 @@ function inBounds(x: number, b: Bounds): boolean {
  * ```
  */
 export function readInput<D extends Dimension>(input: QuantityLike<D>, dimension: D, parameter: string, bounds?: Bounds, units?: CallUnits): number {
-  const si = readQuantity(input, dimension, parameter);
+  const si = readQuantity<D, string>(input as string, dimension, parameter);
   units?.note(input, dimension);
   if (bounds !== undefined && !inBounds(si, bounds)) throw rangeError(parameter, si, dimension, bounds, units);
   return si;
@@ -85,7 +85,7 @@ export function readTemperature(input: QuantityLike<'temperature'>, parameter: s
  * ```
  */
 export function readAbsolutePressure(input: QuantityLike<'pressure'>, parameter: string, bounds?: { readonly max: number; readonly scope: string }, units?: CallUnits): number {
-  const p = readQuantity(input, 'pressure', parameter);
+  const p = readQuantity<'pressure', string>(input as string, 'pressure', parameter);
   units?.note(input, 'pressure');
   const max = bounds?.max ?? Infinity;
   const scope = bounds?.scope ?? 'absolute pressure';

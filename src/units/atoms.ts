@@ -23,6 +23,8 @@ export interface AtomLookup {
   atom(name: string): AtomRecord | undefined;
   /** Known SI prefixes, longest first. */
   readonly prefixes: readonly string[];
+  /** Known spellings close to an unknown name, for the error's "did you mean". */
+  suggest?(name: string): readonly string[];
 }
 
 /** A resolved term: prefix + atom, raised to a power. */
@@ -52,7 +54,10 @@ export function resolveTerms(terms: readonly UnitTerm[], lookup: AtomLookup, tex
         if (base && base.prefixable) return { prefix: p, atom: base, exponent: t.exponent };
       }
     }
-    throw new UnitError('unit.unknown', text, `unknown unit "${t.name}" in "${text}"`);
+    const suggestions = lookup.suggest?.(t.name) ?? [];
+    const hint = suggestions.length > 0 ? `; did you mean ${suggestions.map((x) => `"${x}"`).join(' or ')}?` : '';
+    const where = t.name === text.trim() ? '' : ` in "${text}"`;
+    throw new UnitError('unit.unknown', text, `unknown unit "${t.name}"${where}${hint}`, suggestions);
   });
 }
 

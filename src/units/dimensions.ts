@@ -6,6 +6,12 @@
  * dimensions: an absolute temperature (50 °F = 283.15 K) converts with an offset,
  * a difference (a rise of 50 °F = 27.78 K) with the scale factor only.
  *
+ * Some other dimensions share exponents too, and are kept apart for the same reason: the
+ * compiler can tell a specific heat (cp) from a specific entropy (s), a kinematic viscosity (nu)
+ * from a thermal diffusivity (alpha), a humidity ratio (kg water per kg dry air) from a plain
+ * number. Their units are shared (J/(kg·K), m²/s): unit text resolves to the dimension a caller
+ * expects, and to the first-listed dimension of that shape when nothing is expected.
+ *
  * @module
  */
 
@@ -20,6 +26,7 @@ export const DIMENSIONS = {
   pressure: [1, -1, -2, 0, 0],
   specificEnergy: [0, 2, -2, 0, 0],
   specificHeat: [0, 2, -2, -1, 0],
+  specificEntropy: [0, 2, -2, -1, 0],
   specificVolume: [-1, 3, 0, 0, 0],
   density: [1, -3, 0, 0, 0],
   molarMass: [1, 0, 0, 0, -1],
@@ -39,8 +46,11 @@ export const DIMENSIONS = {
   velocity: [0, 1, -1, 0, 0],
   force: [1, 1, -2, 0, 0],
   dynamicViscosity: [1, -1, -1, 0, 0],
+  kinematicViscosity: [0, 2, -1, 0, 0],
+  thermalDiffusivity: [0, 2, -1, 0, 0],
   thermalConductivity: [1, 1, -3, -1, 0],
   surfaceTension: [1, 0, -2, 0, 0],
+  humidityRatio: [0, 0, 0, 0, 0],
 } as const satisfies Record<string, DimensionVector>;
 
 /** The name of a dimension, for example `'pressure'` or `'specificHeat'`. */
@@ -54,6 +64,7 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   pressure: 'Pa',
   specificEnergy: 'J/kg',
   specificHeat: 'J/(kg·K)',
+  specificEntropy: 'J/(kg·K)',
   specificVolume: 'm³/kg',
   density: 'kg/m³',
   molarMass: 'kg/mol',
@@ -73,17 +84,38 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   velocity: 'm/s',
   force: 'N',
   dynamicViscosity: 'Pa·s',
+  kinematicViscosity: 'm²/s',
+  thermalDiffusivity: 'm²/s',
   thermalConductivity: 'W/(m·K)',
   surfaceTension: 'N/m',
+  humidityRatio: 'kg/kg',
 };
 
 const BY_VECTOR = new Map<string, Dimension>();
 for (const [name, vector] of Object.entries(DIMENSIONS) as [Dimension, DimensionVector][]) {
-  // temperature wins for the bare temperature vector; differences are marked explicitly with Δ
-  if (name !== 'temperatureDifference') BY_VECTOR.set(vector.join(','), name);
+  // the first-listed dimension of each shape wins (temperature before temperatureDifference,
+  // specificHeat before specificEntropy, dimensionless before humidityRatio, ...)
+  const key = vector.join(',');
+  if (!BY_VECTOR.has(key)) BY_VECTOR.set(key, name);
 }
 
-/** The named dimension with these exponents, or `undefined`. A bare temperature vector is `temperature`. */
+/**
+ * The named dimension with these exponents, or `undefined`. Where several share the exponents,
+ * the first listed in {@link DIMENSIONS} (a bare temperature vector is `temperature`).
+ */
 export function dimensionOfVector(vector: DimensionVector): Dimension | undefined {
   return BY_VECTOR.get(vector.join(','));
+}
+
+/** True when two dimensions have the same base-quantity exponents (specificHeat and specificEntropy). */
+export function sameShape(a: Dimension, b: Dimension): boolean {
+  const va = DIMENSIONS[a];
+  const vb = DIMENSIONS[b];
+  for (let i = 0; i < 5; i++) if (va[i] !== vb[i]) return false;
+  return true;
+}
+
+/** True for a name in {@link DIMENSIONS}. */
+export function isDimension(name: unknown): name is Dimension {
+  return typeof name === 'string' && Object.prototype.hasOwnProperty.call(DIMENSIONS, name);
 }

@@ -30,7 +30,7 @@ export const ATOMS: readonly (readonly [string, readonly string[], readonly [num
   ["mol", [], [0, 0, 0, 0, 1], 1, true, false], // SI base unit
   ["lbmol", [], [0, 0, 0, 0, 1], 453.59237, false, false], // pound-mole: the amount whose mass in lbm equals the molar mass in g/mol; 1 lbmol = 453.59237 mol (exact, from 1 lbm = 0.45359237 kg)
   ["Pa", [], [1, -1, -2, 0, 0], 1, true, false], // SI derived unit, N/m²
-  ["bar", [], [1, -1, -2, 0, 0], 100000, true, false], // SP 811 B.8: 1 bar = 100 kPa (exact)
+  ["bar", ["bara"], [1, -1, -2, 0, 0], 100000, true, false], // SP 811 B.8: 1 bar = 100 kPa (exact)
   ["atm", [], [1, -1, -2, 0, 0], 101325, false, false], // SP 811 B.8: standard atmosphere = 101 325 Pa (exact, 10th CGPM 1954)
   ["psi", ["psia"], [1, -1, -2, 0, 0], 6894.757293168362, false, false], // SP 811 B.8: 1 lbf/in² = 6894.757... Pa (lbf = lbm × standard gravity, in = 0.0254 m)
   ["mmHg", [], [1, -1, -2, 0, 0], 133.322387415, false, false], // SP 811 B.8: conventional millimetre of mercury = 133.322 387 415 Pa (13 595.1 kg/m³ × standard gravity × 1 mm)
@@ -56,8 +56,25 @@ export const ATOMS: readonly (readonly [string, readonly string[], readonly [num
   ["mi", [], [0, 1, 0, 0, 0], 1609.344, false, false], // SP 811 B.8: international mile = 1609.344 m (exact)
   ["mph", [], [0, 1, -1, 0, 0], 0.44704, false, false], // SP 811 B.8: mile per hour = 0.447 04 m/s (exact)
   ["P", ["poise"], [1, -1, -1, 0, 0], 0.1, true, false], // SP 811 B.8: 1 P = 0.1 Pa·s (exact); 1 cP = 1 mPa·s
-  ["gpm", [], [0, 3, -1, 0, 0], 0.0000630901964, false, false], // US gallon per minute (gal/min)
-  ["cfm", [], [0, 3, -1, 0, 0], 0.0004719474432, false, false], // cubic foot per minute (ft³/min)
+  ["gpm", ["GPM"], [0, 3, -1, 0, 0], 0.0000630901964, false, false], // US gallon per minute (gal/min)
+  ["cfm", ["CFM"], [0, 3, -1, 0, 0], 0.0004719474432, false, false], // cubic foot per minute (ft³/min)
+  ["St", ["stokes"], [0, 2, -1, 0, 0], 0.0001, true, false], // SP 811 B.8: 1 St = 1e-4 m²/s (exact); 1 cSt = 1 mm²/s
+  ["gr", ["grain"], [1, 0, 0, 0, 0], 0.00006479891, false, false], // SP 811 B.8: grain = 1/7000 lbm = 64.798 91 mg (exact)
+  ["ton_short", [], [1, 0, 0, 0, 0], 907.18474, false, false], // SP 811 B.8: ton (short, 2000 lb) = 907.184 74 kg (exact)
+  ["kgf", [], [1, 1, -2, 0, 0], 9.80665, false, false], // SP 811 B.8: kilogram-force = 9.806 65 N (exact: 1 kg under standard gravity, 3rd CGPM 1901)
+  ["inH2O", ["inWC","in_H2O"], [1, -1, -2, 0, 0], 249.08891, false, false], // SP 811 B.8: inch of water, conventional = 249.088 91 Pa (exact: a column of water of 1000 kg/m³ under standard gravity 9.806 65 m/s²)
+  ["ftH2O", ["ftWC","ft_H2O"], [1, -1, -2, 0, 0], 2989.06692, false, false], // SP 811 B.8: foot of water, conventional = 2989.066 92 Pa (exact: 1000 kg/m³ under standard gravity)
+  ["mmH2O", ["mmWC","mm_H2O"], [1, -1, -2, 0, 0], 9.80665, false, false], // SP 811 B.8: millimetre of water, conventional = 9.806 65 Pa (exact: 1000 kg/m³ under standard gravity)
+  ["cmH2O", ["cmWC","cm_H2O"], [1, -1, -2, 0, 0], 98.0665, false, false], // SP 811 B.8: centimetre of water, conventional = 98.0665 Pa (exact: 1000 kg/m³ under standard gravity)
+  ["MMBtu", ["MMBTU"], [1, 2, -2, 0, 0], 1055055852.62, false, false], // one million Btu_IT (the trade writes MM for a million; common practice) = 1.055 055 852 62 GJ (exact from SP 811 B.8 Btu_IT)
+  ["therm", ["therm_EC","thm"], [1, 2, -2, 0, 0], 105505585.262, false, false], // SP 811 B.8: therm (EC) = 100 000 Btu_IT = 105.505 585 262 MJ (exact)
+  ["therm_US", [], [1, 2, -2, 0, 0], 105480400, false, false], // SP 811 B.8: therm (U.S.) = 1.054 804 E+08 J (100 000 Btu_59°F; the unit of US natural gas billing)
+  ["quad", [], [1, 2, -2, 0, 0], 1055055852620000000, false, false], // quad = 10^15 Btu_IT (common practice in energy statistics; not listed in SP 811) = 1.055 055 852 62 EJ
+  ["Btuh", ["BTUH","Btu_h"], [1, 2, -3, 0, 0], 0.2930710701722222, false, false], // SP 811 B.8: Btu_IT per hour = 0.293 071 070 172 W (exact from the Btu_IT)
+  ["MBH", [], [1, 2, -3, 0, 0], 293.0710701722222, false, false], // thousand Btu_IT per hour (HVAC trade usage; common practice) = 293.071 070 172 W
+  ["hp_boiler", [], [1, 2, -3, 0, 0], 9809.5, false, false], // SP 811 B.8: horsepower (boiler) = 9.809 50 E+03 W (as SP 811 prints it; the unit has no single exact definition)
+  ["hp_electric", [], [1, 2, -3, 0, 0], 746, false, false], // SP 811 B.8: horsepower (electric) = 746 W (exact)
+  ["hp_metric", ["PS"], [1, 2, -3, 0, 0], 735.49875, false, false], // SP 811 B.8: horsepower (metric) = 75 kgf·m/s = 735.498 75 W (exact)
 ];
 
 /** Compound units by canonical key (sorted prefixed symbols with exponents), factor to SI. */
@@ -69,6 +86,7 @@ export const COMPOUND_FACTORS: Readonly<Record<string, number>> = {
   "mbar": 100,
   "in^-2·lbf": 6894.757293168362,
   "ft^-2·lbf": 47.880258980335846,
+  "cm^-2·kgf": 98066.5,
   "J·kg^-1": 1,
   "kJ·kg^-1": 1000,
   "MJ·kg^-1": 1000000,
@@ -125,6 +143,7 @@ export const COMPOUND_FACTORS: Readonly<Record<string, number>> = {
   "MW": 1000000,
   "GW": 1000000000,
   "Btu·h^-1": 0.2930710701722222,
+  "MMBtu·h^-1": 293071.0701722222,
   "h^-1·kcal": 1.163,
   "ft·lbf·s^-1": 1.3558179483314003,
   "kg·s^-1": 1,
@@ -163,18 +182,30 @@ export const COMPOUND_FACTORS: Readonly<Record<string, number>> = {
   "kN": 1000,
   "Pa·s": 1,
   "mPa·s": 0.001,
+  "s·µPa": 0.000001,
   "cP": 0.001,
   "ft^-1·lbm·s^-1": 1.4881639435695537,
   "ft^-1·h^-1·lbm": 0.00041337887321376497,
   "ft^-2·lbf·s": 47.880258980335846,
+  "m^2·s^-1": 1,
+  "mm^2·s^-1": 0.000001,
+  "cm^2·s^-1": 0.0001,
+  "ft^2·h^-1": 0.0000258064,
+  "ft^2·s^-1": 0.09290304,
+  "cSt": 0.000001,
   "K^-1·W·m^-1": 1,
   "W·m^-1·°C^-1": 1,
+  "K^-1·m^-1·mW": 0.001,
   "Btu·ft^-1·h^-1·°F^-1": 1.7307346663713912,
   "Btu·ft^-1·h^-1·°R^-1": 1.7307346663713912,
+  "Btu·ft^-2·h^-1·in·°F^-1": 0.1442278888642826,
   "N·m^-1": 1,
   "m^-1·mN": 0.001,
   "cm^-1·dyn": 0.001,
   "ft^-1·lbf": 14.593902937206364,
+  "": 1,
+  "g·kg^-1": 0.001,
+  "gr·lbm^-1": 0.00014285714285714287,
 };
 
 /** Offsets of the relative temperature scales, in their own degrees: T/K = t/°C + 273.15; T/°R = t/°F + 459.67 (exact). */
@@ -184,7 +215,10 @@ export const TEMPERATURE_OFFSETS: Readonly<Record<string, number>> = {
 };
 
 /** Gauge pressure units and the absolute unit each is read in. */
-export const GAUGE_UNITS: Readonly<Record<string, string>> = {"psig":"psi","barg":"bar","kPag":"kPa"};
+export const GAUGE_UNITS: Readonly<Record<string, string>> = {"psig":"psi","barg":"bar","kPag":"kPa","bar(g)":"bar","psi(g)":"psi","kPa(g)":"kPa","MPag":"MPa","MPa(g)":"MPa","kgf/cm²g":"kgf/cm²","kgf/cm2g":"kgf/cm2","kgf/cm²(g)":"kgf/cm²"};
+
+/** Names the trade uses for more than one unit: refused, with the unambiguous spellings to use instead. */
+export const AMBIGUOUS_NAMES: Readonly<Record<string, { readonly meaning: string; readonly use: readonly string[] }>> = {"ton":{"meaning":"a ton of refrigeration (12 000 Btu/h), a metric ton (1000 kg) or a short ton (2000 lbm)","use":["TR","t","ton_short"]},"tons":{"meaning":"a ton of refrigeration (12 000 Btu/h), a metric ton (1000 kg) or a short ton (2000 lbm)","use":["TR","t","ton_short"]},"MBtu":{"meaning":"a thousand Btu (trade usage, M = 1000) or a million Btu (SI prefix M)","use":["MMBtu","Btu"]}};
 
 /** Default ambient pressure for gauge units: the standard atmosphere, 101 325 Pa (exact). */
 export const DEFAULT_AMBIENT_PA = 101325;

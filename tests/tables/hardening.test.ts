@@ -71,7 +71,7 @@ const cases: Case[] = [
   ['defineTable columns with a prototype set', () => defineTable({ name: 't', source: 's', key: 'T', columns: { T: K([300, 310]), __proto__: H([1, 2]) } } as TableData), DefinitionError, 'definition.invalid', 'columns must be a plain object'],
   ['grid axis named constructor', () => gridFromJSON(gridWith({ x: { name: 'constructor', unit: 'K', values: [300, 400] } })), DefinitionError, 'definition.invalid', 'axis "constructor": the name is reserved'],
   // units in headers name the column
-  ['compound temperature unit in a header', () => tableFromCSV('T [degF·m/m], h [kJ/kg]\n300, 1\n310, 2\n'), DefinitionError, 'definition.invalid', /columns\.T\.unit: column "T": unit "degF·m\/m"/],
+  ['compound temperature unit in a header', () => tableFromCSV('T [degF·m/m], h [kJ/kg]\n300, 1\n310, 2\n'), DefinitionError, 'definition.invalid', /columns\.T\.unit: column "T": "degF·m\/m" is a temperature written as a compound unit/],
   ['unknown unit in a header', () => tableFromCSV('T [K], h [kJ/furlong]\n300, 1\n310, 2\n'), DefinitionError, 'definition.invalid', 'column "h": unknown unit "furlong"'],
   ['grid column all null', () => gridFromJSON(gridWith({ columns: { h: { unit: 'kJ/kg', values: [[null, null], [null, null]] } } })), DefinitionError, 'definition.invalid', 'column "h" holds no values'],
   // lookups

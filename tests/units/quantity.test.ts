@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DimensionError, InvalidInputError, OutOfRangeError, UnitError } from '../../src/errors.js';
+import { DimensionError, InvalidInputError, OutOfRangeError, ResultError, UnitError } from '../../src/errors.js';
 import { Quantity, quantity, readQuantity, temperatureDifference } from '../../src/units/index.js';
 import { expectClose } from '../helpers/tolerance.js';
 
@@ -123,7 +123,7 @@ describe('Quantity', () => {
   it('fromSI wraps SI core results', () => {
     expect(Quantity.fromSI(2500, 'specificHeat').toString()).toBe('2500 J/(kg·K)');
     expect(Quantity.fromSI(2500, 'specificHeat', 'kJ/(kg·K)').value).toBe(2.5);
-    expect(() => Quantity.fromSI(NaN, 'pressure')).toThrow(InvalidInputError);
+    expect(() => Quantity.fromSI(NaN, 'pressure')).toThrow(ResultError);
   });
   it('serialises to JSON as value, unit and dimension', () => {
     expect(JSON.stringify(quantity(3, 'bar'))).toBe('{"value":3,"unit":"bar","dimension":"pressure"}');

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fromSI, registryNames, resolveUnit, toSI } from '../../src/units/registry.js';
+import { fromSI, registryNames, resolveUnit, resolveUnitAs, toSI } from '../../src/units/registry.js';
 import { DIMENSIONS, SI_UNIT, UNIT_SPELLINGS, type Dimension } from '../../src/units/index.js';
 import { ulpDistance } from '../helpers/tolerance.js';
 
@@ -25,12 +25,23 @@ describe('unit registry invariants', () => {
   it('every registry name resolves', () => {
     for (const name of registryNames()) expect(() => resolveUnit(name), name).not.toThrow();
   });
-  it.each(spellings)('every %s spelling resolves to its own dimension', (dimension, list) => {
-    for (const s of list) expect(resolveUnit(s).dimension, s).toBe(dimension);
+  it.each(spellings)('every %s spelling resolves to its own dimension where that is expected', (dimension, list) => {
+    for (const s of list) expect(resolveUnitAs(s, dimension).dimension, s).toBe(dimension);
+  });
+  it('without an expected dimension, a spelling resolves to the first dimension that lists it (J/(kg·K): specificHeat, m²/s: kinematicViscosity)', () => {
+    for (const [dimension, list] of spellings) {
+      for (const s of list) {
+        const first = spellings.find(([, l]) => l.includes(s))![0];
+        expect(resolveUnit(s).dimension, `${s} (listed under ${dimension})`).toBe(first);
+      }
+    }
+    expect(resolveUnit('kJ/(kg·K)').dimension).toBe('specificHeat');
+    expect(resolveUnit('cSt').dimension).toBe('kinematicViscosity');
+    expect(resolveUnit('g/kg').dimension).toBe('humidityRatio');
   });
   it('every dimension has an SI unit that resolves to it with factor 1', () => {
     for (const d of Object.keys(DIMENSIONS) as Dimension[]) {
-      const u = resolveUnit(SI_UNIT[d]);
+      const u = resolveUnitAs(SI_UNIT[d], d);
       expect(u.dimension, d).toBe(d);
       expect(u.factor, d).toBe(1);
     }
