@@ -19,6 +19,7 @@ import { if97EnhancementInputs, If97InputsWork } from '../../src/water/transport
 import { surfaceTension, SurfaceTensionResult } from '../../src/water/transport/surface-tension.js';
 import { viscosity, ViscosityResult } from '../../src/water/transport/viscosity.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { water } from '../../src/water/index.js';
 
 /** Agreement within half a unit in the last printed decimal (and a hair for binary rounding). */
 const toDecimals = (actual: number, printed: number, decimals: number) => expectClose(actual, printed, { abs: 0.5000001 * 10 ** -decimals });
@@ -118,5 +119,27 @@ describe('IAPWS R1-76(2014) Table 1: surface tension, to the printed 0.01 mN/m',
     const T = Math.round((t + 273.15) * 100) / 100; // 0.01 °C is 273.16 K exactly, not 273.15999…
     expect(surfaceTension(T, out)).toBe(Status.ok);
     toDecimals(out.sigma * 1e3, printed, 2);
+  });
+});
+
+describe('IAPWS R12-08 and R15-11 Table 5 with the releases\' own IAPWS-95 derivatives, through water.viscosity and water.thermalConductivity', () => {
+  // the releases computed Table 5 with IAPWS-95: with its derivatives (src/water/transport/iapws95-inputs.ts)
+  // every printed digit comes out, which checks the enhancement coefficients and the IAPWS-95 code together
+  it.each([
+    [122, '25.520677'], [222, '31.337589'], [272, '36.228143'], [322, '42.961579'], [372, '45.688204'], [422, '49.436256'],
+  ])('R12-08 Table 5: T = 647.35 K, ρ = %d kg/m³: μ = %s µPa·s', (rho, printed) => {
+    toDecimals(water.viscosity({ T: '647.35 K', rho: `${rho} kg/m³` }).in('µPa·s'), Number(printed), decimalsOf(printed));
+  });
+  it.each([
+    [1, '51.9298924'], [122, '130.922885'], [222, '367.787459'], [272, '757.959776'], [322, '1443.75556'], [372, '650.319402'], [422, '448.883487'], [750, '600.961346'],
+  ])('R15-11 Table 5: T = 647.35 K, ρ = %d kg/m³: λ = %s mW/(m·K)', (rho, printed) => {
+    toDecimals(water.thermalConductivity({ T: '647.35 K', rho: `${rho} kg/m³` }).in('mW/(m·K)'), Number(printed), decimalsOf(printed));
+  });
+  it('R12-08 Table 4 through the facade without the enhancement, to the printed 6 decimals', () => {
+    toDecimals(water.viscosity({ T: '298.15 K', rho: '998 kg/m³' }, { criticalEnhancement: false }).in('µPa·s'), 889.7351, 6);
+    toDecimals(water.viscosity({ T: '873.15 K', rho: '600 kg/m³' }, { criticalEnhancement: false }).in('µPa·s'), 77.430195, 6);
+  });
+  it('R1-76(2014) Table 1 through water.surfaceTension: 25 °C gives 71.97 mN/m', () => {
+    toDecimals(water.surfaceTension({ T: '25 °C' }).in('mN/m'), 71.97, 2);
   });
 });

@@ -11,3 +11,4 @@ export { conductivityPressureLimit, ConductivityResult, thermalConductivity, CON
 export { surfaceTension, SurfaceTensionResult, SURFACE_TENSION_T_MAX, SURFACE_TENSION_T_MIN } from './surface-tension.js';
 export { enhancementInputsFromState, if97EnhancementInputs, if97StateAtDensity, If97InputsWork, IF97_INPUTS_T_MAX, referenceDensityDerivative, REFERENCE_RHO_MAX, REFERENCE_RHO_REGION2_MAX } from './if97-inputs.js';
 export { SteamDiluteTransport } from './dilute-steam.js';
+export { iapws95EnhancementInputs, Iapws95InputsWork } from './iapws95-inputs.js';
