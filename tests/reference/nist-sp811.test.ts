@@ -51,14 +51,17 @@ const printed: [string, string, number][] = [
   ['ft·lbf', 'J', 1.355818],
 ];
 
+/** [from, factor, to]: the order the test title reads in ("1 ft = 0.3048 m"). */
+const titled = (rows: [string, string, number][]) => rows.map(([from, to, factor]) => [from, factor, to] as const);
+
 describe('NIST SP 811 B.8 exact factors', () => {
-  it.each(exact)('1 %s = %d %s exactly', (from, to, factor) => {
+  it.each(titled(exact))('1 %s = %s %s exactly', (from, factor, to) => {
     expect(quantity(1, from).in(to)).toBe(factor);
   });
 });
 
 describe('NIST SP 811 B.8 printed factors (7 significant digits)', () => {
-  it.each(printed)('1 %s ≈ %d %s', (from, to, factor) => {
+  it.each(titled(printed))('1 %s ≈ %s %s', (from, factor, to) => {
     expectClose(quantity(1, from).in(to), factor, { rel: 6e-7 });
   });
 });
