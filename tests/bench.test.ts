@@ -1,4 +1,4 @@
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -14,9 +14,12 @@ beforeAll(() => builtDist(), 300_000);
 
 describe('bench/ (figures only: nothing here asserts a time)', () => {
   it('runs to completion in quick mode and reports every case, the cold starts, the machine and Node version', async () => {
-    const out = join(mkdtempSync(join(tmpdir(), 'heatstate-bench-')), 'results.json');
+    const dir = mkdtempSync(join(tmpdir(), 'heatstate-bench-'));
+    const out = join(dir, 'results.json');
     await runCommand(join(root, 'node_modules/.bin/tsx'), ['bench/run.ts', '--quick'], { cwd: root, env: { ...process.env, HEATSTATE_BENCH_OUT: out }, timeout: 240_000 });
-    const results = JSON.parse(readFileSync(out, 'utf8')) as { node: string; cores: number; rows: { name: string; medianNs: number }[]; coldStart: { entry: string; medianMs?: number; skipped?: string }[] };
+    const text = readFileSync(out, 'utf8');
+    rmSync(dir, { recursive: true, force: true });
+    const results = JSON.parse(text) as { node: string; cores: number; rows: { name: string; medianNs: number }[]; coldStart: { entry: string; medianMs?: number; skipped?: string }[] };
     expect(results.node).toBe(process.version);
     expect(results.cores).toBeGreaterThan(0);
     expect(results.rows.map((r) => r.name).sort()).toEqual(cases.map((c) => c.name).sort());

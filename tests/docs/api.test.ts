@@ -6,11 +6,11 @@
  * which tests/package/typecheck.test.ts already does in the same run. Links, comments and the HTML
  * output are checked as `npm run docs` makes them.
  */
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { runCommand } from '../helpers/run.js';
 
 interface Reflection {
@@ -28,12 +28,17 @@ describe('API reference (typedoc)', () => {
   const root = fileURLToPath(new URL('../..', import.meta.url));
   let log = '';
   let project: Reflection = { name: '', kind: 0 };
+  let dir = '';
   beforeAll(async () => {
-    const out = join(mkdtempSync(join(tmpdir(), 'heatstate-docs-')), 'api.json');
-    const { stdout, stderr } = await runCommand(join(root, 'node_modules/.bin/typedoc'), ['--json', out, '--out', join(out, '..', 'html'), '--skipErrorChecking'], { cwd: root, timeout: 240_000 });
+    dir = mkdtempSync(join(tmpdir(), 'heatstate-docs-'));
+    const out = join(dir, 'api.json');
+    const { stdout, stderr } = await runCommand(join(root, 'node_modules/.bin/typedoc'), ['--json', out, '--out', join(dir, 'html'), '--skipErrorChecking'], { cwd: root, timeout: 240_000, background: true });
     log = stdout + stderr;
     project = JSON.parse(readFileSync(out, 'utf8')) as Reflection;
   }, 300_000);
+  afterAll(() => {
+    if (dir) rmSync(dir, { recursive: true, force: true });
+  });
 
   it('builds without errors or broken links', () => {
     expect(log).not.toMatch(/\[(warning|error)\]/);

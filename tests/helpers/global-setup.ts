@@ -11,7 +11,7 @@
  * `npm test` always builds.
  */
 import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, renameSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, readFileSync, renameSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -60,6 +60,8 @@ export default function setup(project: TestProject): () => Promise<void> {
   // teardown: never leave a half-built dist/ behind (the build is short; wait for it)
   return async () => {
     await done;
+    const { code, seconds } = JSON.parse(readFileSync(status, 'utf8')) as { code: number; seconds: number };
+    console.log(`integration global setup: build of dist/ ${code === 0 ? 'done' : `failed (exit code ${code})`} in ${seconds.toFixed(1)} s`);
     rmSync(dir, { recursive: true, force: true });
   };
 }

@@ -7,11 +7,11 @@
  * temporary folder; this file never builds, cleans or writes inside the repository.
  */
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { builtDist } from '../helpers/dist.js';
 import { runCommand as run } from '../helpers/run.js';
 
@@ -19,12 +19,13 @@ const root = fileURLToPath(new URL('../..', import.meta.url));
 /** A dev tool's bin script (from the dev dependencies), run with this Node. */
 const bin = (pkg: string, path: string) => join(root, 'node_modules', pkg, path);
 let files: string[] = [];
+let dir = '';
 let tarball = '';
 let consumer = '';
 
 beforeAll(async () => {
   await builtDist();
-  const dir = mkdtempSync(join(tmpdir(), 'heatstate-pack-'));
+  dir = mkdtempSync(join(tmpdir(), 'heatstate-pack-'));
   const packed = JSON.parse(execFileSync('npm', ['pack', '--json', '--pack-destination', dir], { cwd: root, encoding: 'utf8' })) as { filename: string; files: { path: string }[] }[];
   files = packed[0]!.files.map((f) => f.path).sort();
   tarball = join(dir, packed[0]!.filename);
@@ -33,6 +34,10 @@ beforeAll(async () => {
   writeFileSync(join(consumer, 'package.json'), JSON.stringify({ name: 'consumer', private: true, type: 'module' }));
   await run('npm', ['install', '--no-audit', '--no-fund', '--prefer-offline', '--no-package-lock', tarball], { cwd: consumer, timeout: 240_000 });
 }, 300_000);
+
+afterAll(() => {
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
 
 describe('the packed package', () => {
   it('holds only dist, README, LICENSE, CHANGELOG and package.json', () => {
