@@ -1,22 +1,31 @@
-import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { cases } from '../bench/cases.js';
+import { builtDist } from './helpers/dist.js';
+import { runCommand } from './helpers/run.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 
+// the cold-start figures import this run's dist/
+beforeAll(() => builtDist(), 300_000);
+
 describe('bench/ (figures only: nothing here asserts a time)', () => {
-  it('runs to completion in quick mode and reports every case, the machine and Node version', () => {
-    const out = join(mkdtempSync(join(tmpdir(), 'heatstate-bench-')), 'results.json');
-    execFileSync(fileURLToPath(new URL('../node_modules/.bin/tsx', import.meta.url)), ['bench/run.ts', '--quick'], { cwd: root, env: { ...process.env, HEATSTATE_BENCH_OUT: out }, stdio: 'pipe', timeout: 240_000 });
-    const results = JSON.parse(readFileSync(out, 'utf8')) as { node: string; cores: number; rows: { name: string; medianNs: number }[]; coldStart: unknown };
+  it('runs to completion in quick mode and reports every case, the cold starts, the machine and Node version', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'heatstate-bench-'));
+    const out = join(dir, 'results.json');
+    await runCommand(join(root, 'node_modules/.bin/tsx'), ['bench/run.ts', '--quick'], { cwd: root, env: { ...process.env, HEATSTATE_BENCH_OUT: out }, timeout: 240_000 });
+    const text = readFileSync(out, 'utf8');
+    rmSync(dir, { recursive: true, force: true });
+    const results = JSON.parse(text) as { node: string; cores: number; rows: { name: string; medianNs: number }[]; coldStart: { entry: string; medianMs?: number; skipped?: string }[] };
     expect(results.node).toBe(process.version);
     expect(results.cores).toBeGreaterThan(0);
     expect(results.rows.map((r) => r.name).sort()).toEqual(cases.map((c) => c.name).sort());
     for (const r of results.rows) expect(r.medianNs, r.name).toBeGreaterThan(0);
-    expect(results.coldStart).toBeDefined();
+    // every entry measured (none skipped for want of dist/)
+    expect(results.coldStart.map((c) => c.entry)).toEqual(['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index']);
+    for (const c of results.coldStart) expect(c.medianMs, `${c.entry}: ${c.skipped ?? ''}`).toBeGreaterThan(0);
   }, 300_000);
 });

@@ -1,30 +1,34 @@
 /**
- * examples/browser/index.html in headless Chromium (Debian's `chromium` package, driven by
- * playwright-core with executablePath; `.ci/run` installs chromium when it is missing).
+ * examples/browser/index.html in headless Chromium, driven by playwright-core. The browser comes from
+ * the npm dev dependencies (@sparticuz/chromium; HEATSTATE_CHROMIUM picks another executable): see
+ * tests/helpers/chromium.ts.
  */
-import { execFileSync } from 'node:child_process';
 import { existsSync, readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { createServer, type Server } from 'node:http';
 import { tmpdir } from 'node:os';
 import { extname, join, normalize } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { chromium, type Browser } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { water } from '../src/water/index.js';
+import { launchChromium } from './helpers/chromium.js';
+import { builtDist } from './helpers/dist.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const CHROMIUM = process.env.HEATSTATE_CHROMIUM ?? '/usr/bin/chromium';
 const TYPES: Record<string, string> = { '.html': 'text/html; charset=utf-8', '.js': 'text/javascript; charset=utf-8', '.map': 'application/json' };
 
-let server: Server;
+let server: Server | undefined;
 let base = '';
-let browser: Browser;
+let browser: Browser | undefined;
 
 beforeAll(async () => {
-  if (!existsSync(new URL('../dist/water/index.js', import.meta.url))) execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'pipe' });
-  if (!existsSync(CHROMIUM)) throw new Error(`headless Chromium not found at ${CHROMIUM}: install it (apt-get install chromium) or set HEATSTATE_CHROMIUM`);
+  // the browser starts (and, on the first run, unpacks) while dist/ may still be building
+  const [launched, built] = await Promise.allSettled([launchChromium(), builtDist()]);
+  if (launched.status === 'fulfilled') browser = launched.value.browser;
+  if (built.status === 'rejected') throw built.reason;
+  if (launched.status === 'rejected') throw launched.reason;
   // a static file server for the repository, on loopback only
-  server = createServer((req, res) => {
+  const files = createServer((req, res) => {
     const path = normalize(decodeURIComponent(new URL(req.url ?? '/', 'http://localhost').pathname)).replace(/^(\.\.[/\\])+/, '');
     const file = join(root, path);
     if (!file.startsWith(root) || !existsSync(file)) {
@@ -33,18 +37,17 @@ beforeAll(async () => {
     }
     res.writeHead(200, { 'content-type': TYPES[extname(file)] ?? 'application/octet-stream' }).end(readFileSync(file));
   });
-  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
-  const address = server.address();
+  server = files;
+  await new Promise<void>((resolve) => files.listen(0, '127.0.0.1', resolve));
+  const address = files.address();
   base = `http://127.0.0.1:${typeof address === 'object' && address ? address.port : 0}`;
-  browser = await chromium.launch({
-    executablePath: CHROMIUM,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
-  });
-}, 120_000);
+}, 300_000);
 
+// resolves at once for whatever beforeAll never created
 afterAll(async () => {
   await browser?.close();
-  await new Promise((resolve) => server?.close(resolve));
+  const s = server;
+  if (s) await new Promise<void>((resolve) => s.close(() => resolve()));
 });
 
 /** Width and height from a PNG's IHDR chunk. */
@@ -55,7 +58,7 @@ function pngSize(png: Buffer): [number, number] {
 
 describe('examples/browser/index.html', () => {
   it('imports the ESM build, computes a state in the page, and renders it', async () => {
-    const page = await browser.newPage({ viewport: { width: 800, height: 600 } });
+    const page = await browser!.newPage({ viewport: { width: 800, height: 600 } });
     const errors: string[] = [];
     page.on('pageerror', (e) => errors.push(e.message));
     await page.goto(`${base}/examples/browser/index.html`);

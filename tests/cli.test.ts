@@ -1,11 +1,11 @@
-import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { run } from '../src/cli/run.js';
 import { idealGas } from '../src/ideal-gas/index.js';
 import { incompressible } from '../src/incompressible/index.js';
 import { water } from '../src/water/index.js';
+import { builtDist } from './helpers/dist.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 function cli(...args: string[]): { code: number; out: string; err: string } {
@@ -53,9 +53,7 @@ describe('heatstate command line', () => {
 });
 
 describe('the built bin (dist/cli.js)', () => {
-  beforeAll(() => {
-    if (!existsSync(new URL('../dist/cli.js', import.meta.url))) execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'pipe' });
-  }, 120_000);
+  beforeAll(() => builtDist(), 300_000);
   it('runs from the shell with exit codes', () => {
     const ok = spawnSync(process.execPath, ['dist/cli.js', 'water', 'p=1 atm', 'T=25 °C'], { cwd: root, encoding: 'utf8' });
     expect(ok.status).toBe(0);

@@ -3,15 +3,16 @@
  * instance of the ESM build's classes and the other way round (both loaded into one process, as when
  * a CommonJS dependency and an ESM application both use heatstate). Runs on the built dist/.
  */
-import { existsSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { builtDist } from './helpers/dist.js';
 
 const dist = fileURLToPath(new URL('../dist/', import.meta.url));
-const built = existsSync(`${dist}index.cjs`) && existsSync(`${dist}index.js`);
 
-describe.skipIf(!built)('error classes across the ESM and CommonJS builds', () => {
+beforeAll(() => builtDist());
+
+describe('error classes across the ESM and CommonJS builds', () => {
   it('instanceof holds both ways, for the base class and each kind, and not across kinds', async () => {
     const esm = (await import(/* @vite-ignore */ `${dist}index.js`)) as typeof import('../src/index.js');
     const cjs = createRequire(import.meta.url)(`${dist}index.cjs`) as typeof import('../src/index.js');

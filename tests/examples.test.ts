@@ -1,16 +1,15 @@
 import { execFileSync } from 'node:child_process';
-import { existsSync, readdirSync } from 'node:fs';
+import { readdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { builtDist } from './helpers/dist.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
 const tsx = fileURLToPath(new URL('../node_modules/.bin/tsx', import.meta.url));
 const run = (file: string, env: Record<string, string> = {}) => execFileSync(file.endsWith('.ts') ? tsx : process.execPath, [file], { cwd: root, encoding: 'utf8', timeout: 120_000, env: { ...process.env, ...env } });
 
-// examples that import the built package ('heatstate/...') need dist/: `npm test` builds first
-beforeAll(() => {
-  if (!existsSync(new URL('../dist/index.js', import.meta.url))) execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'pipe' });
-}, 120_000);
+// examples import the built package ('heatstate/...') as users do: they need this run's dist/
+beforeAll(() => builtDist(), 300_000);
 
 describe('examples/', () => {
   it('every example is covered by a test below', () => {

@@ -1,30 +1,43 @@
 /**
- * Package hygiene: the packed tarball holds only what users need, installs into a fresh consumer
- * project, loads with ESM import and CommonJS require, and its types check with tsc.
- * (publint and @arethetypeswrong/cli run in `npm run check:package`.)
+ * Package hygiene: the packed tarball holds only what users need, passes publint and
+ * @arethetypeswrong/cli, installs into a fresh consumer project, loads with ESM import and CommonJS
+ * require, and its types check with tsc.
+ *
+ * The tarball is packed from this run's dist/ (tests/helpers/global-setup.ts builds it once) into a
+ * temporary folder; this file never builds, cleans or writes inside the repository.
  */
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { builtDist } from '../helpers/dist.js';
+import { runCommand as run } from '../helpers/run.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
-const tsc = fileURLToPath(new URL('../../node_modules/.bin/tsc', import.meta.url));
+/** A dev tool's bin script (from the dev dependencies), run with this Node. */
+const bin = (pkg: string, path: string) => join(root, 'node_modules', pkg, path);
 let files: string[] = [];
+let dir = '';
+let tarball = '';
 let consumer = '';
 
-beforeAll(() => {
-  execFileSync('npm', ['run', 'build'], { cwd: root, stdio: 'pipe' });
-  const dir = mkdtempSync(join(tmpdir(), 'heatstate-pack-'));
+beforeAll(async () => {
+  await builtDist();
+  dir = mkdtempSync(join(tmpdir(), 'heatstate-pack-'));
   const packed = JSON.parse(execFileSync('npm', ['pack', '--json', '--pack-destination', dir], { cwd: root, encoding: 'utf8' })) as { filename: string; files: { path: string }[] }[];
   files = packed[0]!.files.map((f) => f.path).sort();
+  tarball = join(dir, packed[0]!.filename);
   consumer = join(dir, 'consumer');
-  execFileSync('mkdir', ['-p', consumer]);
+  mkdirSync(consumer);
   writeFileSync(join(consumer, 'package.json'), JSON.stringify({ name: 'consumer', private: true, type: 'module' }));
-  execFileSync('npm', ['install', '--no-audit', '--no-fund', '--prefer-offline', join(dir, packed[0]!.filename)], { cwd: consumer, stdio: 'pipe', timeout: 240_000 });
+  await run('npm', ['install', '--no-audit', '--no-fund', '--prefer-offline', '--no-package-lock', tarball], { cwd: consumer, timeout: 240_000 });
 }, 300_000);
+
+afterAll(() => {
+  if (dir) rmSync(dir, { recursive: true, force: true });
+});
 
 describe('the packed package', () => {
   it('holds only dist, README, LICENSE, CHANGELOG and package.json', () => {
@@ -32,6 +45,19 @@ describe('the packed package', () => {
     expect(outside).toEqual([]);
     for (const needed of ['dist/index.js', 'dist/index.cjs', 'dist/index.d.ts', 'dist/index.d.cts', 'dist/water/index.js', 'dist/tables/water/index.js', 'dist/cli.js', 'LICENSE']) expect(files).toContain(needed);
     expect(files.some((f) => f.startsWith('src/') || f.startsWith('tests/') || f.startsWith('data/'))).toBe(false);
+  });
+  it('passes publint --strict and @arethetypeswrong/cli (node16 profile) on the same tarball', async () => {
+    // a finding makes either tool exit non-zero, which rejects here with its report
+    const [lint, types] = await Promise.all([
+      run(process.execPath, [bin('publint', 'src/cli.js'), 'run', tarball, '--strict'], { cwd: root }),
+      run(process.execPath, [bin('@arethetypeswrong/cli', 'dist/index.js'), tarball, '--profile', 'node16', '--format', 'json'], { cwd: root }),
+    ]);
+    expect(lint.stdout).toContain('All good!');
+    const report = JSON.parse(types.stdout) as { analysis: { entrypoints: Record<string, unknown> }; problems?: Record<string, { entrypoint: string; resolutionKind: string }[]> };
+    expect(Object.keys(report.analysis.entrypoints).sort()).toEqual(['.', './ideal-gas', './incompressible', './package.json', './tables', './tables/water', './units', './water']);
+    // the only problems left are for node10 resolution (no `exports` support), which the node16 profile ignores
+    const counted = Object.values(report.problems ?? {}).flat().filter((p) => p.resolutionKind !== 'node10');
+    expect(counted).toEqual([]);
   });
   it('loads with ESM import in a consumer project', () => {
     const out = execFileSync(process.execPath, ['--input-type=module', '-e', "import { water } from 'heatstate'; import { idealGas } from 'heatstate/ideal-gas'; import { waterTables } from 'heatstate/tables/water'; console.log(water.state({ p: '1 MPa', T: '500 K' }).phase, idealGas('N2').k('300 K').toFixed(3), waterTables.saturationByT().rowCount)"], { cwd: consumer, encoding: 'utf8' });
@@ -41,7 +67,7 @@ describe('the packed package', () => {
     const out = execFileSync(process.execPath, ['-e', "const { quantity } = require('heatstate/units'); const { incompressible } = require('heatstate/incompressible'); console.log(quantity('1 Btu/lbm').in('kJ/kg'), incompressible('copper').name)"], { cwd: consumer, encoding: 'utf8' });
     expect(out.trim()).toBe('2.326 copper');
   });
-  it('ships types that tsc checks, dimension errors included', () => {
+  it('ships types that tsc checks, dimension errors included', async () => {
     writeFileSync(
       join(consumer, 'check.ts'),
       [
@@ -54,8 +80,10 @@ describe('the packed package', () => {
         'export { h, k };',
       ].join('\n'),
     );
-    writeFileSync(join(consumer, 'tsconfig.json'), JSON.stringify({ compilerOptions: { strict: true, module: 'node16', moduleResolution: 'node16', target: 'es2022', noEmit: true, skipLibCheck: false, types: [] }, files: ['check.ts'] }));
-    execFileSync(tsc, ['-p', consumer], { cwd: consumer, encoding: 'utf8' });
+    // skipLibCheck false: the package's own .d.ts/.d.cts files are checked; only TypeScript's
+    // bundled lib.*.d.ts are skipped (skipDefaultLibCheck), which say nothing about this package
+    writeFileSync(join(consumer, 'tsconfig.json'), JSON.stringify({ compilerOptions: { strict: true, module: 'node16', moduleResolution: 'node16', target: 'es2022', noEmit: true, skipLibCheck: false, skipDefaultLibCheck: true, types: [] }, files: ['check.ts'] }));
+    await run(process.execPath, [bin('typescript', 'bin/tsc'), '-p', consumer], { cwd: consumer });
   });
   it('installs the heatstate command', () => {
     const out = execFileSync(join(consumer, 'node_modules/.bin/heatstate'), ['water', 'p=1 atm', 'T=25 °C', '--json'], { cwd: consumer, encoding: 'utf8' });

@@ -101,14 +101,17 @@ const trade: [string, string, number][] = [
   ['GPM', 'gal/min', 1],
 ];
 
+/** [from, factor, to]: the order the test title reads in ("1 ft = 0.3048 m"). */
+const titled = (rows: [string, string, number][]) => rows.map(([from, to, factor]) => [from, factor, to] as const);
+
 describe('NIST SP 811 B.8 exact factors', () => {
-  it.each(exact)('1 %s in %s = %s exactly', (from, to, factor) => {
+  it.each(titled(exact))('1 %s = %s %s exactly', (from, factor, to) => {
     expect(quantity(1, from).in(to)).toBe(factor);
   });
 });
 
 describe('NIST SP 811 B.8 printed factors (7 significant digits)', () => {
-  it.each(printed)('1 %s in %s ≈ %s', (from, to, factor, digits) => {
+  it.each(printed.map(([from, to, factor, digits]) => [from, factor, to, digits] as const))('1 %s ≈ %s %s', (from, factor, to, digits) => {
     if (digits === undefined) expectClose(quantity(1, from).in(to), factor, { rel: 6e-7 });
     else expectClose(quantity(1, from).in(to), factor, { abs: 0.5 * 10 ** (Math.floor(Math.log10(Math.abs(factor))) - digits + 1) });
   });

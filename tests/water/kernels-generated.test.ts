@@ -56,7 +56,7 @@ describe('src/water/if97/kernels.generated.ts', () => {
     ['backward2bPS', b2.ps2b, [4, 100], [0.4, 2.6]],
     ['backward2cPS', b2.ps2c, [4, 100], [-0.1, 0.3]],
   ] as const;
-  it.each(valueCases)('%s agrees with a plain loop over the coefficients (relative 1e-12)', (name, data, xr, yr) => {
+  it.each(valueCases)('%s agrees with a plain loop over the coefficients (relative 1e-11, or 1e-9 absolute where the sum nearly cancels)', (name, data, xr, yr) => {
     const terms = compileTerms(data.I, data.J, data.n);
     const kernel = (K as unknown as Record<string, (x: number, y: number) => number>)[name]!;
     fc.assert(
