@@ -30,16 +30,20 @@ describe('consumer bundles', () => {
     expect(js).not.toMatch(/ZodError|zod/i);
     expect(js).not.toContain('stainless steel');
     const kB = gzipSync(js).length / 1024;
-    expect(kB).toBeLessThan(8);
+    // 12.2 kB measured: the budget grew from 8 kB with quantity arithmetic (the product and quotient
+    // tables), four new dimensions, the plant and HVAC units and the linear-time parser with its limits
+    expect(kB).toBeLessThan(13);
   });
-  it('heatstate/units + heatstate/ideal-gas: at most 15 kB gzipped, no decimal.js, zod or incompressible data', async () => {
+  it('heatstate/units + heatstate/ideal-gas: at most 27 kB gzipped, no decimal.js, zod or incompressible data', async () => {
     const js = await bundle(`import { quantity } from 'heatstate/units'; import { idealGas, mixture, compressor } from 'heatstate/ideal-gas';
       console.log(quantity('1 psia').in('kPa'), idealGas('N2').cp('300 K'), mixture({ N2: 0.79, O2: 0.21 }), compressor);`);
     expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
     expect(js).not.toMatch(/ZodError/);
     expect(js).not.toContain('stainless steel');
     const kB = gzipSync(js).length / 1024;
-    expect(kB).toBeLessThan(15);
+    // 25.9 kB measured: from 15 kB with the units above and the species data (20 species now fitted to
+    // NIST-JANAF in the 9-constant form, 200 to 6000 K, with their provenance)
+    expect(kB).toBeLessThan(27);
   });
   it('heatstate/incompressible carries no decimal.js', async () => {
     const js = await bundle(`import { incompressible } from 'heatstate/incompressible'; console.log(incompressible('water'));`);
@@ -48,12 +52,14 @@ describe('consumer bundles', () => {
 });
 
 describe('water bundle', () => {
-  it('heatstate/water: at most 40 kB gzipped, without decimal.js, substance data or the generated tables', async () => {
+  it('heatstate/water: at most 66 kB gzipped, without decimal.js, substance data or the generated tables', async () => {
     const js = await bundle(`import { water } from 'heatstate/water'; console.log(water.state({ p: '1 MPa', T: '500 K' }), water.saturation({ T: '400 K' }));`);
     expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
     expect(js).not.toContain('stainless steel');
     expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
-    expect(gzipSync(js).length / 1024).toBeLessThan(40);
+    // 62.5 kB measured: from 40 kB with the units above and the transport properties on every state
+    // (IAPWS R12-08, R15-11, R1-76 and the IAPWS-95 equation their critical enhancements need)
+    expect(gzipSync(js).length / 1024).toBeLessThan(66);
   });
   it('heatstate/ideal-gas pulls in no water code', async () => {
     const js = await bundle(`import { idealGas } from 'heatstate/ideal-gas'; console.log(idealGas('N2').cp('300 K'));`);

@@ -18,6 +18,7 @@ export { REGIONS, REGION_1, REGION_2, REGION_3, REGION_5, evaluateForward } from
 export type { GibbsRegion, HelmholtzRegion, RegionBounds } from './regions.js';
 export { regionOfPT, phaseOf } from './classify.js';
 export { stateFromPT, region3Density, DensityResult } from './pt.js';
+export { region3DensityAt } from './region3-density.js';
 export { stateFromPH } from './ph.js';
 export { stateFromPS } from './ps.js';
 export { stateFromHS } from './hs.js';
