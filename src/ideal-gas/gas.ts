@@ -20,6 +20,8 @@ import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './form
 export type Basis = 'mass' | 'molar';
 /** Dimension of cp, cv, s and R on a basis. */
 export type HeatCapacityDimension<B extends Basis> = B extends 'molar' ? 'molarHeatCapacity' : 'specificHeat';
+/** Dimension of s on a basis: specific entropy per kg, molar entropy (J/(mol·K)) per mol. */
+export type EntropyDimension<B extends Basis> = B extends 'molar' ? 'molarHeatCapacity' : 'specificEntropy';
 /** Dimension of h and u on a basis. */
 export type EnergyDimension<B extends Basis> = B extends 'molar' ? 'molarEnergy' : 'specificEnergy';
 
@@ -56,7 +58,7 @@ export interface GasState {
 export type GasPair<B extends Basis = 'mass'> =
   | { readonly T: QuantityLike<'temperature'>; readonly p: QuantityLike<'pressure'> }
   | { readonly h: QuantityLike<EnergyDimension<B>>; readonly p: QuantityLike<'pressure'> }
-  | { readonly s: QuantityLike<HeatCapacityDimension<B>>; readonly p: QuantityLike<'pressure'> };
+  | { readonly s: QuantityLike<EntropyDimension<B>>; readonly p: QuantityLike<'pressure'> };
 
 /** A state for an energy difference: a temperature, `{ T }`, or any {@link GasPair}. */
 export type GasEnergyState<B extends Basis = 'mass'> = QuantityLike<'temperature'> | { readonly T: QuantityLike<'temperature'> } | GasPair<B>;
@@ -79,7 +81,7 @@ export interface GasStateResult<B extends Basis = 'mass'> {
   readonly hSensible: Quantity<EnergyDimension<B>>;
   readonly u: Quantity<EnergyDimension<B>>;
   /** s(T, p), including the entropy of mixing for a mixture. */
-  readonly s: Quantity<HeatCapacityDimension<B>>;
+  readonly s: Quantity<EntropyDimension<B>>;
   /** True when T lies outside the data and extrapolation was asked for. */
   readonly extrapolated: boolean;
 }
@@ -156,9 +158,9 @@ export interface IdealGas<B extends Basis = 'mass'> {
   /** Internal energy u(T) = h(T) − R·T (total, like h). */
   u(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
   /** Entropy s(T, p) = s°(T) − R ln(p/p°), p° = 100 kPa. For a mixture, includes the ideal entropy of mixing. */
-  s(T: QuantityLike<'temperature'>, p: QuantityLike<'pressure'>): Quantity<HeatCapacityDimension<B>>;
+  s(T: QuantityLike<'temperature'>, p: QuantityLike<'pressure'>): Quantity<EntropyDimension<B>>;
   /** Standard-state entropy s°(T) at p° = 100 kPa. */
-  sStandard(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  sStandard(T: QuantityLike<'temperature'>): Quantity<EntropyDimension<B>>;
   /** The full state from `{ T, p }`, `{ h, p }` or `{ s, p }`. */
   state(pair: GasPair<B>): GasStateResult<B>;
   /** Δh = h(state2) − h(state1); a state is a temperature, `{ T }`, or any pair of {@link IdealGas.state}. */
@@ -166,7 +168,7 @@ export interface IdealGas<B extends Basis = 'mass'> {
   /** Δu = u(state2) − u(state1). */
   deltaU(state1: GasEnergyState<B>, state2: GasEnergyState<B>): Quantity<EnergyDimension<B>>;
   /** Δs = s(state2) − s(state1), each state a pair of {@link IdealGas.state}. */
-  deltaS(state1: GasPair<B>, state2: GasPair<B>): Quantity<HeatCapacityDimension<B>>;
+  deltaS(state1: GasPair<B>, state2: GasPair<B>): Quantity<EntropyDimension<B>>;
   /** The same gas with cp frozen at `referenceT` (default 298.15 K): the cold-air-standard style estimate. */
   withConstantCp(referenceT?: QuantityLike<'temperature'>): IdealGas<B>;
   /**
@@ -194,6 +196,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
   const molar = basis === 'molar';
   const scale = molar ? MOLAR_GAS_CONSTANT : core.R; // J/(mol·K) or J/(kg·K) per unit of cpR
   const hc = (molar ? 'molarHeatCapacity' : 'specificHeat') as HeatCapacityDimension<B>;
+  const sd = (molar ? 'molarHeatCapacity' : 'specificEntropy') as EntropyDimension<B>;
   const en = (molar ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
   const scope = `the data for ${built.name}`;
   const solver = new IdealGasSolver(core);
@@ -205,8 +208,8 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
   /** Reads a temperature and checks it against the data's interval (unless extrapolating). */
   const temperature = (input: QuantityLike<'temperature'>, parameter = 'T', units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
   /** A result, flagged as extrapolated when any of the temperatures it used lies outside the data. */
-  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(si: number, dim: D, name: string, T1: number, T2 = T1): Quantity<D> => resultQuantity(si, dim, name, outside(T1) || outside(T2));
-  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D, name: string) => (input: QuantityLike<'temperature'>): Quantity<D> => {
+  const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B> | EntropyDimension<B>>(si: number, dim: D, name: string, T1: number, T2 = T1): Quantity<D> => resultQuantity(si, dim, name, outside(T1) || outside(T2));
+  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B> | EntropyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D, name: string) => (input: QuantityLike<'temperature'>): Quantity<D> => {
     const T = temperature(input);
     return result(f(core, scale, T), dim, name, T);
   };
@@ -223,7 +226,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     const p = key === 'T' ? NaN : readAbsolutePressure(a.p as QuantityLike<'pressure'>, `${prefix}p`, undefined, units);
     if (key === 'T' || key === 'T,p') return [temperature(a.T as QuantityLike<'temperature'>, `${prefix}T`, units), p];
     const isH = key === 'h,p';
-    const value = readInput(a[isH ? 'h' : 's'] as QuantityLike<EnergyDimension<B> | HeatCapacityDimension<B>>, isH ? en : hc, `${prefix}${isH ? 'h' : 's'}`, undefined, units);
+    const value = readInput(a[isH ? 'h' : 's'] as QuantityLike<EnergyDimension<B> | EntropyDimension<B>>, isH ? en : sd, `${prefix}${isH ? 'h' : 's'}`, undefined, units);
     // per R̄ or R: h/R in K, s°/R at p° from s(T, p) = R (s°/R − ln(p/p°)), less the mixing term
     const target = isH ? value / scale : value / scale + Math.log(p / STANDARD_STATE_PRESSURE_PA);
     const status = isH ? solver.temperatureAtEnthalpy(target, 0.5 * (core.Tmin + Math.min(core.Tmax, 3000))) : solver.temperatureAtStandardEntropy(target, 0.5 * (core.Tmin + Math.min(core.Tmax, 3000)));
@@ -231,7 +234,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
       const name = isH ? 'h' : 's';
       const lo = isH ? hOf(core, scale, core.Tmin) : sOf(core, scale, core.Tmin, p);
       const hi = isH ? hOf(core, scale, core.Tmax) : sOf(core, scale, core.Tmax, p);
-      const dim = isH ? en : hc;
+      const dim = isH ? en : sd;
       throwForStatus(status, {
         what: `the temperature of ${built.name} from ${name}`,
         inputs: `${prefix}${name} = ${units.describe(value, dim, molar ? (isH ? 'J/mol' : 'J/(mol·K)') : isH ? 'J/kg' : 'J/(kg·K)')}`,
@@ -263,9 +266,9 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     s: (T, p) => {
       const units = new CallUnits();
       const t = temperature(T, 'T', units);
-      return result(sOf(core, scale, t, readAbsolutePressure(p, 'p', undefined, units)), hc, 's', t);
+      return result(sOf(core, scale, t, readAbsolutePressure(p, 'p', undefined, units)), sd, 's', t);
     },
-    sStandard: single(sStandardOf, hc, 'sStandard'),
+    sStandard: single(sStandardOf, sd, 'sStandard'),
     state: (pair) => {
       const [T, p] = resolve(pair, '', GAS_PAIRS);
       const flag = outside(T);
@@ -280,7 +283,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
         h: result(hOf(core, scale, T), en, 'h', T),
         hSensible: result(hSensibleOf(core, scale, T), en, 'hSensible', T),
         u: result(uOf(core, scale, T), en, 'u', T),
-        s: result(sOf(core, scale, T, p), hc, 's', T),
+        s: result(sOf(core, scale, T, p), sd, 's', T),
         extrapolated: flag,
       };
     },
@@ -297,7 +300,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     deltaS: (state1, state2) => {
       const [a, p1] = resolve(state1, 'state1.', GAS_PAIRS);
       const [b, p2] = resolve(state2, 'state2.', GAS_PAIRS);
-      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), hc, 'deltaS', a, b);
+      return result(scale * (core.sR(b) - core.sR(a) - Math.log(p2 / p1)), sd, 'deltaS', a, b);
     },
     withConstantCp: (referenceT) => {
       const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : temperature(referenceT, 'referenceT');

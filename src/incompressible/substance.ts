@@ -39,7 +39,7 @@ export interface IncompressibleStateResult {
   /** h − h_ref = (u − u_ref) + v·(p − p_ref). */
   readonly h: Quantity<'specificEnergy'>;
   /** s − s_ref = ∫c/T dT from the reference temperature. */
-  readonly s: Quantity<'specificHeat'>;
+  readonly s: Quantity<'specificEntropy'>;
 }
 
 /** An incompressible liquid or solid, with its property functions. Inputs take quantities or unit text. */
@@ -80,7 +80,7 @@ export interface IncompressibleSubstance {
   /** Δu = ∫c dT from state 1 to state 2 (a temperature, `{ T }` or `{ T, p }` each). */
   deltaU(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEnergy'>;
   /** Δs = ∫c/T dT from state 1 to state 2. */
-  deltaS(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificHeat'>;
+  deltaS(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEntropy'>;
   /** Δh = Δu + v̄·(p2 − p1) between two states `{ T, p }`, v̄ the mean of v(T1) and v(T2). Pressures are absolute. */
   deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
 }
@@ -137,7 +137,7 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
         v: resultQuantity(1 / densityAt(model, T), 'specificVolume', 'v'),
         u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u'),
         h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h'),
-        s: resultQuantity(entropyChange(model, Tref, T), 'specificHeat', 's'),
+        s: resultQuantity(entropyChange(model, Tref, T), 'specificEntropy', 's'),
       };
     },
     deltaU(state1, state2) {
@@ -148,7 +148,7 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
     deltaS(state1, state2) {
       const [a] = resolve(state1, 'state1.', false);
       const [b] = resolve(state2, 'state2.', false);
-      return resultQuantity(entropyChange(model, a, b), 'specificHeat', 'deltaS');
+      return resultQuantity(entropyChange(model, a, b), 'specificEntropy', 'deltaS');
     },
     deltaH(state1, state2) {
       const [T1, p1] = resolve(state1, 'state1.', true);

@@ -35,7 +35,7 @@ export interface LiquidStateInput {
 }
 
 /** How far a shortcut's value is from IF97 at the same state. */
-export interface Deviation<D extends 'specificVolume' | 'specificEnergy' | 'specificHeat'> {
+export interface Deviation<D extends 'specificVolume' | 'specificEnergy' | 'specificEntropy'> {
   /** shortcut − IF97. */
   readonly absolute: Quantity<D>;
   /** (shortcut − IF97)/|IF97|; NaN-free: 0 when both are 0, and omitted (undefined) when IF97's value is 0 but the shortcut's is not. */
@@ -48,13 +48,13 @@ export interface ApproximateLiquid {
   readonly v: Quantity<'specificVolume'>;
   readonly u: Quantity<'specificEnergy'>;
   readonly h: Quantity<'specificEnergy'>;
-  readonly s: Quantity<'specificHeat'>;
+  readonly s: Quantity<'specificEntropy'>;
   /** Present with `{ compare: true }`. */
   readonly deviation?: {
     readonly v: Deviation<'specificVolume'>;
     readonly u: Deviation<'specificEnergy'>;
     readonly h: Deviation<'specificEnergy'>;
-    readonly s: Deviation<'specificHeat'>;
+    readonly s: Deviation<'specificEntropy'>;
   };
 }
 
@@ -137,7 +137,7 @@ export function approximateLiquid(state: LiquidStateInput, method: LiquidApproxi
     v: Quantity.fromSI(a.v, 'specificVolume'),
     u: Quantity.fromSI(a.u, 'specificEnergy'),
     h: Quantity.fromSI(a.h, 'specificEnergy'),
-    s: Quantity.fromSI(a.s, 'specificHeat'),
+    s: Quantity.fromSI(a.s, 'specificEntropy'),
   };
   if (!options.compare) return result;
   const e = if97(T, p);
@@ -147,7 +147,7 @@ export function approximateLiquid(state: LiquidStateInput, method: LiquidApproxi
       v: { absolute: Quantity.fromSI(a.v - e.v, 'specificVolume'), relative: relative(a.v, e.v) },
       u: { absolute: Quantity.fromSI(a.u - e.u, 'specificEnergy'), relative: relative(a.u, e.u) },
       h: { absolute: Quantity.fromSI(a.h - e.h, 'specificEnergy'), relative: relative(a.h, e.h) },
-      s: { absolute: Quantity.fromSI(a.s - e.s, 'specificHeat'), relative: relative(a.s, e.s) },
+      s: { absolute: Quantity.fromSI(a.s - e.s, 'specificEntropy'), relative: relative(a.s, e.s) },
     },
   };
 }

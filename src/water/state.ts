@@ -50,7 +50,7 @@ export interface WaterStateResult {
   /** Specific enthalpy. */
   readonly h: Quantity<'specificEnergy'>;
   /** Specific entropy. */
-  readonly s: Quantity<'specificHeat'>;
+  readonly s: Quantity<'specificEntropy'>;
   /** Isobaric heat capacity; `undefined` in two-phase states, where it is not defined. */
   readonly cp: Quantity<'specificHeat'> | undefined;
   /** Isochoric heat capacity; `undefined` in two-phase states. */
@@ -86,7 +86,7 @@ export interface SaturatedPhase {
   readonly rho: Quantity<'density'>;
   readonly u: Quantity<'specificEnergy'>;
   readonly h: Quantity<'specificEnergy'>;
-  readonly s: Quantity<'specificHeat'>;
+  readonly s: Quantity<'specificEntropy'>;
   /** Dynamic viscosity (IAPWS R12-08); `undefined` at the critical point itself. Computed on first access. */
   readonly mu: Quantity<'dynamicViscosity'> | undefined;
   /** Thermal conductivity (IAPWS R15-11); `undefined` at the critical point itself. */
@@ -104,7 +104,7 @@ export interface SaturationResult {
   /** h_g − h_f, the enthalpy of vaporisation. */
   readonly hfg: Quantity<'specificEnergy'>;
   /** s_g − s_f. */
-  readonly sfg: Quantity<'specificHeat'>;
+  readonly sfg: Quantity<'specificEntropy'>;
   /** u_g − u_f. */
   readonly ufg: Quantity<'specificEnergy'>;
   /** Surface tension (IAPWS R1-76(2014)); 0 at the critical point; `undefined` below the triple point (273.16 K). */
@@ -115,8 +115,8 @@ export interface SaturationResult {
 export type WaterPair =
   | { readonly T: QuantityLike<'temperature'>; readonly p: QuantityLike<'pressure'> }
   | { readonly p: QuantityLike<'pressure'>; readonly h: QuantityLike<'specificEnergy'> }
-  | { readonly p: QuantityLike<'pressure'>; readonly s: QuantityLike<'specificHeat'> }
-  | { readonly h: QuantityLike<'specificEnergy'>; readonly s: QuantityLike<'specificHeat'> }
+  | { readonly p: QuantityLike<'pressure'>; readonly s: QuantityLike<'specificEntropy'> }
+  | { readonly h: QuantityLike<'specificEnergy'>; readonly s: QuantityLike<'specificEntropy'> }
   | { readonly T: QuantityLike<'temperature'>; readonly x: number }
   | { readonly p: QuantityLike<'pressure'>; readonly x: number }
   | { readonly T: QuantityLike<'temperature'>; readonly v: QuantityLike<'specificVolume'> }
@@ -182,7 +182,7 @@ function toResult(st: WaterState): WaterStateResult {
     rho: resultQuantity(st.rho, 'density', 'rho'),
     u: resultQuantity(st.u, 'specificEnergy', 'u'),
     h: resultQuantity(st.h, 'specificEnergy', 'h'),
-    s: resultQuantity(st.s, 'specificHeat', 's'),
+    s: resultQuantity(st.s, 'specificEntropy', 's'),
     cp: two ? undefined : resultQuantity(st.cp, 'specificHeat', 'cp'),
     cv: two ? undefined : resultQuantity(st.cv, 'specificHeat', 'cv'),
     w: two ? undefined : resultQuantity(st.w, 'velocity', 'w'),
@@ -271,7 +271,7 @@ export function waterState(pair: WaterPair): WaterStateResult {
     case 'p,s': {
       const name = key === 'p,h' ? 'h' : 's';
       const p = readAbsolutePressure(a.p as QuantityLike<'pressure'>, 'p', { max: P_MAX, scope: `${IF97} (100 MPa)` }, units);
-      const dim = name === 'h' ? 'specificEnergy' : 'specificHeat';
+      const dim = name === 'h' ? 'specificEnergy' : 'specificEntropy';
       const siUnit = name === 'h' ? 'J/kg' : 'J/(kg·K)';
       const value = readInput(a[name] as QuantityLike<typeof dim>, dim, name, undefined, units);
       const st = name === 'h' ? stateFromPH(p, value, out, ctx) : stateFromPS(p, value, out, ctx);
@@ -289,19 +289,19 @@ export function waterState(pair: WaterPair): WaterStateResult {
     }
     case 'h,s': {
       const h = readInput(a.h as QuantityLike<'specificEnergy'>, 'specificEnergy', 'h', undefined, units);
-      const s = readInput(a.s as QuantityLike<'specificHeat'>, 'specificHeat', 's', undefined, units);
+      const s = readInput(a.s as QuantityLike<'specificEntropy'>, 'specificEntropy', 's', undefined, units);
       const st = stateFromHS(h, s, out, ctx);
       if (st !== Status.ok) {
         throwForStatus(st, {
           what: `the ${IF97} (h, s) flash`,
-          inputs: `h = ${units.describe(h, 'specificEnergy', 'J/kg')}, s = ${units.describe(s, 'specificHeat', 'J/(kg·K)')}`,
+          inputs: `h = ${units.describe(h, 'specificEnergy', 'J/kg')}, s = ${units.describe(s, 'specificEntropy', 'J/(kg·K)')}`,
           range: () => {
             const span = entropyRangeAtEnthalpy(h);
             if (span === undefined) {
               const [lo, hi] = enthalpyRange();
               return rangeError('h', h, 'specificEnergy', { min: lo, max: hi, scope: `${IF97} (273.15 K ≤ T ≤ 2273.15 K, 1 mPa ≤ p ≤ 100 MPa)` }, units);
             }
-            return rangeError('s', s, 'specificHeat', { min: span[0], max: span[1], scope: `${IF97} at h = ${units.describe(h, 'specificEnergy', 'J/kg')} (1 mPa ≤ p ≤ 100 MPa)` }, units);
+            return rangeError('s', s, 'specificEntropy', { min: span[0], max: span[1], scope: `${IF97} at h = ${units.describe(h, 'specificEnergy', 'J/kg')} (1 mPa ≤ p ≤ 100 MPa)` }, units);
           },
         });
       }
@@ -354,7 +354,7 @@ function phaseOf(w: WaterProperties): SaturatedPhase {
     rho: resultQuantity(w.rho, 'density', 'rho'),
     u: resultQuantity(w.u, 'specificEnergy', 'u'),
     h: resultQuantity(w.h, 'specificEnergy', 'h'),
-    s: resultQuantity(w.s, 'specificHeat', 's'),
+    s: resultQuantity(w.s, 'specificEntropy', 's'),
   };
   return withTransport(base, w.T, w.rho, w.p, w.cp, Number.isFinite(w.cp) && w.cp > 0, false) as SaturatedPhase;
 }
@@ -404,7 +404,7 @@ export function waterSaturation(at: { readonly T: QuantityLike<'temperature'> } 
     liquid: phaseOf(liquid),
     vapor: phaseOf(vapor),
     hfg: resultQuantity(vapor.h - liquid.h, 'specificEnergy', 'hfg'),
-    sfg: resultQuantity(vapor.s - liquid.s, 'specificHeat', 'sfg'),
+    sfg: resultQuantity(vapor.s - liquid.s, 'specificEntropy', 'sfg'),
     ufg: resultQuantity(vapor.u - liquid.u, 'specificEnergy', 'ufg'),
     sigma: optionalQuantity(surfaceTensionAt(liquid.T), 'surfaceTension', 'sigma'),
   };
@@ -427,8 +427,8 @@ export function waterDeltaU(state1: WaterPair, state2: WaterPair): Quantity<'spe
 }
 
 /** Δs = s(state2) − s(state1) between two states given by any {@link WaterPair}. */
-export function waterDeltaS(state1: WaterPair, state2: WaterPair): Quantity<'specificHeat'> {
-  return resultQuantity(stateOrNamed(state2, 'state2').s.si - stateOrNamed(state1, 'state1').s.si, 'specificHeat', 'deltaS');
+export function waterDeltaS(state1: WaterPair, state2: WaterPair): Quantity<'specificEntropy'> {
+  return resultQuantity(stateOrNamed(state2, 'state2').s.si - stateOrNamed(state1, 'state1').s.si, 'specificEntropy', 'deltaS');
 }
 
 /** A state, with the argument's name put in front of an input error's message. */
