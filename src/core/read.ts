@@ -9,7 +9,7 @@
 import { formatNumber, InvalidInputError, OutOfRangeError } from '../errors.js';
 import type { Dimension } from '../units/dimensions.js';
 import { SI_UNIT } from '../units/dimensions.js';
-import { readQuantity, type QuantityLike } from '../units/quantity.js';
+import { readQuantity } from '../units/quantity.js';
 import { CallUnits } from './call-units.js';
 
 /** Bounds of an input in SI, inclusive unless stated, with the scope named in messages. */
@@ -54,7 +54,7 @@ function inBounds(x: number, b: Bounds): boolean {
  * readInput('212 °F', 'temperature', 'T');   //=> 373.15
  * ```
  */
-export function readInput<D extends Dimension>(input: QuantityLike<D>, dimension: D, parameter: string, bounds?: Bounds, units?: CallUnits): number {
+export function readInput<D extends Dimension>(input: unknown, dimension: D, parameter: string, bounds?: Bounds, units?: CallUnits): number {
   const si = readQuantity<D, string>(input as string, dimension, parameter);
   units?.note(input, dimension);
   if (bounds !== undefined && !inBounds(si, bounds)) throw rangeError(parameter, si, dimension, bounds, units);
@@ -71,7 +71,7 @@ export const ABSOLUTE_TEMPERATURE: Bounds = { min: 0, max: Infinity, scope: 'abs
  * readTemperature('25 °C', 'T');   //=> 298.15
  * ```
  */
-export function readTemperature(input: QuantityLike<'temperature'>, parameter: string, bounds: Bounds = ABSOLUTE_TEMPERATURE, units?: CallUnits): number {
+export function readTemperature(input: unknown, parameter: string, bounds: Bounds = ABSOLUTE_TEMPERATURE, units?: CallUnits): number {
   return readInput(input, 'temperature', parameter, bounds, units);
 }
 
@@ -84,7 +84,7 @@ export function readTemperature(input: QuantityLike<'temperature'>, parameter: s
  * readAbsolutePressure('-20 psig', 'p');    // throws OutOfRangeError: below vacuum
  * ```
  */
-export function readAbsolutePressure(input: QuantityLike<'pressure'>, parameter: string, bounds?: { readonly max: number; readonly scope: string }, units?: CallUnits): number {
+export function readAbsolutePressure(input: unknown, parameter: string, bounds?: { readonly max: number; readonly scope: string }, units?: CallUnits): number {
   const p = readQuantity<'pressure', string>(input as string, 'pressure', parameter);
   units?.note(input, 'pressure');
   const max = bounds?.max ?? Infinity;
@@ -103,7 +103,7 @@ export function readAbsolutePressure(input: QuantityLike<'pressure'>, parameter:
  * readPositiveDensity('1000 kg/m³', 'rho');   //=> 1000
  * ```
  */
-export function readPositiveDensity(input: QuantityLike<'density'>, parameter: string, units?: CallUnits): number {
+export function readPositiveDensity(input: unknown, parameter: string, units?: CallUnits): number {
   return readInput(input, 'density', parameter, { min: 0, max: Infinity, scope: 'a density (must be positive)', minExclusive: true }, units);
 }
 

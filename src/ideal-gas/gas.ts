@@ -10,7 +10,8 @@ import { ABSOLUTE_TEMPERATURE, rangeError, readAbsolutePressure, readChoice, rea
 import { resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
 import { DefinitionError, HeatstateError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
-import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
+import { Quantity, readQuantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
+import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import { IdealGasSolver } from './solve.js';
 import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
@@ -56,12 +57,20 @@ export interface GasState {
  * the energy differences (`deltaH`, `deltaU`), which depend on T only, `{ T }` alone also fixes the state.
  */
 export type GasPair<B extends Basis = 'mass'> =
-  | { readonly T: QuantityLike<'temperature'>; readonly p: QuantityLike<'pressure'> }
-  | { readonly h: QuantityLike<EnergyDimension<B>>; readonly p: QuantityLike<'pressure'> }
-  | { readonly s: QuantityLike<EntropyDimension<B>>; readonly p: QuantityLike<'pressure'> };
+  | { readonly T: LooseQuantity<'temperature'>; readonly p: LooseQuantity<'pressure'> }
+  | { readonly h: LooseQuantity<EnergyDimension<B>>; readonly p: LooseQuantity<'pressure'> }
+  | { readonly s: LooseQuantity<EntropyDimension<B>>; readonly p: LooseQuantity<'pressure'> };
+
+/** The dimension of each input name of a gas state. */
+export interface GasInputDimensions<B extends Basis = 'mass'> {
+  T: 'temperature';
+  p: 'pressure';
+  h: EnergyDimension<B>;
+  s: EntropyDimension<B>;
+}
 
 /** A state for an energy difference: a temperature, `{ T }`, or any {@link GasPair}. */
-export type GasEnergyState<B extends Basis = 'mass'> = QuantityLike<'temperature'> | { readonly T: QuantityLike<'temperature'> } | GasPair<B>;
+export type GasEnergyState<B extends Basis = 'mass'> = LooseQuantity<'temperature'> | { readonly T: LooseQuantity<'temperature'> } | GasPair<B>;
 
 /** A state of an ideal gas as `gas.state` returns it: every property as a quantity. */
 export interface GasStateResult<B extends Basis = 'mass'> {
@@ -146,31 +155,31 @@ export interface IdealGas<B extends Basis = 'mass'> {
   /** Whether temperatures outside the data are computed (and flagged) rather than refused. */
   readonly extrapolate: boolean;
   /** cp(T). */
-  cp(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  cp<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<HeatCapacityDimension<B>>;
   /** cv(T) = cp(T) − R. */
-  cv(T: QuantityLike<'temperature'>): Quantity<HeatCapacityDimension<B>>;
+  cv<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<HeatCapacityDimension<B>>;
   /** k(T) = cp/cv, a plain number. */
-  k(T: QuantityLike<'temperature'>): number;
+  k<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): number;
   /** Total enthalpy h(T), including the enthalpy of formation at 298.15 K. */
-  h(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  h<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<EnergyDimension<B>>;
   /** Sensible enthalpy h(T) − h(298.15 K). */
-  hSensible(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  hSensible<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<EnergyDimension<B>>;
   /** Internal energy u(T) = h(T) − R·T (total, like h). */
-  u(T: QuantityLike<'temperature'>): Quantity<EnergyDimension<B>>;
+  u<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<EnergyDimension<B>>;
   /** Entropy s(T, p) = s°(T) − R ln(p/p°), p° = 100 kPa. For a mixture, includes the ideal entropy of mixing. */
-  s(T: QuantityLike<'temperature'>, p: QuantityLike<'pressure'>): Quantity<EntropyDimension<B>>;
+  s<I extends LooseQuantity<'temperature'>, J extends LooseQuantity<'pressure'>>(T: QuantityInput<'temperature', I>, p: QuantityInput<'pressure', J>): Quantity<EntropyDimension<B>>;
   /** Standard-state entropy s°(T) at p° = 100 kPa. */
-  sStandard(T: QuantityLike<'temperature'>): Quantity<EntropyDimension<B>>;
+  sStandard<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<EntropyDimension<B>>;
   /** The full state from `{ T, p }`, `{ h, p }` or `{ s, p }`. */
-  state(pair: GasPair<B>): GasStateResult<B>;
+  state<const P extends GasPair<B>>(pair: P & CheckedInputs<P, GasInputDimensions<B>>): GasStateResult<B>;
   /** Δh = h(state2) − h(state1); a state is a temperature, `{ T }`, or any pair of {@link IdealGas.state}. */
-  deltaH(state1: GasEnergyState<B>, state2: GasEnergyState<B>): Quantity<EnergyDimension<B>>;
+  deltaH<const P1 extends GasEnergyState<B>, const P2 extends GasEnergyState<B>>(state1: CheckedState<P1, GasInputDimensions<B>, 'temperature'>, state2: CheckedState<P2, GasInputDimensions<B>, 'temperature'>): Quantity<EnergyDimension<B>>;
   /** Δu = u(state2) − u(state1). */
-  deltaU(state1: GasEnergyState<B>, state2: GasEnergyState<B>): Quantity<EnergyDimension<B>>;
+  deltaU<const P1 extends GasEnergyState<B>, const P2 extends GasEnergyState<B>>(state1: CheckedState<P1, GasInputDimensions<B>, 'temperature'>, state2: CheckedState<P2, GasInputDimensions<B>, 'temperature'>): Quantity<EnergyDimension<B>>;
   /** Δs = s(state2) − s(state1), each state a pair of {@link IdealGas.state}. */
-  deltaS(state1: GasPair<B>, state2: GasPair<B>): Quantity<EntropyDimension<B>>;
+  deltaS<const P1 extends GasPair<B>, const P2 extends GasPair<B>>(state1: P1 & CheckedInputs<P1, GasInputDimensions<B>>, state2: P2 & CheckedInputs<P2, GasInputDimensions<B>>): Quantity<EntropyDimension<B>>;
   /** The same gas with cp frozen at `referenceT` (default 298.15 K): the cold-air-standard style estimate. */
-  withConstantCp(referenceT?: QuantityLike<'temperature'>): IdealGas<B>;
+  withConstantCp<I extends LooseQuantity<'temperature'>>(referenceT?: QuantityInput<'temperature', I>): IdealGas<B>;
   /**
    * The gas's SI solvers (T from h or s, isentropic end temperatures), for the process functions
    * and hot loops.
@@ -206,10 +215,10 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
 
   const outside = (T: number): boolean => T < core.Tmin || T > core.Tmax;
   /** Reads a temperature and checks it against the data's interval (unless extrapolating). */
-  const temperature = (input: QuantityLike<'temperature'>, parameter = 'T', units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
+  const temperature = (input: unknown, parameter = 'T', units?: CallUnits): number => readTemperature(input as QuantityLike<'temperature'>, parameter, bounds, units);
   /** A result, flagged as extrapolated when any of the temperatures it used lies outside the data. */
   const result = <D extends HeatCapacityDimension<B> | EnergyDimension<B> | EntropyDimension<B>>(si: number, dim: D, name: string, T1: number, T2 = T1): Quantity<D> => resultQuantity(si, dim, name, outside(T1) || outside(T2));
-  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B> | EntropyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D, name: string) => (input: QuantityLike<'temperature'>): Quantity<D> => {
+  const single = <D extends HeatCapacityDimension<B> | EnergyDimension<B> | EntropyDimension<B>>(f: (core: IdealGasModel, scale: number, T: number) => number, dim: D, name: string) => (input: unknown): Quantity<D> => {
     const T = temperature(input);
     return result(f(core, scale, T), dim, name, T);
   };

@@ -5,7 +5,7 @@
  * @packageDocumentation
  */
 export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
-export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, Basis, HeatCapacityDimension, EnergyDimension, EntropyDimension } from './gas.js';
+export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, GasInputDimensions, Basis, HeatCapacityDimension, EnergyDimension, EntropyDimension } from './gas.js';
 export { idealGasBatch, IDEAL_GAS_BATCH_STATUS } from './batch.js';
 export type { IdealGasBatchProperty } from './batch.js';
 export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation } from './processes.js';
@@ -16,7 +16,7 @@ export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
 export type { QuantityLike } from '../units/quantity.js';
-export type { MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation } from './processes.js';
+export type { MachineInput, MachineResult, PolytropicResult, ConstantCpDeviation, ProcessInlet, ProcessDimensions } from './processes.js';
 export { NasaPolynomialModel, ConstantCpModel, MixtureModel, constantCpFrom, mixNasa, fromSevenCoefficients } from './model.js';
 export type { IdealGasModel } from './model.js';
 export { speciesNames, speciesRecords, findSpecies } from './species.js';

@@ -15,10 +15,26 @@ import { resultQuantity } from '../core/result.js';
 import { Status, type StatusCode } from '../core/status.js';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
 import type { Quantity, QuantityLike } from '../units/quantity.js';
+import type { CheckedInputs, LooseQuantity } from '../core/inputs.js';
 import type { Basis, EnergyDimension, IdealGas } from './gas.js';
 import { isentropicTemperatureConstantCp } from './solve.js';
 
 export { isentropicTemperatureConstantCp, IdealGasSolver } from './solve.js';
+
+/** The inlet and outlet pressure of a process: T1, p1, p2 (absolute). */
+export interface ProcessInlet {
+  readonly T1: LooseQuantity<'temperature'>;
+  readonly p1: LooseQuantity<'pressure'>;
+  readonly p2: LooseQuantity<'pressure'>;
+}
+
+/** The dimension of each input name of a process. */
+export interface ProcessDimensions {
+  T1: 'temperature';
+  p1: 'pressure';
+  p2: 'pressure';
+  referenceT: 'temperature';
+}
 
 /** Result of a compressor or turbine calculation. Work is per unit mass (or mole on a molar basis). */
 export interface MachineResult<B extends Basis = 'mass'> {
@@ -34,9 +50,9 @@ export interface MachineResult<B extends Basis = 'mass'> {
 
 /** Inputs of a compressor or turbine calculation. */
 export interface MachineInput {
-  readonly T1: QuantityLike<'temperature'>;
-  readonly p1: QuantityLike<'pressure'>;
-  readonly p2: QuantityLike<'pressure'>;
+  readonly T1: LooseQuantity<'temperature'>;
+  readonly p1: LooseQuantity<'pressure'>;
+  readonly p2: LooseQuantity<'pressure'>;
   /** Isentropic efficiency, 0 < η ≤ 1. Default 1. */
   readonly efficiency?: number;
 }
@@ -85,7 +101,7 @@ function failEnd(gas: IdealGas<Basis>, status: StatusCode, what: string, units: 
  * isentropicEnd(idealGas('air'), { T1: '300 K', p1: '100 kPa', p2: '800 kPa' }).T2.in('K'); //=> 539.61...
  * ```
  */
-export function isentropicEnd<B extends Basis>(gas: IdealGas<B>, input: { readonly T1: QuantityLike<'temperature'>; readonly p1: QuantityLike<'pressure'>; readonly p2: QuantityLike<'pressure'> }): {
+export function isentropicEnd<B extends Basis, const P extends ProcessInlet>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): {
   readonly T2: Quantity<'temperature'>;
   readonly deltaH: Quantity<EnergyDimension<B>>;
   readonly deltaU: Quantity<EnergyDimension<B>>;
@@ -143,7 +159,7 @@ function machine<B extends Basis>(gas: IdealGas<B>, input: MachineInput, kind: '
  * compressor(idealGas('air'), { T1: '300 K', p1: '100 kPa', p2: '800 kPa', efficiency: 0.85 }).work.in('kJ/kg'); //=> 287...
  * ```
  */
-export function compressor<B extends Basis>(gas: IdealGas<B>, input: MachineInput): MachineResult<B> {
+export function compressor<B extends Basis, const P extends MachineInput>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): MachineResult<B> {
   return machine(gas, input, 'compressor');
 }
 
@@ -157,7 +173,7 @@ export function compressor<B extends Basis>(gas: IdealGas<B>, input: MachineInpu
  * turbine(idealGas('air'), { T1: '1400 K', p1: '1.6 MPa', p2: '100 kPa', efficiency: 0.9 }).work.in('kJ/kg');   //=> 725.7
  * ```
  */
-export function turbine<B extends Basis>(gas: IdealGas<B>, input: MachineInput): MachineResult<B> {
+export function turbine<B extends Basis, const P extends MachineInput>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): MachineResult<B> {
   return machine(gas, input, 'turbine');
 }
 
@@ -187,7 +203,7 @@ export interface PolytropicResult<B extends Basis = 'mass'> {
  * polytropic(idealGas('air'), { T1: '300 K', p1: '100 kPa', p2: '500 kPa', n: 1.3 }).T2.in('K');   //=> 434.9
  * ```
  */
-export function polytropic<B extends Basis>(gas: IdealGas<B>, input: { readonly T1: QuantityLike<'temperature'>; readonly p1: QuantityLike<'pressure'>; readonly p2: QuantityLike<'pressure'>; readonly n: number }): PolytropicResult<B> {
+export function polytropic<B extends Basis, const P extends ProcessInlet & { readonly n: number }>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): PolytropicResult<B> {
   const { T1, p1, p2, units } = inlet(gas, input, 'polytropic');
   const n = readNumber(input.n, 'n', { min: 0, max: Infinity, scope: 'a polytropic exponent (n ≥ 0; n → ∞, isochoric, is not accepted)' });
   if (n === 0 && p1 !== p2) throw new InvalidInputError('input.invalid', 'p2', 'n = 0 is a constant-pressure process: p2 must equal p1 (give T2 to another function)');
@@ -244,7 +260,7 @@ export interface ConstantCpDeviation<B extends Basis = 'mass'> {
  * d.workRelativeDifference;   //=> −0.046: cp frozen at 298 K under-predicts this hot expansion by 4.6 %
  * ```
  */
-export function constantCpDeviation<B extends Basis>(gas: IdealGas<B>, input: MachineInput & { readonly machine: 'compressor' | 'turbine'; readonly referenceT?: QuantityLike<'temperature'> }): ConstantCpDeviation<B> {
+export function constantCpDeviation<B extends Basis, const P extends MachineInput & { readonly machine: 'compressor' | 'turbine'; readonly referenceT?: LooseQuantity<'temperature'> }>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): ConstantCpDeviation<B> {
   const variableCp = machine(gas, input, input.machine);
   const { T1, p1, p2, units } = inlet(gas, input, 'constantCpDeviation');
   const T0 = input.referenceT === undefined ? 298.15 : readTemperature(input.referenceT, 'referenceT', gas.bounds, units);

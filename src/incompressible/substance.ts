@@ -10,19 +10,26 @@ import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
 import { readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
-import { Quantity, type QuantityLike } from '../units/quantity.js';
+import { Quantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
+import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import type { CompiledSubstance, SubstanceSource } from './compile.js';
 import { densityAt, enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
 
 /** A state of an incompressible substance: temperature and (absolute) pressure. */
 export interface IncompressibleState {
-  readonly T: QuantityLike<'temperature'>;
-  readonly p: QuantityLike<'pressure'>;
+  readonly T: LooseQuantity<'temperature'>;
+  readonly p: LooseQuantity<'pressure'>;
+}
+
+/** The dimension of each input name of an incompressible state. */
+export interface IncompressibleInputDimensions {
+  T: 'temperature';
+  p: 'pressure';
 }
 
 /** A state for `deltaU` and `deltaS`, which depend on T only: a temperature, `{ T }` or `{ T, p }`. */
-export type IncompressibleThermalState = QuantityLike<'temperature'> | { readonly T: QuantityLike<'temperature'>; readonly p?: QuantityLike<'pressure'> };
+export type IncompressibleThermalState = LooseQuantity<'temperature'> | { readonly T: LooseQuantity<'temperature'>; readonly p?: LooseQuantity<'pressure'> };
 
 /** A state as `substance.state` returns it. u, h and s are measured from the substance's reference state. */
 export interface IncompressibleStateResult {
@@ -64,25 +71,25 @@ export interface IncompressibleSubstance {
   /** Specific volume v = 1/ρ at the reference temperature. */
   readonly v: Quantity<'specificVolume'>;
   /** ρ(T): constant for solids and for liquids given with one density, tabulated otherwise. */
-  density(T: QuantityLike<'temperature'>): Quantity<'density'>;
+  density<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'density'>;
   /** The plain-number SI core. */
   readonly core: IncompressibleModel;
   /** Specific heat c(T) (= cp = cv). Throws {@link OutOfRangeError} outside the range. */
-  c(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  c<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'specificHeat'>;
   /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cp = c. */
-  cp(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  cp<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'specificHeat'>;
   /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cv = c. */
-  cv(T: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  cv<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'specificHeat'>;
   /** Mean specific heat between two temperatures, Δu/ΔT (c(T1) when T1 = T2). */
-  averageC(T1: QuantityLike<'temperature'>, T2: QuantityLike<'temperature'>): Quantity<'specificHeat'>;
+  averageC<I extends LooseQuantity<'temperature'>, J extends LooseQuantity<'temperature'>>(T1: QuantityInput<'temperature', I>, T2: QuantityInput<'temperature', J>): Quantity<'specificHeat'>;
   /** The state at `{ T, p }`. */
-  state(pair: IncompressibleState): IncompressibleStateResult;
+  state<const P extends IncompressibleState>(pair: P & CheckedInputs<P, IncompressibleInputDimensions>): IncompressibleStateResult;
   /** Δu = ∫c dT from state 1 to state 2 (a temperature, `{ T }` or `{ T, p }` each). */
-  deltaU(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEnergy'>;
+  deltaU<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEnergy'>;
   /** Δs = ∫c/T dT from state 1 to state 2. */
-  deltaS(state1: IncompressibleThermalState, state2: IncompressibleThermalState): Quantity<'specificEntropy'>;
+  deltaS<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEntropy'>;
   /** Δh = Δu + v̄·(p2 − p1) between two states `{ T, p }`, v̄ the mean of v(T1) and v(T2). Pressures are absolute. */
-  deltaH(state1: IncompressibleState, state2: IncompressibleState): Quantity<'specificEnergy'>;
+  deltaH<const P1 extends IncompressibleState, const P2 extends IncompressibleState>(state1: P1 & CheckedInputs<P1, IncompressibleInputDimensions>, state2: P2 & CheckedInputs<P2, IncompressibleInputDimensions>): Quantity<'specificEnergy'>;
 }
 
 /** The facade object of a compiled substance. */
@@ -90,7 +97,7 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
   const { definition, model } = compiled;
   const name = definition.name;
   const bounds: Bounds = { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}`, ...(definition.rangeNote === undefined ? {} : { hint: `; ${definition.rangeNote}` }) };
-  const temperature = (input: QuantityLike<'temperature'>, parameter: string, units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
+  const temperature = (input: unknown, parameter: string, units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
   /** T (and p, NaN when not given) of a state; `prefix` names its inputs. */
   const resolve = (state: unknown, prefix: string, needP: boolean): [number, number] => {
     const units = new CallUnits();
@@ -103,7 +110,7 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
   };
   const Tref = Math.min(model.Tmax, Math.max(model.Tmin, 298.15));
   const pRef = STANDARD_ATMOSPHERE_PA;
-  const c = (T: QuantityLike<'temperature'>): Quantity<'specificHeat'> => resultQuantity(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat', 'c');
+  const c = (T: unknown): Quantity<'specificHeat'> => resultQuantity(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat', 'c');
   return {
     name,
     phase: definition.state,

@@ -12,6 +12,7 @@ import { optionalQuantity, resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
 import { formatNumber, InvalidInputError } from '../errors.js';
 import { Quantity, type QuantityLike } from '../units/quantity.js';
+import type { CheckedInputs, LooseQuantity } from '../core/inputs.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, P_SEARCH_MIN, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './if97/constants.js';
 import { defaultContext } from './if97/context.js';
 import { stateFromHS } from './if97/hs.js';
@@ -111,16 +112,33 @@ export interface SaturationResult {
   readonly sigma: Quantity<'surfaceTension'> | undefined;
 }
 
-/** The pairs `water.state` accepts. Pressures are absolute; gauge units (`psig`) are converted with the ambient. */
+/**
+ * The pairs `water.state` accepts. Pressures are absolute; gauge units (`psig`) are converted with the
+ * ambient. Each quantity is a `Quantity`, unit text (checked by the compiler when it is a literal) or a
+ * run-time `string` (checked when read).
+ */
 export type WaterPair =
-  | { readonly T: QuantityLike<'temperature'>; readonly p: QuantityLike<'pressure'> }
-  | { readonly p: QuantityLike<'pressure'>; readonly h: QuantityLike<'specificEnergy'> }
-  | { readonly p: QuantityLike<'pressure'>; readonly s: QuantityLike<'specificEntropy'> }
-  | { readonly h: QuantityLike<'specificEnergy'>; readonly s: QuantityLike<'specificEntropy'> }
-  | { readonly T: QuantityLike<'temperature'>; readonly x: number }
-  | { readonly p: QuantityLike<'pressure'>; readonly x: number }
-  | { readonly T: QuantityLike<'temperature'>; readonly v: QuantityLike<'specificVolume'> }
-  | { readonly T: QuantityLike<'temperature'>; readonly rho: QuantityLike<'density'> };
+  | { readonly T: LooseQuantity<'temperature'>; readonly p: LooseQuantity<'pressure'> }
+  | { readonly p: LooseQuantity<'pressure'>; readonly h: LooseQuantity<'specificEnergy'> }
+  | { readonly p: LooseQuantity<'pressure'>; readonly s: LooseQuantity<'specificEntropy'> }
+  | { readonly h: LooseQuantity<'specificEnergy'>; readonly s: LooseQuantity<'specificEntropy'> }
+  | { readonly T: LooseQuantity<'temperature'>; readonly x: number }
+  | { readonly p: LooseQuantity<'pressure'>; readonly x: number }
+  | { readonly T: LooseQuantity<'temperature'>; readonly v: LooseQuantity<'specificVolume'> }
+  | { readonly T: LooseQuantity<'temperature'>; readonly rho: LooseQuantity<'density'> };
+
+/** The dimension of each input name of water. */
+export interface WaterInputDimensions {
+  T: 'temperature';
+  p: 'pressure';
+  h: 'specificEnergy';
+  s: 'specificEntropy';
+  v: 'specificVolume';
+  rho: 'density';
+}
+
+/** A pair with its literal unit texts checked against {@link WaterInputDimensions}. */
+export type CheckedWaterPair<P> = P & CheckedInputs<P, WaterInputDimensions>;
 
 const PHASES: readonly WaterPhase[] = ['liquid', 'vapor', 'two-phase', 'supercritical'];
 const IF97 = 'IAPWS-IF97';
@@ -251,7 +269,7 @@ function enthalpyRange(): [number, number] {
  * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 region 5 (3631.67 °F (2273.15 K)) …
  * ```
  */
-export function waterState(pair: WaterPair): WaterStateResult {
+export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>): WaterStateResult {
   const key = readPair(pair, 'water.state', PAIRS);
   // readPair has checked which keys are present
   const a = pair as unknown as Record<string, unknown>;
@@ -375,7 +393,7 @@ function phaseOf(w: WaterProperties): SaturatedPhase {
  * water.saturation({ T: '212 °F' }).p.in('psia');  //=> 14.70...
  * ```
  */
-export function waterSaturation(at: { readonly T: QuantityLike<'temperature'> } | { readonly p: QuantityLike<'pressure'> }): SaturationResult {
+export function waterSaturation<const P extends { readonly T: LooseQuantity<'temperature'> } | { readonly p: LooseQuantity<'pressure'> }>(at: CheckedWaterPair<P>): SaturationResult {
   const key = readPair(at, 'water.saturation', [['T'], ['p']]);
   const a = at as unknown as Record<string, unknown>;
   const units = new CallUnits();
@@ -417,24 +435,24 @@ export function waterSaturation(at: { readonly T: QuantityLike<'temperature'> } 
  * water.deltaH({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/kg');   //=> -1030.2...
  * ```
  */
-export function waterDeltaH(state1: WaterPair, state2: WaterPair): Quantity<'specificEnergy'> {
+export function waterDeltaH<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEnergy'> {
   return resultQuantity(stateOrNamed(state2, 'state2').h.si - stateOrNamed(state1, 'state1').h.si, 'specificEnergy', 'deltaH');
 }
 
 /** Δu = u(state2) − u(state1) between two states given by any {@link WaterPair}. */
-export function waterDeltaU(state1: WaterPair, state2: WaterPair): Quantity<'specificEnergy'> {
+export function waterDeltaU<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEnergy'> {
   return resultQuantity(stateOrNamed(state2, 'state2').u.si - stateOrNamed(state1, 'state1').u.si, 'specificEnergy', 'deltaU');
 }
 
 /** Δs = s(state2) − s(state1) between two states given by any {@link WaterPair}. */
-export function waterDeltaS(state1: WaterPair, state2: WaterPair): Quantity<'specificEntropy'> {
+export function waterDeltaS<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEntropy'> {
   return resultQuantity(stateOrNamed(state2, 'state2').s.si - stateOrNamed(state1, 'state1').s.si, 'specificEntropy', 'deltaS');
 }
 
 /** A state, with the argument's name put in front of an input error's message. */
 function stateOrNamed(pair: WaterPair, name: string): WaterStateResult {
   if (typeof pair !== 'object' || pair === null) throw new InvalidInputError('input.invalid', name, `${name} must be a pair such as { p: '1 MPa', T: '300 °C' }; got ${String(pair)}`);
-  return waterState(pair);
+  return waterState(pair as CheckedWaterPair<WaterPair>);
 }
 
 /** The range of IAPWS-IF97 (R7-97(2012) Section 3). */

@@ -15,6 +15,8 @@ import { stateFromPT as fluidStateFromPT } from '../fluids/flash.js';
 import { FluidState } from '../fluids/model.js';
 import { saturationAtT as fluidSaturationAtT } from '../fluids/saturation.js';
 import type { Quantity, QuantityLike } from '../units/quantity.js';
+import type { CheckedInputs, LooseQuantity } from '../core/inputs.js';
+import type { WaterInputDimensions } from './state.js';
 import { T_CRITICAL } from './if97/constants.js';
 import { ConductivityResult, conductivityPressureLimit, CONDUCTIVITY_T_MAX, CONDUCTIVITY_T_MIN, thermalConductivity } from './transport/conductivity.js';
 import { CriticalEnhancementInputs } from './transport/critical.js';
@@ -34,8 +36,8 @@ export interface TransportOptions {
 
 /** A (T, ρ) point: temperature and density. */
 export interface TemperatureDensity {
-  readonly T: QuantityLike<'temperature'>;
-  readonly rho: QuantityLike<'density'>;
+  readonly T: LooseQuantity<'temperature'>;
+  readonly rho: LooseQuantity<'density'>;
 }
 
 const work = new Iapws95InputsWork();
@@ -104,7 +106,7 @@ function enhancementAt(T: number, rho: number): void {
  * water.viscosity({ T: '647.35 K', rho: '322 kg/m³' }).in('µPa·s');   //=> 42.96158 (Table 5, with μ2)
  * ```
  */
-export function waterViscosity(at: TemperatureDensity, options?: TransportOptions): Quantity<'dynamicViscosity'> {
+export function waterViscosity<const P extends TemperatureDensity>(at: P & CheckedInputs<P, WaterInputDimensions>, options?: TransportOptions): Quantity<'dynamicViscosity'> {
   const enhanced = enhancementWanted(options);
   const [T, rho] = readPoint(at, 'water.viscosity', VISCOSITY, viscosityPressureLimit);
   if (enhanced) enhancementAt(T, rho);
@@ -123,7 +125,7 @@ export function waterViscosity(at: TemperatureDensity, options?: TransportOption
  * water.thermalConductivity({ T: '647.35 K', rho: '322 kg/m³' }).in('mW/(m·K)');   //=> 1443.756 (R15-11 Table 5)
  * ```
  */
-export function waterThermalConductivity(at: TemperatureDensity, options?: TransportOptions): Quantity<'thermalConductivity'> {
+export function waterThermalConductivity<const P extends TemperatureDensity>(at: P & CheckedInputs<P, WaterInputDimensions>, options?: TransportOptions): Quantity<'thermalConductivity'> {
   const enhanced = enhancementWanted(options);
   const [T, rho] = readPoint(at, 'water.thermalConductivity', CONDUCTIVITY, conductivityPressureLimit);
   if (enhanced) enhancementAt(T, rho);
@@ -143,7 +145,7 @@ const SURFACE: Bounds = { min: SURFACE_TENSION_T_MIN, max: SURFACE_TENSION_T_MAX
  * water.surfaceTension({ T: '700 K' });              // throws OutOfRangeError: above the critical point
  * ```
  */
-export function waterSurfaceTension(at: { readonly T: QuantityLike<'temperature'> }): Quantity<'surfaceTension'> {
+export function waterSurfaceTension<const P extends { readonly T: LooseQuantity<'temperature'> }>(at: P & CheckedInputs<P, WaterInputDimensions>): Quantity<'surfaceTension'> {
   readPair(at, 'water.surfaceTension', [['T']]);
   const units = new CallUnits();
   const T = readTemperature((at as { T: QuantityLike<'temperature'> }).T, 'T', SURFACE, units);
