@@ -6,6 +6,7 @@
 import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
+import fc from 'fast-check';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { run } from '../src/cli/run.js';
 import { helpText } from '../src/cli/help.js';
@@ -401,6 +402,8 @@ const CATALOGUE: Record<string, readonly Case[]> = {
     [['coil', 'T1=26degC', 'RH1=0.5', 'flow=4kg/s', 'ADP=10degC', 'BF=1.5'], 1, 'bypass factor'],
     [['coil', 'T1=26degC', 'RH1=0.5', 'flow=4K', 'ADP=10degC', 'BF=0.1'], 1, 'flow=4K'],
     [['water', 'p=1MPa', 'x=1.5'], 1, 'x = 1.5'],
+    [['air-mix', 'T1=30degC', 'RH1=0.5', 'flow1=1kg/s', 'T2=20degC', 'RH2=0.5', 'flow2=0kg/s'], 1, 'flow2=0kg/s'],
+    [['fluid', 'water', 'T=300K', 'x=-0.1'], 1, 'x = -0.1'],
   ],
 };
 
@@ -419,6 +422,22 @@ describe('malformed command lines: one line on stderr, exit 1 (input) or 2 (usag
       expect(r.err).not.toMatch(/\bat .+:\d+:\d+|internal error|TypeError|RangeError|ReferenceError|undefined|NaN K/);
     });
   }
+});
+
+describe('random command lines (fast-check)', () => {
+  const heads = [['water'], ['sat'], ['gas', 'N2'], ['liquid', 'copper'], ['air'], ['air-mix'], ['coil'], ['fluid', 'water'], ['fluid', 'water', 'sat'], ['frobnicate']];
+  const names = ['T', 'p', 'h', 's', 'x', 'v', 'rho', 'RH', 'W', 'Twb', 'Tdp', 'altitude', 'T1', 'T2', 'RH1', 'RH2', 'W1', 'flow', 'flow1', 'flow2', 'ADP', 'BF', 'p1', 'p2'];
+  const values = ['300K', '1MPa', '0.5', '50%', '10 g/kg', '-40degF', '1e-300 Pa', '0x1', '1e', '5000 K', '22.064 MPa', '647.096 K', '1 kg/s', '2000 cfm', '0', '-1', '1e308 MPa', '273.15 K', '3000 kJ/kg', '7 kJ/(kg·K)', '322 kg/m³', '10 °C', '0.15'];
+  it('end with exit code 0 and output, or 1 or 2 and one line on stderr; never an internal error, NaN or a stack trace', () => {
+    fc.assert(
+      fc.property(fc.constantFrom(...heads), fc.uniqueArray(fc.constantFrom(...names), { maxLength: 5 }), fc.array(fc.constantFrom(...values), { minLength: 5, maxLength: 5 }), fc.subarray(['--units=us', '--json', '--transport']), (head, keys, vals, options) => {
+        const r = cli(...head, ...keys.map((k, i) => `${k}=${vals[i]}`), ...options);
+        if (r.code === 0) return r.err === '' && r.out.length > 0 && !/NaN|Infinity/.test(r.out);
+        return (r.code === 1 || r.code === 2) && r.out === '' && /^heatstate: [^\n]+$/.test(r.err) && !/internal error|NaN|\bat .+:\d+:\d+/.test(r.err);
+      }),
+      { numRuns: 1500 },
+    );
+  });
 });
 
 describe('the built bin (dist/cli.js)', () => {

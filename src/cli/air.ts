@@ -7,7 +7,7 @@
 import { HeatstateError } from '../errors.js';
 import { humidAir, readRelativeHumidity, type HumidAirResult, type HumidAirStateInput } from '../humid-air/index.js';
 import { Quantity, type QuantityLike } from '../units/quantity.js';
-import { UsageError, type Args } from './args.js';
+import { InputError, UsageError, type Args } from './args.js';
 import type { Row } from './display.js';
 import { chooseSet, onlyNames, readFlow, readValue, ValueError } from './inputs.js';
 
@@ -131,6 +131,8 @@ export function airCommand(args: Args): Row[] {
 /** A dry-air mass flow for a stream at `state`: a mass flow as given, or a volume flow divided by the stream's v (per kg of dry air). */
 function flowAt(name: string, text: string, state: HumidAirResult): QuantityLike<'massFlow'> {
   const f = readFlow(name, text);
+  const given = 'massFlow' in f ? f.massFlow : f.volumeFlow;
+  if (!(given > 0)) throw new InputError(`${name}=${text}: a flow must be positive`);
   if ('massFlow' in f) return text as QuantityLike<'massFlow'>;
   return Quantity.fromSI(f.volumeFlow / state.v.si, 'massFlow');
 }

@@ -105,7 +105,7 @@ export function saturationCommand(args: Args): Row[] {
   ];
   if (args.transport) {
     const t = saturationTransport(sat.T.si, callUnits(args.values));
-    rows.push(...transportRows(t.liquid, 'f'), ...transportRows(t.vapor, 'g'), ['sigma', t.sigma]);
+    rows.push(...transportRows(t.liquid, 'f'), ...transportRows(t.vapor, 'g'), ['sigma', t.sigma ?? 'outside IAPWS R1-76(2014) (273.16 K to 647.096 K)']);
   }
   return rows;
 }

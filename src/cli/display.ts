@@ -77,8 +77,11 @@ export function show(q: Quantity, units: Units): Fixed {
   return { value: q.in(unit), unit };
 }
 
+/** Six significant digits; exponent form below 1e-4 and from 1e9 (no long runs of zeros). */
 function sixDigits(x: number): string {
-  return String(Number(x.toPrecision(6)));
+  const t = Number(x.toPrecision(6));
+  if (t !== 0 && Number.isFinite(t) && (Math.abs(t) < 1e-4 || Math.abs(t) >= 1e9)) return t.toExponential(5).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  return String(t);
 }
 
 /** Rows as an aligned table (six significant digits) or as JSON (full precision). */
