@@ -3,6 +3,7 @@
  *
  * @packageDocumentation
  */
+import { readFlag, readOptions } from '../core/read.js';
 import { lookupIncompressible, type CatalogueOptions } from './catalogue.js';
 import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 import { substanceFacade, type IncompressibleSubstance } from './substance.js';
@@ -14,7 +15,13 @@ export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
 /** Options of {@link incompressible}: `{ supercooled: true }`, or a solution's `{ massFraction }` / `{ volumeFraction }`. */
-export type IncompressibleOptions = CatalogueOptions;
+export type IncompressibleOptions = CatalogueOptions & {
+  /**
+   * Compute outside the data's temperature range by extending its end piece (results carry
+   * `extrapolated: true`). Default false: such temperatures throw.
+   */
+  readonly extrapolate?: boolean;
+};
 export type { IncompressibleSubstance, IncompressibleState, IncompressibleThermalState, IncompressibleStateResult } from './substance.js';
 export { incompressibleBatch, INCOMPRESSIBLE_BATCH_STATUS } from './batch.js';
 export type { IncompressibleBatchProperty } from './batch.js';
@@ -41,8 +48,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * ```
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {
-  const compiled = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, options) : compileDefinition(nameOrDefinition);
-  return substanceFacade(compiled);
+  const { extrapolate, ...lookup } = readOptions<IncompressibleOptions>(options, 'options', ['supercooled', 'massFraction', 'volumeFraction', 'extrapolate']);
+  const compiled = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, lookup) : compileDefinition(nameOrDefinition);
+  return substanceFacade(compiled, readFlag(extrapolate, 'options.extrapolate'));
 }
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';

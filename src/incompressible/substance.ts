@@ -8,7 +8,7 @@
  */
 import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
-import { readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
+import { ABSOLUTE_TEMPERATURE, readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
 import { Quantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
@@ -74,6 +74,8 @@ export interface IncompressibleSubstance {
   density<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'density'>;
   /** The plain-number SI core. */
   readonly core: IncompressibleModel;
+  /** Whether temperatures outside the data are computed (by extending its end piece, flagged) rather than refused. */
+  readonly extrapolate: boolean;
   /** Specific heat c(T) (= cp = cv). Throws {@link OutOfRangeError} outside the range. */
   c<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'specificHeat'>;
   /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cp = c. */
@@ -93,10 +95,13 @@ export interface IncompressibleSubstance {
 }
 
 /** The facade object of a compiled substance. */
-export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubstance {
+export function substanceFacade(compiled: CompiledSubstance, extrapolate = false): IncompressibleSubstance {
   const { definition, model } = compiled;
   const name = definition.name;
-  const bounds: Bounds = { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}`, ...(definition.rangeNote === undefined ? {} : { hint: `; ${definition.rangeNote}` }) };
+  const hint = `${definition.rangeNote === undefined ? '' : `; ${definition.rangeNote}`}; pass { extrapolate: true } to compute outside it (results are then flagged)`;
+  const bounds: Bounds = extrapolate ? ABSOLUTE_TEMPERATURE : { min: model.Tmin, max: model.Tmax, scope: `the data for ${name}`, hint };
+  /** Whether any of the temperatures lies outside the data (so the result is an extrapolation). */
+  const outside = (...Ts: number[]): boolean => Ts.some((T) => T < model.Tmin || T > model.Tmax);
   const temperature = (input: unknown, parameter: string, units?: CallUnits): number => readTemperature(input, parameter, bounds, units);
   /** T (and p, NaN when not given) of a state; `prefix` names its inputs. */
   const resolve = (state: unknown, prefix: string, needP: boolean): [number, number] => {
@@ -110,13 +115,17 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
   };
   const Tref = Math.min(model.Tmax, Math.max(model.Tmin, 298.15));
   const pRef = STANDARD_ATMOSPHERE_PA;
-  const c = (T: unknown): Quantity<'specificHeat'> => resultQuantity(heatCapacityAt(model, temperature(T, 'T')), 'specificHeat', 'c');
+  const c = (T: unknown): Quantity<'specificHeat'> => {
+    const t = temperature(T, 'T');
+    return resultQuantity(heatCapacityAt(model, t), 'specificHeat', 'c', outside(t));
+  };
   return {
     name,
     phase: definition.state,
     definition,
     source: compiled.provenance,
     core: model,
+    extrapolate,
     range: { T: { min: Quantity.fromSI(model.Tmin, 'temperature'), max: Quantity.fromSI(model.Tmax, 'temperature') }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
     reference: { T: Quantity.fromSI(Tref, 'temperature'), p: Quantity.fromSI(pRef, 'pressure') },
     rho: Quantity.fromSI(1 / model.v, 'density'),
@@ -124,43 +133,47 @@ export function substanceFacade(compiled: CompiledSubstance): IncompressibleSubs
     c,
     cp: c,
     cv: c,
-    density: (T) => resultQuantity(densityAt(model, temperature(T, 'T')), 'density', 'rho'),
+    density: (T) => {
+      const t = temperature(T, 'T');
+      return resultQuantity(densityAt(model, t), 'density', 'rho', outside(t));
+    },
     averageC(T1, T2) {
       const units = new CallUnits();
       const a = temperature(T1, 'T1', units);
       const b = temperature(T2, 'T2', units);
-      return resultQuantity(a === b ? heatCapacityAt(model, a) : internalEnergyChange(model, a, b) / (b - a), 'specificHeat', 'averageC');
+      return resultQuantity(a === b ? heatCapacityAt(model, a) : internalEnergyChange(model, a, b) / (b - a), 'specificHeat', 'averageC', outside(a, b));
     },
     state(pair) {
       const [T, p] = resolve(pair, '', true);
       const cT = heatCapacityAt(model, T);
+      const x = outside(T);
       return {
         T: resultQuantity(T, 'temperature', 'T'),
         p: resultQuantity(p, 'pressure', 'p'),
-        c: resultQuantity(cT, 'specificHeat', 'c'),
-        cp: resultQuantity(cT, 'specificHeat', 'cp'),
-        cv: resultQuantity(cT, 'specificHeat', 'cv'),
-        rho: resultQuantity(densityAt(model, T), 'density', 'rho'),
-        v: resultQuantity(1 / densityAt(model, T), 'specificVolume', 'v'),
-        u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u'),
-        h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h'),
-        s: resultQuantity(entropyChange(model, Tref, T), 'specificEntropy', 's'),
+        c: resultQuantity(cT, 'specificHeat', 'c', x),
+        cp: resultQuantity(cT, 'specificHeat', 'cp', x),
+        cv: resultQuantity(cT, 'specificHeat', 'cv', x),
+        rho: resultQuantity(densityAt(model, T), 'density', 'rho', x),
+        v: resultQuantity(1 / densityAt(model, T), 'specificVolume', 'v', x),
+        u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u', x),
+        h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h', x),
+        s: resultQuantity(entropyChange(model, Tref, T), 'specificEntropy', 's', x),
       };
     },
     deltaU(state1, state2) {
       const [a] = resolve(state1, 'state1.', false);
       const [b] = resolve(state2, 'state2.', false);
-      return resultQuantity(internalEnergyChange(model, a, b), 'specificEnergy', 'deltaU');
+      return resultQuantity(internalEnergyChange(model, a, b), 'specificEnergy', 'deltaU', outside(a, b));
     },
     deltaS(state1, state2) {
       const [a] = resolve(state1, 'state1.', false);
       const [b] = resolve(state2, 'state2.', false);
-      return resultQuantity(entropyChange(model, a, b), 'specificEntropy', 'deltaS');
+      return resultQuantity(entropyChange(model, a, b), 'specificEntropy', 'deltaS', outside(a, b));
     },
     deltaH(state1, state2) {
       const [T1, p1] = resolve(state1, 'state1.', true);
       const [T2, p2] = resolve(state2, 'state2.', true);
-      return resultQuantity(enthalpyChange(model, T1, p1, T2, p2), 'specificEnergy', 'deltaH');
+      return resultQuantity(enthalpyChange(model, T1, p1, T2, p2), 'specificEnergy', 'deltaH', outside(T1, T2));
     },
   };
 }
