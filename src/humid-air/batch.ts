@@ -9,7 +9,7 @@
 import { runBatch, type BatchInputSet, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
 import { Status, type StatusCode } from '../core/status.js';
 import { InvalidInputError } from '../errors.js';
-import { HumidAirState, humidAirState, PAIR } from './core/state.js';
+import { HumidAirState, humidAirState, PAIR, REASON } from './core/state.js';
 
 /** Properties a humid-air batch can return, in SI (K, fractions, kg/kg, J/kg, m³/kg, kg/m³, Pa, J/(kg·K)). */
 export type HumidAirBatchProperty = 'T' | 'Twb' | 'Tdp' | 'RH' | 'W' | 'h' | 'v' | 'rho' | 'pw' | 'pws' | 'Ws' | 'saturationDegree' | 'cp';
@@ -58,6 +58,8 @@ const PROPERTIES: { readonly [K in HumidAirBatchProperty]: (out: HumidAirState) 
 
 /** Properties that are NaN where not defined (the core answers Status.undefinedProperty for them). */
 function undefinedAt(out: HumidAirState, property: HumidAirBatchProperty): boolean {
+  // the core leaves reason = none when every output is defined
+  if (out.reason === REASON.none) return false;
   switch (property) {
     case 'Ws':
       return out.Ws !== out.Ws;

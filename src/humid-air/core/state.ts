@@ -156,11 +156,11 @@ function belowBoiling(p: number, T: number): number {
 }
 
 /**
- * Fills every output from (p, T, W); `Tdp` and `Twb` are used as given when finite (the caller
- * knows them exactly), computed otherwise.
+ * Fills every output from (p, T, W); `Tdp`, `Twb` and `pwsAtT` (pws(T)) are used as given when
+ * not NaN (the caller knows them exactly), computed otherwise.
  */
-function fill(out: HumidAirState, p: number, T: number, W: number, Tdp: number, Twb: number, wetBulb: boolean): StatusCode {
-  const pws = waterSaturationPressure(T);
+function fill(out: HumidAirState, p: number, T: number, W: number, Tdp: number, Twb: number, wetBulb: boolean, pwsAtT: number): StatusCode {
+  const pws = pwsAtT === pwsAtT ? pwsAtT : waterSaturationPressure(T);
   const psat = pws;
   const Ws = psat < p ? humidityRatioFromVaporPressure(p, psat) : NO_SATURATION;
   if (Ws !== NO_SATURATION && W > Ws) {
@@ -262,14 +262,17 @@ export function humidAirState(pair: number, a: number, b: number, p: number, wet
   let W = NaN;
   let Tdp = NaN;
   let Twb = NaN;
+  let pwsT = NaN;
   let s: StatusCode;
   switch (pair) {
     case PAIR.T_RH: {
       T = a;
       if ((s = checkTemperature(out, T)) !== Status.ok) return s;
       if (!(b >= 0 && b <= 1)) return fail(out, Status.outOfRange, REASON.relativeHumidity);
-      W = humidityRatioAtRH(p, T, b);
-      if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
+      pwsT = waterSaturationPressure(T);
+      const pw = b * pwsT;
+      if (!(pw < p)) return fail(out, Status.outOfRange, REASON.noState);
+      W = humidityRatioFromVaporPressure(p, pw);
       if (b === 1) Tdp = T;
       break;
     }
@@ -429,7 +432,7 @@ export function humidAirState(pair: number, a: number, b: number, p: number, wet
   if ((s = checkTemperature(out, T)) !== Status.ok) return s;
   if (Tdp === Tdp && Tdp > T) Tdp = T;
   if (Twb === Twb && Twb > T) Twb = T;
-  return fill(out, p, T, W, Tdp, Twb, wetBulb);
+  return fill(out, p, T, W, Tdp, Twb, wetBulb, pwsT);
 }
 
 /** |hw| below this (J/kg: t* within 1e-6 K of 0 °C over liquid) makes (h, Twb) a dependent pair. */
