@@ -66,7 +66,14 @@ export type Checked<P, Allowed extends string, Passed extends string = never> = 
       : never;
 };
 
-/** Reads a relative humidity (a fraction, or percent text such as `'50 %'`) as a fraction in [0, 1]. */
+/**
+ * Reads a relative humidity (a fraction, or percent text such as `'50 %'`) as a fraction in [0, 1].
+ * @example
+ * ```ts
+ * readRelativeHumidity('45 %');   //=> 0.45
+ * readRelativeHumidity(45);       // throws OutOfRangeError: … (relative humidity is a fraction: write 0.45 or "45 %")
+ * ```
+ */
 export function readRelativeHumidity(input: unknown, parameter = 'RH'): number {
   let value: number;
   let percent = false;
@@ -104,6 +111,11 @@ const HUMIDITY_RATIO = { min: 0, max: Infinity, scope: 'a humidity ratio (at lea
 /**
  * Reads a humidity ratio in kg/kg: a plain number (kg/kg), a `Quantity<'humidityRatio'>` or unit
  * text (`'10 g/kg'`, `'70 gr/lbm'`); at least 0.
+ * @example
+ * ```ts
+ * readHumidityRatio('70 gr/lbm', 'W');   //=> 0.01
+ * readHumidityRatio(0.012, 'W');         //=> 0.012
+ * ```
  */
 export function readHumidityRatio(input: unknown, parameter: string, units?: CallUnits): number {
   if (typeof input === 'number') {
