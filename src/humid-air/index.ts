@@ -50,7 +50,7 @@ export type { QuantityLike, QuantityInput } from '../units/quantity.js';
  * `coolingCoil`, `steamHumidifier`, `evaporativeHumidifier`) and `pressureAtAltitude`.
  * @example
  * ```ts
- * humidAir.state({ T: '30 °C', RH: '50 %', p: '101.325 kPa' }).h.in('kJ/kg');   //=> 64.1... (per kg dry air)
+ * humidAir.state({ T: '30 °C', RH: '50 %', p: '101.325 kPa' }).h.in('kJ/kg');   //=> 64.217... (per kg dry air)
  * ```
  */
 export const humidAir = {

@@ -206,7 +206,7 @@ export interface SensibleInputLoose {
  *   with the lowest T2 (or Q) allowed
  * @example
  * ```ts
- * humidAir.heat({ inlet: humidAir.state({ T: '24 °C', RH: 0.5 }), flow: '2 kg/s', T2: '35 °C' }).heat.in('kW');   //=> 22.55...
+ * humidAir.heat({ inlet: humidAir.state({ T: '24 °C', RH: 0.5 }), flow: '2 kg/s', T2: '35 °C' }).heat.in('kW');   //=> 22.51...
  * ```
  */
 export function heat<const I extends SensibleInputLoose>(input: I & Checked<I, 'flow' | 'T2' | 'Q', 'inlet'>): ProcessResult {
@@ -279,7 +279,7 @@ export interface CoolingCoilInputLoose {
  * @example
  * ```ts
  * const coil = humidAir.coolingCoil({ inlet: mixed.leaving, flow: '4 kg/s', ADP: '10 °C', bypassFactor: 0.15 });
- * coil.heat.in('kW');   //=> -81.9... (negative: heat removed; the coil duty is about 82 kW)
+ * coil.heat.in('kW');   //=> -81.83... (negative: heat removed; the coil duty is about 82 kW)
  * ```
  */
 export function coolingCoil<const I extends CoolingCoilInputLoose>(input: I & Checked<I, 'flow' | 'ADP' | 'T2' | 'RH2' | 'Tcondensate', 'inlet' | 'bypassFactor'>): ProcessResult {
@@ -383,7 +383,7 @@ export interface SteamHumidifierInputLoose extends TargetInput {
  * @example
  * ```ts
  * const winter = humidAir.state({ T: '20 °C', RH: 0.2 });
- * humidAir.steamHumidifier({ inlet: winter, flow: '2 kg/s', RH2: '45 %', steam: { p: '1 atm', T: '110 °C' } }).water?.flow.in('kg/h');   //=> 46.6...
+ * humidAir.steamHumidifier({ inlet: winter, flow: '2 kg/s', RH2: '45 %', steam: { p: '1 atm', T: '110 °C' } }).water?.flow.in('kg/h');   //=> 28.04...
  * ```
  */
 export function steamHumidifier<const I extends SteamHumidifierInputLoose>(input: I & Checked<I, 'flow' | 'W2' | 'RH2' | 'steam', 'inlet'>): ProcessResult {
@@ -439,7 +439,7 @@ export interface EvaporativeHumidifierInputLoose extends TargetInput {
  * @example
  * ```ts
  * const hot = humidAir.state({ T: '35 °C', RH: 0.2 });
- * humidAir.evaporativeHumidifier({ inlet: hot, flow: '1 kg/s', T2: '25 °C' }).leaving.RH;   //=> 0.62...
+ * humidAir.evaporativeHumidifier({ inlet: hot, flow: '1 kg/s', T2: '25 °C' }).leaving.RH;   //=> 0.561...
  * ```
  */
 export function evaporativeHumidifier<const I extends EvaporativeHumidifierInputLoose>(input: I & Checked<I, 'flow' | 'W2' | 'RH2' | 'T2' | 'Twater', 'inlet'>): ProcessResult {

@@ -137,8 +137,8 @@ function frostPoint(pw: number): number {
  * Returns −1 when the answer lies outside [Tlo, Thi], for pw ≤ 0, or when Newton fails.
  * @example
  * ```ts
- * saturationTemperatureAt(2339.21, 0, 1000);   //=> 293.15 (K, over liquid)
- * saturationTemperatureAt(103.239, 0, 1000);   //=> 253.15 (K, over ice)
+ * saturationTemperatureAt(2339.2148, 0, 1000);   //=> 293.15000... (K, over liquid)
+ * saturationTemperatureAt(103.23903, 0, 1000);   //=> 253.15000... (K, over ice)
  * ```
  */
 export function saturationTemperatureAt(pw: number, Tlo: number, Thi: number): number {

@@ -249,8 +249,8 @@ function wetBulbOf(p: number, T: number, W: number, lo: number): number {
  * ```ts
  * const out = new HumidAirState();
  * humidAirState(PAIR.T_RH, 303.15, 0.5, 101325, true, out);   //=> 0 (Status.ok)
- * out.W;     //=> 0.0133735 (kg/kg dry air)
- * out.Twb;   //=> 295.147 (K)
+ * out.W;     //=> 0.0133123... (kg/kg dry air)
+ * out.Twb;   //=> 295.154... (K)
  * humidAirState(PAIR.W_Tdp, 0.01, 285, 101325, true, out);    //=> 3 (invalidInput)
  * out.reason === REASON.dependentPair;   //=> true
  * ```
