@@ -7,9 +7,8 @@
  * Results are engineering estimates; defer to local codes and licensed professionals for design.
  *
  * Run: npx tsx examples/air-handler.ts
- * (imports the source entry; once the package exports heatstate/humid-air, import from there)
  */
-import { humidAir, toGrainsPerPound, type HumidAirResult, type ProcessResult } from '../src/humid-air/index.js';
+import { humidAir, type HumidAirResult, type ProcessResult } from 'heatstate/humid-air';
 
 const outdoor = humidAir.state({ T: '33 °C', RH: 0.4 });
 const returnAir = humidAir.state({ T: '24 °C', RH: '50 %' });
@@ -22,13 +21,13 @@ const coil = humidAir.coolingCoil({ inlet: mixed.leaving, flow: mixed.flow, ADP:
 const reheat = humidAir.heat({ inlet: coil.leaving, flow: mixed.flow, T2: '15 °C' });
 
 function row(name: string, s: HumidAirResult): string {
-  return `${name.padEnd(14)}${s.T.in('°C').toFixed(1).padStart(7)} °C${(s.RH * 100).toFixed(0).padStart(5)} %${(s.W * 1000).toFixed(2).padStart(8)} g/kg${toGrainsPerPound(s.W).toFixed(1).padStart(8)} gr/lb${s.h.in('kJ/kg').toFixed(1).padStart(8)} kJ/kg${s.Tdp!.in('°C').toFixed(1).padStart(7)} °C dp`;
+  return `${name.padEnd(14)}${s.T.in('°C').toFixed(1).padStart(7)} °C${(s.RH * 100).toFixed(0).padStart(5)} %${s.W.in('g/kg').toFixed(2).padStart(8)} g/kg${s.W.in('gr/lbm').toFixed(1).padStart(8)} gr/lb${s.h.in('kJ/kg').toFixed(1).padStart(8)} kJ/kg${s.Tdp!.in('°C').toFixed(1).padStart(7)} °C dp`;
 }
 function load(name: string, r: ProcessResult): string {
   return `${name.padEnd(14)}${r.heat.in('kW').toFixed(1).padStart(8)} kW${r.heat.in('Btu/h').toFixed(0).padStart(10)} Btu/h${r.heat.in('TR').toFixed(2).padStart(8)} TR   sensible ${r.sensible.in('kW').toFixed(1)} kW, latent ${r.latent.in('kW').toFixed(1)} kW, SHR ${r.sensibleHeatRatio?.toFixed(2)}`;
 }
 
-console.log(`pressure: ${outdoor.p.in('kPa')} kPa (${outdoor.pressureFrom}), model: ${outdoor.model}`);
+console.log(`pressure: ${outdoor.p.in('kPa')} kPa (${outdoor.pressureFrom}); model: ASHRAE ideal mixture (IAPWS-IF97 and R14-08 saturation)`);
 console.log(row('outdoor', outdoor));
 console.log(row('return', returnAir));
 console.log(row('mixed', mixed.leaving));

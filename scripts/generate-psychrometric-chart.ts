@@ -13,7 +13,6 @@ import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Status } from '../src/core/status.js';
 import { humidityRatioFromWetBulb, moistAirVolume } from '../src/humid-air/core/relations.js';
-import { MODEL } from '../src/humid-air/core/saturation.js';
 import { HumidAirState, humidAirState, PAIR } from '../src/humid-air/core/state.js';
 
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
@@ -41,7 +40,6 @@ interface Units {
 }
 
 const P = 101325;
-const MODEL_USED = MODEL.enhanced;
 const W_ = 760;
 const H_ = 520;
 const M = { left: 70, right: 24, top: 44, bottom: 56 };
@@ -77,7 +75,7 @@ const US: Units = {
   fromT: (x) => ((x + 459.67) * 5) / 9,
   W: (w) => w * 7000,
   h: (x) => x * 2326,
-  v: (x) => x * 0.028316846592 / 0.45359237,
+  v: (x) => (x * 0.45359237) / 0.028316846592, // m³/kg to ft³/lbm (NIST SP 811: 1 lb = 0.45359237 kg, 1 ft³ = 0.028316846592 m³)
   xLabel: 'dry-bulb temperature  [°F]',
   yLabel: 'humidity ratio W  [grains water / lb dry air]',
   xTicks: [20, 30, 40, 50, 60, 70, 80, 90, 100, 110, 120],
@@ -91,7 +89,7 @@ const US: Units = {
 };
 
 function ws(T: number): number {
-  return humidAirState(PAIR.T_RH, T, 1, P, MODEL_USED, false, st) === Status.ok ? st.W : NaN;
+  return humidAirState(PAIR.T_RH, T, 1, P, false, st) === Status.ok ? st.W : NaN;
 }
 
 /** T (K) on the saturation curve where a line W = line(T), decreasing in T, meets it; bisection. */
@@ -118,8 +116,16 @@ function chart(u: Units): string {
     const kept = pts.filter(inside).map(([x, y]) => `${num(sx(x))},${num(sy(y))}`);
     if (kept.length >= 2) out.push(`<polyline fill="none" stroke="${color}" stroke-width="${width}"${dash ? ` stroke-dasharray="${dash}"` : ''} points="${kept.join(' ')}"/>`);
   };
+  // labels sit on a white halo (drawn under the glyphs) so that lines crossing them stay readable,
+  // and are kept inside the plot frame (about 5.6 px per character at 10 px)
   const label = (at: Point, text: string, color: string, anchor = 'start', dx = 4, dy = -4) => {
-    if (inside(at)) out.push(`<text x="${num(sx(at[0]) + dx)}" y="${num(sy(at[1]) + dy)}" text-anchor="${anchor}" fill="${color}" font-size="10">${esc(text)}</text>`);
+    if (!inside(at)) return;
+    let x = sx(at[0]) + dx;
+    const w = text.length * 5.6;
+    const left = anchor === 'start' ? x : anchor === 'end' ? x - w : x - w / 2;
+    if (left + w > W_ - M.right - 2) x -= left + w - (W_ - M.right - 2);
+    if (left < M.left + 2) x += M.left + 2 - left;
+    out.push(`<text x="${num(x)}" y="${num(sy(at[1]) + dy)}" text-anchor="${anchor}" fill="${color}" font-size="10" stroke="#ffffff" stroke-width="3" stroke-linejoin="round" paint-order="stroke">${esc(text)}</text>`);
   };
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${W_} ${H_}" width="${W_}" height="${H_}" font-family="system-ui, sans-serif" font-size="12">`);
   out.push(`<rect width="${W_}" height="${H_}" fill="#ffffff"/>`);
@@ -150,7 +156,7 @@ function chart(u: Units): string {
       pts.push([u.T(T), u.W(Math.max(0, Wv(T)))]);
     }
     line(pts, '#7b2cbf', 0.8, '1 3');
-    label(pts[40]!, `${vv} ${u.vUnit}`, '#7b2cbf', 'middle', 0, -6);
+    label(pts[40]!, `${u.name === 'si' ? vv.toFixed(2) : vv} ${u.vUnit}`, '#7b2cbf', 'middle', 0, -6);
   }
   // enthalpy: W = (h − 1006 t)/(2501e3 + 1860 t)
   for (const hh of u.enthalpies) {
@@ -164,7 +170,9 @@ function chart(u: Units): string {
       pts.push([u.T(T), u.W(Math.max(0, Wh(T)))]);
     }
     line(pts, '#e76f51', 0.8, '6 3');
-    label(pts[14]!, `h ${hh}`, '#e76f51', 'start', 3, -3);
+    // a third of the way along the part of the line inside the chart
+    const shown = pts.filter(inside);
+    if (shown.length > 0) label(shown[Math.floor(shown.length / 3)]!, `h ${hh}`, '#e76f51', 'start', 3, -3);
   }
   // thermodynamic wet-bulb: W from the adiabatic-saturation balance, from t* up to W = 0
   for (const tw of u.wetBulbs) {
@@ -172,7 +180,7 @@ function chart(u: Units): string {
     const pts: Point[] = [];
     for (let i = 0; i <= 60; i++) {
       const T = Ts + (Thi + 20 - Ts) * (i / 60);
-      const W = humidityRatioFromWetBulb(P, T, Ts, MODEL_USED);
+      const W = humidityRatioFromWetBulb(P, T, Ts);
       if (!(W >= 0)) break;
       pts.push([u.T(T), u.W(W)]);
     }
@@ -183,15 +191,26 @@ function chart(u: Units): string {
   for (const rh of [0.1, 0.2, 0.3, 0.4, 0.5, 0.6, 0.7, 0.8, 0.9, 1]) {
     const pts: Point[] = [];
     for (let i = 0; i <= steps; i++) {
-      if (humidAirState(PAIR.T_RH, Tat(i), rh, P, MODEL_USED, false, st) === Status.ok) pts.push([u.T(st.T), u.W(st.W)]);
+      if (humidAirState(PAIR.T_RH, Tat(i), rh, P, false, st) === Status.ok) pts.push([u.T(st.T), u.W(st.W)]);
     }
     line(pts, rh === 1 ? '#1d2a33' : '#61a5c2', rh === 1 ? 2 : 1);
     // label each curve where it leaves the top of the chart or at the right edge
-    const last = pts.filter(inside).pop();
-    if (last && rh < 1) label(last, `${Math.round(rh * 100)} %`, '#2a6f97', 'end', -3, last[1] > ymax * 0.97 ? 12 : -3);
+    // curves leaving through the top are labelled just inside it, to the right of the curve (away
+    // from the saturation line); the others where they meet the right edge
+    const shown = pts.filter(inside);
+    const last = shown[shown.length - 1];
+    if (last && rh < 1) {
+      const top = last[1] > ymax * 0.97;
+      // alternate heights, so that neighbouring labels do not touch
+      const height = Math.round(rh * 10) % 2 === 0 ? 0.93 : 0.86;
+      const at = top ? shown.find((q) => q[1] >= ymax * height) ?? last : last;
+      label(at, `${Math.round(rh * 100)} %`, '#2a6f97', top ? 'start' : 'end', top ? 3 : -3, top ? 4 : -3);
+    }
   }
-  label([u.T(Tlo + 0.3 * (Thi - Tlo)), u.W(ws(Tlo + 0.3 * (Thi - Tlo)))], 'saturation (RH 100 %)', '#1d2a33', 'end', -6, -4);
-  out.push(`<text x="${W_ - M.right}" y="${M.top - 8}" text-anchor="end" fill="#5b6b76" font-size="10">${esc(`generated by scripts/generate-psychrometric-chart.ts from heatstate (enhanced model; h in ${u.hUnit}, v per ${u.name === 'si' ? 'kg' : 'lb'} dry air)`)}</text>`);
+  // in the empty corner above the wet-bulb labels, left of the curve
+  const Tsat = Tlo + 0.62 * (Thi - Tlo);
+  label([u.T(Tsat), u.W(ws(Tsat))], 'saturation (RH 100 %)', '#1d2a33', 'end', -8, 0);
+  out.push(`<text x="${W_ - M.right}" y="${M.top - 8}" text-anchor="end" fill="#5b6b76" font-size="10">${esc(`generated by scripts/generate-psychrometric-chart.ts from heatstate (ASHRAE ideal mixture; h in ${u.hUnit}, v per ${u.name === 'si' ? 'kg' : 'lb'} dry air)`)}</text>`);
   out.push('</svg>');
   return `${out.join('\n')}\n`;
 }

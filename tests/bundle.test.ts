@@ -51,6 +51,23 @@ describe('consumer bundles', () => {
   });
 });
 
+describe('humid-air bundle', () => {
+  // measured at the time of writing: 33.9 kB, of which the units layer alone is 12.2 kB (over its own
+  // 8 kB ceiling above) and IF97 regions 1 and 2 (condensate and steam enthalpies of the processes)
+  // about 7 kB; humidAir.state alone bundles to 20.8 kB. This ceiling is the goal, not yet met.
+  it('heatstate/humid-air: at most 20 kB gzipped, without decimal.js, zod, substance data, steam tables or IF97 regions 3 and 5', async () => {
+    const js = await bundle(`import { humidAir, humidAirBatch } from 'heatstate/humid-air';
+      const s = humidAir.state({ T: '30 °C', RH: 0.5 });
+      console.log(s, humidAir.coolingCoil({ inlet: s, flow: '1 kg/s', ADP: '10 °C', bypassFactor: 0.1 }), humidAirBatch);`);
+    expect(js).not.toMatch(/DecimalError|toSignificantDigits|ZodError/);
+    expect(js).not.toContain('stainless steel');
+    expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
+    // IF97 region 3 (Table 30, n1) and region 5 (Table 37, n1 of the ideal part) are not needed
+    expect(js).not.toMatch(/1\.0658070028513|-0\.13179983674201e2|-13\.179983674201/);
+    expect(gzipSync(js).length / 1024).toBeLessThan(20);
+  });
+});
+
 describe('water bundle', () => {
   it('heatstate/water: at most 66 kB gzipped, without decimal.js, substance data or the generated tables', async () => {
     const js = await bundle(`import { water } from 'heatstate/water'; console.log(water.state({ p: '1 MPa', T: '500 K' }), water.saturation({ T: '400 K' }));`);

@@ -1,34 +1,50 @@
 /**
  * Process facades on moist-air streams: mixing, sensible heating and cooling, cooling coils,
- * steam and evaporative humidifiers. Flows are dry-air mass flows; loads are powers, positive when
- * the air gains heat, negative when it loses it (a cooling coil's duty is −`heat`).
+ * steam and evaporative humidifiers. Flows are dry-air mass flows (or volume flows, converted at
+ * the stream's own state with its v per kg of dry air); loads are powers, positive when the air
+ * gains heat, negative when it loses it (a cooling coil's duty is −`heat`).
  *
  * @module
  */
+import { CallUnits } from '../core/call-units.js';
+import { throwForStatus } from '../core/fail.js';
+import { describeValue, rangeError, readAbsolutePressure, readInput, readTemperature, type Bounds } from '../core/read.js';
+import { resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
-import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
+import { Quantity, quantity, type QuantityLike } from '../units/quantity.js';
+import { saturationTemperature } from '../water/if97/region4.js';
 import {
   coolingCoilBypass,
   coolingCoilToState,
   evaporativeHumidifier as coreEvaporativeHumidifier,
   mixStreams,
-  PROCESS_REASON,
   ProcessLoads,
   sensibleByHeat,
   sensibleToTemperature,
   steamHumidifier as coreSteamHumidifier,
   TARGET,
 } from './core/processes.js';
-import { MODEL } from './core/saturation.js';
-import { HumidAirState, humidAirState as coreState, PAIR } from './core/state.js';
-import { humidAirError, readRelativeHumidity, toResult, type HumidAirResult } from './state.js';
+import { moistAirEnthalpy } from './core/relations.js';
+import { P_WATER_AT_ICE, waterSaturationPressure } from './core/saturation.js';
+import { HumidAirState, humidAirState as coreState, PAIR, T_MAX, T_MIN } from './core/state.js';
+import { readHumidityRatio, readRelativeHumidity, relativeHumidityError, type Checked, type HumidityRatioInput, type RelativeHumidityInput } from './inputs.js';
+import { SCOPE, throwForState, toResult, type HumidAirResult, type StatePair } from './state.js';
 
-/** A stream: its state (from `humidAir.state`) and its dry-air mass flow. */
+/** A dry-air mass flow, or a volume flow of the moist air (converted with the stream's v per kg dry air). */
+export type AirFlowInput = QuantityLike<'massFlow'> | QuantityLike<'volumeFlow'>;
+
+/** A stream: its state (from `humidAir.state`) and its flow. */
 export interface AirStream {
   readonly state: HumidAirResult;
-  /** Mass flow of dry air (not of moist air). */
-  readonly flow: QuantityLike<'massFlow'>;
+  /** Mass flow of dry air (not of moist air), or the stream's volume flow (`'2 m³/s'`, `'4000 cfm'`). */
+  readonly flow: AirFlowInput;
+}
+
+/** {@link AirStream} with a run-time `string` allowed for the flow. */
+export interface AirStreamLoose {
+  readonly state: HumidAirResult;
+  readonly flow: AirFlowInput | string;
 }
 
 /** Result of a process: the leaving state and the loads. */
@@ -50,124 +66,184 @@ export interface ProcessResult {
   readonly water: { readonly flow: Quantity<'massFlow'>; readonly h: Quantity<'specificEnergy'>; readonly T: Quantity<'temperature'> } | undefined;
 }
 
-function coreOf(state: HumidAirResult, parameter: string): HumidAirState {
-  if (typeof state !== 'object' || state === null || !(state.T instanceof Quantity)) {
-    throw new InvalidInputError('input.invalid', parameter, `${parameter} must be a state from humidAir.state`);
+const T_BOUNDS: Bounds = { min: T_MIN, max: T_MAX, scope: SCOPE };
+const LIQUID_WATER: Bounds = { min: 273.15, max: 373.15, scope: 'liquid water (condensate or spray; frosting coils and boiling water are not covered)' };
+
+/** The core state of a stream's state (recomputed from its T, W and p, bit for bit the same). */
+function coreOf(state: unknown, parameter: string): HumidAirState {
+  const s = state as HumidAirResult | null;
+  if (typeof s !== 'object' || s === null || !(s.T instanceof Quantity) || !(s.W instanceof Quantity) || !(s.p instanceof Quantity)) {
+    throw new InvalidInputError('input.invalid', parameter, `${parameter} must be a state from humidAir.state; got ${describeValue(state)}`);
   }
   const st = new HumidAirState();
-  const s = coreState(PAIR.T_W, state.T.si, state.W, state.p.si, state.model === 'ideal' ? MODEL.ideal : MODEL.enhanced, true, st);
-  if (s !== Status.ok && s !== Status.undefinedProperty) throw humidAirError(s, st.reason, parameter, st.model);
+  const code = coreState(PAIR.T_W, s.T.si, s.W.si, s.p.si, true, st);
+  if (code !== Status.ok && code !== Status.undefinedProperty) {
+    const sp: StatePair = { key: 'T,W', pair: PAIR.T_W, a: s.T.si, b: s.W.si, percent: false };
+    throwForState(code, st.reason, sp, s.p.si, new CallUnits(), parameter);
+  }
   return st;
 }
 
-function readFlow(flow: QuantityLike<'massFlow'>, parameter: string): number {
-  const m = readQuantity(flow, 'massFlow', parameter);
-  if (!(m > 0)) throw new OutOfRangeError({ quantity: parameter, value: m, min: 0, max: Infinity, unit: 'kg/s', scope: 'dry-air mass flow' }, `${parameter} = ${m} kg/s: a dry-air flow must be positive`);
-  return m;
+/** A dry-air mass flow in kg/s from a mass flow or a volume flow at `state` (ṁa = V̇/v). */
+function readFlow(flow: unknown, parameter: string, state: HumidAirState, units: CallUnits): number {
+  let dimension: 'massFlow' | 'volumeFlow' = 'massFlow';
+  if (flow instanceof Quantity && flow.dimension === 'volumeFlow') dimension = 'volumeFlow';
+  else if (typeof flow === 'string') {
+    try {
+      if (quantity(flow).dimension === 'volumeFlow') dimension = 'volumeFlow';
+    } catch {
+      // unreadable text: the reader below words the error
+    }
+  }
+  const bounds: Bounds = { min: 0, max: Infinity, minExclusive: true, scope: dimension === 'massFlow' ? 'a dry-air mass flow (must be positive)' : 'a volume flow (must be positive)' };
+  const x = readInput(flow as QuantityLike<'massFlow'>, dimension, parameter, bounds, units);
+  return dimension === 'massFlow' ? x : x / state.v;
 }
 
-const PROCESS_MESSAGES: Record<number, string> = {
-  [PROCESS_REASON.flow]: 'dry-air mass flows must be finite and at least 0, with a positive sum',
-  [PROCESS_REASON.pressureMismatch]: 'streams to be mixed must be at the same total pressure',
-  [PROCESS_REASON.condensation]: 'sensible cooling would pass the entering dew point (water would condense): use humidAir.coolingCoil',
-  [PROCESS_REASON.wouldHumidify]: 'a cooling coil cannot leave the air with more water or warmer than it entered (check ADP against the entering dew point, or the leaving state)',
-  [PROCESS_REASON.bypassFactor]: 'the bypass factor must be at least 0 and below 1',
-  [PROCESS_REASON.waterTemperature]: 'liquid water (condensate or spray) must be between 0 °C and 100 °C (frosting coils and boiling water are not covered)',
-  [PROCESS_REASON.steamState]: 'steam must be vapour (at or above its saturation temperature), at most 800 °C and 10 MPa (IAPWS-IF97 region 2)',
-  [PROCESS_REASON.target]: "the humidifier target lies below the entering humidity or beyond what the humidifier's line can reach before saturation",
-  [PROCESS_REASON.heat]: 'the heat flow must be finite',
-};
-
-function processError(status: number, reason: number, what: string, model: number): Error {
-  const message = PROCESS_MESSAGES[reason];
-  if (message === undefined) return humidAirError(status, reason, what, model);
-  if (status === Status.invalidInput) return new InvalidInputError('input.invalid', what, `${what}: ${message}`);
-  return new OutOfRangeError({ quantity: what, value: NaN, min: NaN, max: NaN, unit: '', scope: what }, `${what}: ${message}`);
-}
-
-function result(outlet: HumidAirState, loads: ProcessLoads, mda: number, from: HumidAirResult['pressureFrom'], water: boolean): ProcessResult {
+function loadsResult(outlet: HumidAirState, loads: ProcessLoads, mda: number, from: HumidAirResult['pressureFrom'], water: boolean): ProcessResult {
   return {
     leaving: toResult(outlet, from),
-    flow: Quantity.fromSI(mda, 'massFlow'),
-    sensible: Quantity.fromSI(loads.sensible, 'power'),
-    latent: Quantity.fromSI(loads.latent, 'power'),
-    total: Quantity.fromSI(loads.total, 'power'),
-    heat: Quantity.fromSI(loads.heat, 'power'),
+    flow: resultQuantity(mda, 'massFlow', 'flow'),
+    sensible: resultQuantity(loads.sensible, 'power', 'sensible'),
+    latent: resultQuantity(loads.latent, 'power', 'latent'),
+    total: resultQuantity(loads.total, 'power', 'total'),
+    heat: resultQuantity(loads.heat, 'power', 'heat'),
     sensibleHeatRatio: Number.isFinite(loads.sensibleHeatRatio) ? loads.sensibleHeatRatio : undefined,
     water: water
-      ? { flow: Quantity.fromSI(loads.waterFlow, 'massFlow'), h: Quantity.fromSI(loads.waterEnthalpy, 'specificEnergy'), T: Quantity.fromSI(loads.waterTemperature, 'temperature') }
+      ? { flow: resultQuantity(loads.waterFlow, 'massFlow', 'water.flow'), h: resultQuantity(loads.waterEnthalpy, 'specificEnergy', 'water.h'), T: resultQuantity(loads.waterTemperature, 'temperature', 'water.T') }
       : undefined,
   };
 }
 
-function check(status: number, reason: number, what: string, model: number): void {
-  if (status !== Status.ok && status !== Status.undefinedProperty) throw processError(status, reason, what, model);
+/** Throws for a failed process status: `range` words the out-of-range case (numeric bounds). */
+function fail(status: number, what: string, inputs: string, range: () => OutOfRangeError): never {
+  return throwForStatus(status, { what, inputs, range, parameter: 'input' });
+}
+
+function ok(status: number): boolean {
+  return status === Status.ok || status === Status.undefinedProperty;
+}
+
+/** The inlet as text for messages. */
+function describeInlet(st: HumidAirState, units: CallUnits): string {
+  return `inlet T = ${units.describe(st.T, 'temperature', 'K')}, W = ${units.describe(st.W, 'humidityRatio', 'kg/kg')}`;
 }
 
 /**
  * Adiabatic mixing of two or more streams at one total pressure: the flow-weighted W and h.
  * @throws {@link OutOfRangeError} the mixture would be supersaturated (fog)
+ * @throws {@link InvalidInputError} fewer than two streams, streams at different pressures
  * @example
  * ```ts
  * const outdoor = humidAir.state({ T: '32 °C', RH: 0.5 });
  * const ret = humidAir.state({ T: '24 °C', RH: 0.5 });
  * const mixed = humidAir.mix([{ state: outdoor, flow: '1 kg/s' }, { state: ret, flow: '3 kg/s' }]);
- * mixed.leaving.T.in('°C');   //=> 26.0 (about the flow-weighted dry-bulb)
+ * mixed.leaving.T.in('°C');   //=> 26.0... (about the flow-weighted dry-bulb)
  * ```
  */
-export function mix(streams: readonly AirStream[]): ProcessResult {
-  if (!Array.isArray(streams) || streams.length < 2) throw new InvalidInputError('input.invalid', 'streams', 'humidAir.mix needs an array of at least two { state, flow } streams');
-  const n = streams.length;
+export function mix<const S extends readonly AirStreamLoose[]>(streams: S & { readonly [I in keyof S]: Checked<S[I], 'flow', 'state'> }): ProcessResult {
+  const list = streams as readonly AirStreamLoose[];
+  if (!Array.isArray(list) || list.length < 2) throw new InvalidInputError('input.invalid', 'streams', `humidAir.mix needs an array of at least two { state, flow } streams; got ${describeValue(list)}`);
+  const n = list.length;
   const W = new Float64Array(n);
   const h = new Float64Array(n);
   const m = new Float64Array(n);
-  const first = coreOf(streams[0]!.state, 'streams[0].state');
+  const units = new CallUnits();
+  let p = 0;
   for (let i = 0; i < n; i++) {
-    const st = coreOf(streams[i]!.state, `streams[${i}].state`);
-    if (Math.abs(st.p - first.p) > 1e-9 * first.p) throw processError(Status.invalidInput, PROCESS_REASON.pressureMismatch, 'streams', first.model);
-    if (st.model !== first.model) throw new InvalidInputError('input.invalid', 'streams', 'streams to be mixed must use the same model');
+    const stream = list[i] as AirStreamLoose | undefined;
+    if (typeof stream !== 'object' || stream === null) throw new InvalidInputError('input.invalid', `streams[${i}]`, `streams[${i}] must be { state, flow }; got ${describeValue(stream)}`);
+    const st = coreOf(stream.state, `streams[${i}].state`);
+    if (i === 0) p = st.p;
+    else if (Math.abs(st.p - p) > 1e-9 * p) {
+      throw new InvalidInputError('input.invalid', `streams[${i}].state`, `streams to be mixed must be at the same total pressure: streams[0] is at ${units.describe(p, 'pressure', 'Pa')}, streams[${i}] at ${units.describe(st.p, 'pressure', 'Pa')}`);
+    }
     W[i] = st.W;
     h[i] = st.h;
-    m[i] = readFlow(streams[i]!.flow, `streams[${i}].flow`);
+    m[i] = readFlow(stream.flow, `streams[${i}].flow`, st, units);
   }
   const out = new HumidAirState();
-  const s = mixStreams(first.p, W, h, m, n, first.model, true, out);
-  check(s, out.reason, 'the mixed stream', first.model);
+  const s = mixStreams(p, W, h, m, n, true, out);
   let total = 0;
-  for (let i = 0; i < n; i++) total += m[i]!;
+  let mW = 0;
+  let mh = 0;
+  for (let i = 0; i < n; i++) {
+    total += m[i]!;
+    mW += m[i]! * W[i]!;
+    mh += m[i]! * h[i]!;
+  }
+  if (!ok(s)) {
+    fail(s, 'the adiabatic mixture', `${n} streams at p = ${units.describe(p, 'pressure', 'Pa')}`, () => {
+      // the most water saturated air with the mixture's enthalpy holds
+      const sat = new HumidAirState();
+      const c = coreState(PAIR.RH_h, 1, mh / total, p, false, sat);
+      const max = ok(c) ? sat.W : 0;
+      return rangeError('W (mixed)', mW / total, 'humidityRatio', { min: 0, max, scope: `saturated air with the mixture's enthalpy h = ${units.describe(mh / total, 'specificEnergy', 'J/kg')}`, hint: '; the mixture would be fog: mix warmer or drier streams, or heat one first' }, units);
+    });
+  }
   const loads = new ProcessLoads();
   loads.sensibleHeatRatio = NaN;
-  return result(out, loads, total, streams[0]!.state.pressureFrom, false);
+  return loadsResult(out, loads, total, list[0]!.state.pressureFrom, false);
 }
 
 /** Arguments of {@link heat}: a leaving temperature or a heat flow. */
 export type SensibleInput =
-  | { readonly inlet: HumidAirResult; readonly flow: QuantityLike<'massFlow'>; readonly T2: QuantityLike<'temperature'> }
-  | { readonly inlet: HumidAirResult; readonly flow: QuantityLike<'massFlow'>; readonly Q: QuantityLike<'power'> };
+  | { readonly inlet: HumidAirResult; readonly flow: AirFlowInput; readonly T2: QuantityLike<'temperature'> }
+  | { readonly inlet: HumidAirResult; readonly flow: AirFlowInput; readonly Q: QuantityLike<'power'> };
+
+/** {@link SensibleInput} with run-time strings allowed. */
+export interface SensibleInputLoose {
+  readonly inlet: HumidAirResult;
+  readonly flow: AirFlowInput | string;
+  readonly T2?: QuantityLike<'temperature'> | string;
+  readonly Q?: QuantityLike<'power'> | string;
+}
 
 /**
  * Sensible heating or cooling at constant humidity ratio, to a leaving dry-bulb `T2` or by a heat
  * flow `Q` (negative for cooling).
- * @throws {@link OutOfRangeError} cooling below the entering dew point (use {@link coolingCoil})
+ * @throws {@link OutOfRangeError} cooling below the entering dew point (use {@link coolingCoil}),
+ *   with the lowest T2 (or Q) allowed
+ * @example
+ * ```ts
+ * humidAir.heat({ inlet: humidAir.state({ T: '24 °C', RH: 0.5 }), flow: '2 kg/s', T2: '35 °C' }).heat.in('kW');   //=> 22.51...
+ * ```
  */
-export function heat(input: SensibleInput): ProcessResult {
-  const inlet = coreOf(input.inlet, 'inlet');
-  const mda = readFlow(input.flow, 'flow');
+export function heat<const I extends SensibleInputLoose>(input: I & Checked<I, 'flow' | 'T2' | 'Q', 'inlet'>): ProcessResult {
+  const a = input as SensibleInputLoose;
+  if (typeof a !== 'object' || a === null) throw new InvalidInputError('input.invalid', 'input', `humidAir.heat needs { inlet, flow, T2 } or { inlet, flow, Q }; got ${describeValue(a)}`);
+  const units = new CallUnits();
+  const inlet = coreOf(a.inlet, 'inlet');
+  const mda = readFlow(a.flow, 'flow', inlet, units);
   const out = new HumidAirState();
   const loads = new ProcessLoads();
-  let s: number;
-  if ('T2' in input && input.T2 !== undefined) s = sensibleToTemperature(inlet, mda, readQuantity(input.T2, 'temperature', 'T2'), true, out, loads);
-  else if ('Q' in input && input.Q !== undefined) s = sensibleByHeat(inlet, mda, readQuantity(input.Q, 'power', 'Q'), true, out, loads);
-  else throw new InvalidInputError('input.invalid', 'input', 'humidAir.heat needs T2 (leaving dry-bulb) or Q (heat flow)');
-  check(s, loads.reason, 'sensible heating or cooling', inlet.model);
-  return result(out, loads, mda, input.inlet.pressureFrom, false);
+  const dew = inlet.Tdp === inlet.Tdp ? inlet.Tdp : T_MIN;
+  if ((a.T2 === undefined) === (a.Q === undefined)) throw new InvalidInputError('input.invalid', 'input', 'humidAir.heat needs exactly one of T2 (leaving dry-bulb) or Q (heat flow)');
+  if (a.T2 !== undefined) {
+    const T2 = readTemperature(a.T2 as QuantityLike<'temperature'>, 'T2', T_BOUNDS, units);
+    const s = sensibleToTemperature(inlet, mda, T2, true, out, loads);
+    if (!ok(s)) {
+      fail(s, 'sensible heating or cooling', `${describeInlet(inlet, units)}, T2 = ${units.describe(T2, 'temperature', 'K')}`, () =>
+        rangeError('T2', T2, 'temperature', { min: dew, max: T_MAX, scope: `sensible cooling of air with dew point ${units.describe(dew, 'temperature', 'K')}`, hint: '; below the dew point water condenses: use humidAir.coolingCoil' }, units),
+      );
+    }
+  } else {
+    const Q = readInput(a.Q as QuantityLike<'power'>, 'power', 'Q', undefined, units);
+    const s = sensibleByHeat(inlet, mda, Q, true, out, loads);
+    if (!ok(s)) {
+      fail(s, 'sensible heating or cooling', `${describeInlet(inlet, units)}, Q = ${units.describe(Q, 'power', 'W')}`, () =>
+        rangeError('Q', Q, 'power', { min: mda * (moistAirEnthalpy(dew, inlet.W) - inlet.h), max: mda * (moistAirEnthalpy(T_MAX, inlet.W) - inlet.h), scope: `sensible heating or cooling of this stream (from its dew point ${units.describe(dew, 'temperature', 'K')} to 200 °C)`, hint: '; below the dew point water condenses: use humidAir.coolingCoil' }, units),
+      );
+    }
+  }
+  return loadsResult(out, loads, mda, a.inlet.pressureFrom, false);
 }
 
 /** Arguments of {@link coolingCoil}. */
 export type CoolingCoilInput =
   | {
       readonly inlet: HumidAirResult;
-      readonly flow: QuantityLike<'massFlow'>;
+      readonly flow: AirFlowInput;
       /** Apparatus dew point: the coil's effective surface temperature. */
       readonly ADP: QuantityLike<'temperature'>;
       /** Bypass factor, 0 ≤ BF < 1 (1 − contact factor). */
@@ -177,110 +253,213 @@ export type CoolingCoilInput =
     }
   | {
       readonly inlet: HumidAirResult;
-      readonly flow: QuantityLike<'massFlow'>;
+      readonly flow: AirFlowInput;
       readonly T2: QuantityLike<'temperature'>;
-      readonly RH2: number | `${number} %` | `${number}%`;
+      readonly RH2: RelativeHumidityInput;
       /** Condensate temperature; default the leaving dry-bulb. */
       readonly Tcondensate?: QuantityLike<'temperature'>;
     };
 
+/** {@link CoolingCoilInput} with run-time strings allowed. */
+export interface CoolingCoilInputLoose {
+  readonly inlet: HumidAirResult;
+  readonly flow: AirFlowInput | string;
+  readonly ADP?: QuantityLike<'temperature'> | string;
+  readonly bypassFactor?: number;
+  readonly T2?: QuantityLike<'temperature'> | string;
+  readonly RH2?: RelativeHumidityInput | string;
+  readonly Tcondensate?: QuantityLike<'temperature'> | string;
+}
+
 /**
  * Cooling with dehumidification: leaving state from the apparatus dew point and bypass factor, or
  * from a leaving dry-bulb and RH. The condensate (−`water.flow`) leaves with its IAPWS-IF97 enthalpy.
+ * @throws {@link OutOfRangeError} an ADP above the entering dew point, a leaving state with more
+ *   water or a higher dry-bulb than the entering air, BF outside [0, 1), condensate outside 0–100 °C
  * @example
  * ```ts
  * const coil = humidAir.coolingCoil({ inlet: mixed.leaving, flow: '4 kg/s', ADP: '10 °C', bypassFactor: 0.15 });
- * coil.heat.in('kW');   //=> -81.98 (negative: heat removed; the coil duty is 82.0 kW)
+ * coil.heat.in('kW');   //=> -81.83... (negative: heat removed; the coil duty is about 82 kW)
  * ```
  */
-export function coolingCoil(input: CoolingCoilInput): ProcessResult {
-  const inlet = coreOf(input.inlet, 'inlet');
-  const mda = readFlow(input.flow, 'flow');
+export function coolingCoil<const I extends CoolingCoilInputLoose>(input: I & Checked<I, 'flow' | 'ADP' | 'T2' | 'RH2' | 'Tcondensate', 'inlet' | 'bypassFactor'>): ProcessResult {
+  const a = input as CoolingCoilInputLoose;
+  if (typeof a !== 'object' || a === null) throw new InvalidInputError('input.invalid', 'input', `humidAir.coolingCoil needs { inlet, flow, ADP, bypassFactor } or { inlet, flow, T2, RH2 }; got ${describeValue(a)}`);
+  const units = new CallUnits();
+  const inlet = coreOf(a.inlet, 'inlet');
+  const mda = readFlow(a.flow, 'flow', inlet, units);
   const out = new HumidAirState();
   const loads = new ProcessLoads();
+  const dew = inlet.Tdp === inlet.Tdp ? inlet.Tdp : T_MIN;
+  const byADP = a.ADP !== undefined || a.bypassFactor !== undefined;
+  const byState = a.T2 !== undefined || a.RH2 !== undefined;
+  if (byADP === byState) throw new InvalidInputError('input.invalid', 'input', 'humidAir.coolingCoil needs either { ADP, bypassFactor } or { T2, RH2 } (and optionally Tcondensate)');
   let s: number;
-  if ('ADP' in input && input.ADP !== undefined) {
-    const ADP = readQuantity(input.ADP, 'temperature', 'ADP');
-    const BF = input.bypassFactor;
-    if (typeof BF !== 'number' || !Number.isFinite(BF)) throw new InvalidInputError('input.invalid', 'bypassFactor', 'bypassFactor must be a number, 0 ≤ BF < 1');
-    const Tc = input.Tcondensate === undefined ? ADP : readQuantity(input.Tcondensate, 'temperature', 'Tcondensate');
+  if (byADP) {
+    const ADP = readTemperature(a.ADP as QuantityLike<'temperature'>, 'ADP', { min: T_MIN, max: dew, scope: `a cooling coil on air with dew point ${units.describe(dew, 'temperature', 'K')} (an ADP above it would add water)` }, units);
+    const BF = readBypassFactor(a.bypassFactor);
+    const Tc = a.Tcondensate === undefined ? ADP : readTemperature(a.Tcondensate as QuantityLike<'temperature'>, 'Tcondensate', LIQUID_WATER, units);
+    if (!(Tc >= LIQUID_WATER.min)) throw rangeError('ADP', ADP, 'temperature', { ...LIQUID_WATER, scope: `${LIQUID_WATER.scope}, for the condensate at the ADP (give Tcondensate)` }, units);
     s = coolingCoilBypass(inlet, mda, ADP, BF, Tc, true, out, loads);
-  } else if ('T2' in input && input.T2 !== undefined) {
-    const T2 = readQuantity(input.T2, 'temperature', 'T2');
-    const RH2 = readRelativeHumidity(input.RH2, 'RH2');
-    const Tc = input.Tcondensate === undefined ? T2 : readQuantity(input.Tcondensate, 'temperature', 'Tcondensate');
-    s = coolingCoilToState(inlet, mda, T2, RH2, Tc, true, out, loads);
+    if (!ok(s)) fail(s, 'the cooling coil', `${describeInlet(inlet, units)}, ADP = ${units.describe(ADP, 'temperature', 'K')}, bypassFactor = ${BF}`, () => rangeError('ADP', ADP, 'temperature', { min: T_MIN, max: dew, scope: 'a cooling coil on this air' }, units));
   } else {
-    throw new InvalidInputError('input.invalid', 'input', 'humidAir.coolingCoil needs { ADP, bypassFactor } or { T2, RH2 }');
+    const T2 = readTemperature(a.T2 as QuantityLike<'temperature'>, 'T2', { min: T_MIN, max: inlet.T, scope: `a cooling coil on air at ${units.describe(inlet.T, 'temperature', 'K')} (the leaving air is not warmer)` }, units);
+    if (a.RH2 === undefined) throw new InvalidInputError('input.invalid', 'RH2', 'humidAir.coolingCoil with T2 needs RH2 (the leaving relative humidity)');
+    const RH2 = readRelativeHumidity(a.RH2, 'RH2');
+    const maxRH = Math.min(1, inlet.pw / waterSaturationPressure(T2));
+    if (RH2 > maxRH) throw relativeHumidityError('RH2', RH2, 0, maxRH, `air leaving a cooling coil at ${units.describe(T2, 'temperature', 'K')} with no more water than the entering ${units.describe(inlet.W, 'humidityRatio', 'kg/kg')}`, typeof a.RH2 === 'string');
+    const Tc = a.Tcondensate === undefined ? T2 : readTemperature(a.Tcondensate as QuantityLike<'temperature'>, 'Tcondensate', LIQUID_WATER, units);
+    if (!(Tc >= LIQUID_WATER.min)) throw rangeError('T2', T2, 'temperature', { ...LIQUID_WATER, scope: `${LIQUID_WATER.scope}, for the condensate at T2 (give Tcondensate)` }, units);
+    s = coolingCoilToState(inlet, mda, T2, RH2, Tc, true, out, loads);
+    if (!ok(s)) fail(s, 'the cooling coil', `${describeInlet(inlet, units)}, T2 = ${units.describe(T2, 'temperature', 'K')}, RH2 = ${RH2}`, () => relativeHumidityError('RH2', RH2, 0, maxRH, 'air leaving the coil', false));
   }
-  check(s, loads.reason, 'cooling coil', inlet.model);
-  return result(out, loads, mda, input.inlet.pressureFrom, true);
+  return loadsResult(out, loads, mda, a.inlet.pressureFrom, true);
+}
+
+function readBypassFactor(input: unknown): number {
+  if (typeof input !== 'number' || !Number.isFinite(input)) {
+    throw new InvalidInputError(typeof input === 'number' ? 'input.not-finite' : 'input.invalid', 'bypassFactor', `bypassFactor must be a finite number, 0 ≤ BF < 1 (1 − the coil's contact factor); got ${describeValue(input)}`);
+  }
+  if (!(input >= 0 && input < 1)) {
+    throw new OutOfRangeError({ quantity: 'bypassFactor', value: input, min: 0, max: 1, unit: '1', scope: 'a bypass factor (0 ≤ BF < 1)' }, `bypassFactor = ${input} is outside 0 ≤ BF < 1 (BF = 1 would be no coil at all)`);
+  }
+  return input;
 }
 
 /** Humidifier targets: a leaving humidity ratio `W2` or relative humidity `RH2` (evaporative also `T2`). */
 interface TargetInput {
-  readonly W2?: number;
-  readonly RH2?: number | `${number} %` | `${number}%`;
-  readonly T2?: QuantityLike<'temperature'>;
+  readonly W2?: HumidityRatioInput | string;
+  readonly RH2?: RelativeHumidityInput | string;
+  readonly T2?: QuantityLike<'temperature'> | string;
 }
 
-function readTarget(input: TargetInput, allowT: boolean): [number, number] {
+interface Target {
+  readonly code: number;
+  readonly value: number;
+  readonly name: 'W2' | 'RH2' | 'T2';
+  readonly percent: boolean;
+}
+
+function readTarget(input: TargetInput, allowT: boolean, units: CallUnits): Target {
   const given = [input.W2 !== undefined, input.RH2 !== undefined, allowT && input.T2 !== undefined].filter(Boolean).length;
-  if (given !== 1) throw new InvalidInputError('input.invalid', 'target', `give exactly one target: W2 or RH2${allowT ? ' or T2' : ''}`);
-  if (input.W2 !== undefined) {
-    if (typeof input.W2 !== 'number' || !Number.isFinite(input.W2) || input.W2 < 0) throw new InvalidInputError('input.invalid', 'W2', 'W2 must be a humidity ratio in kg/kg, at least 0');
-    return [TARGET.W, input.W2];
-  }
-  if (input.RH2 !== undefined) return [TARGET.RH, readRelativeHumidity(input.RH2, 'RH2')];
-  return [TARGET.T, readQuantity(input.T2!, 'temperature', 'T2')];
+  if (given !== 1 || (!allowT && input.T2 !== undefined)) throw new InvalidInputError('input.invalid', 'target', `give exactly one target: W2 or RH2${allowT ? ' or T2' : ''}`);
+  if (input.W2 !== undefined) return { code: TARGET.W, value: readHumidityRatio(input.W2, 'W2', units), name: 'W2', percent: false };
+  if (input.RH2 !== undefined) return { code: TARGET.RH, value: readRelativeHumidity(input.RH2, 'RH2'), name: 'RH2', percent: typeof input.RH2 === 'string' };
+  return { code: TARGET.T, value: readTemperature(input.T2 as QuantityLike<'temperature'>, 'T2', T_BOUNDS, units), name: 'T2', percent: false };
+}
+
+/** The range error for a humidifier target: from the entering air to saturation on the humidifier's line. */
+function targetError(target: Target, inlet: HumidAirState, saturated: HumidAirState | undefined, units: CallUnits, what: string): OutOfRangeError {
+  const scope = `the ${what} on this air (from the entering state to saturation along the humidifier's line)`;
+  if (target.name === 'RH2') return relativeHumidityError('RH2', target.value, inlet.RH, 1, scope, target.percent);
+  if (target.name === 'W2') return rangeError('W2', target.value, 'humidityRatio', { min: inlet.W, max: saturated?.W ?? inlet.W, scope }, units);
+  return rangeError('T2', target.value, 'temperature', { min: saturated?.T ?? inlet.T, max: inlet.T, scope }, units);
 }
 
 /** Arguments of {@link steamHumidifier}. */
-export interface SteamHumidifierInput extends TargetInput {
+export interface SteamHumidifierInput {
   readonly inlet: HumidAirResult;
-  readonly flow: QuantityLike<'massFlow'>;
+  readonly flow: AirFlowInput;
+  /** Leaving humidity ratio (give this or RH2). */
+  readonly W2?: HumidityRatioInput;
+  /** Leaving relative humidity (give this or W2). */
+  readonly RH2?: RelativeHumidityInput;
   /** The steam's state (vapour; IAPWS-IF97 region 2). */
   readonly steam: { readonly p: QuantityLike<'pressure'>; readonly T: QuantityLike<'temperature'> };
+}
+
+/** {@link SteamHumidifierInput} with run-time strings allowed. */
+export interface SteamHumidifierInputLoose extends TargetInput {
+  readonly inlet: HumidAirResult;
+  readonly flow: AirFlowInput | string;
+  readonly steam: { readonly p: QuantityLike<'pressure'> | string; readonly T: QuantityLike<'temperature'> | string };
 }
 
 /**
  * Steam humidification to a leaving W2 or RH2: adiabatic, h2 = h1 + (W2 − W1) h_steam with the
  * steam enthalpy from IAPWS-IF97 region 2 at its given state. The air warms slightly.
+ * @throws {@link OutOfRangeError} steam that is not vapour (below its saturation temperature) or
+ *   outside 10 MPa and 800 °C; a target below the entering humidity or beyond saturation
+ * @example
+ * ```ts
+ * const winter = humidAir.state({ T: '20 °C', RH: 0.2 });
+ * humidAir.steamHumidifier({ inlet: winter, flow: '2 kg/s', RH2: '45 %', steam: { p: '1 atm', T: '110 °C' } }).water?.flow.in('kg/h');   //=> 28.04...
+ * ```
  */
-export function steamHumidifier(input: SteamHumidifierInput): ProcessResult {
-  const inlet = coreOf(input.inlet, 'inlet');
-  const mda = readFlow(input.flow, 'flow');
-  const [target, value] = readTarget(input, false);
-  if (typeof input.steam !== 'object' || input.steam === null) throw new InvalidInputError('input.invalid', 'steam', 'steam must be { p, T }');
-  const ps = readQuantity(input.steam.p, 'pressure', 'steam.p');
-  const Ts = readQuantity(input.steam.T, 'temperature', 'steam.T');
+export function steamHumidifier<const I extends SteamHumidifierInputLoose>(input: I & Checked<I, 'flow' | 'W2' | 'RH2' | 'steam', 'inlet'>): ProcessResult {
+  const a = input as SteamHumidifierInputLoose;
+  if (typeof a !== 'object' || a === null) throw new InvalidInputError('input.invalid', 'input', `humidAir.steamHumidifier needs { inlet, flow, steam, W2 or RH2 }; got ${describeValue(a)}`);
+  const units = new CallUnits();
+  const inlet = coreOf(a.inlet, 'inlet');
+  const mda = readFlow(a.flow, 'flow', inlet, units);
+  const target = readTarget(a, false, units);
+  if (typeof a.steam !== 'object' || a.steam === null) throw new InvalidInputError('input.invalid', 'steam', `steam must be { p, T } (its pressure and temperature); got ${describeValue(a.steam)}`);
+  const ps = readAbsolutePressure(a.steam.p as QuantityLike<'pressure'>, 'steam.p', { max: 10e6, scope: 'steam for a humidifier (IAPWS-IF97 region 2, at most 10 MPa)' }, units);
+  const Tsat = ps >= P_WATER_AT_ICE ? saturationTemperature(ps) : 273.15;
+  const Ts = readTemperature(a.steam.T as QuantityLike<'temperature'>, 'steam.T', { min: Tsat, max: 1073.15, scope: `steam at ${units.describe(ps, 'pressure', 'Pa')} (vapour: from its saturation temperature to 800 °C)` }, units);
   const out = new HumidAirState();
   const loads = new ProcessLoads();
-  const s = coreSteamHumidifier(inlet, mda, target, value, ps, Ts, true, out, loads);
-  check(s, loads.reason, 'steam humidifier', inlet.model);
-  return result(out, loads, mda, input.inlet.pressureFrom, true);
+  const s = coreSteamHumidifier(inlet, mda, target.code, target.value, ps, Ts, true, out, loads);
+  if (!ok(s)) {
+    fail(s, 'the steam humidifier', `${describeInlet(inlet, units)}, ${target.name} = ${target.value}`, () => {
+      const sat = new HumidAirState();
+      const c = coreSteamHumidifier(inlet, mda, TARGET.RH, 1, ps, Ts, false, sat, new ProcessLoads());
+      return targetError(target, inlet, ok(c) ? sat : undefined, units, 'steam humidifier');
+    });
+  }
+  return loadsResult(out, loads, mda, a.inlet.pressureFrom, true);
 }
 
 /** Arguments of {@link evaporativeHumidifier}. */
-export interface EvaporativeHumidifierInput extends TargetInput {
+export interface EvaporativeHumidifierInput {
   readonly inlet: HumidAirResult;
-  readonly flow: QuantityLike<'massFlow'>;
+  readonly flow: AirFlowInput;
+  /** Leaving humidity ratio (give one of W2, RH2, T2). */
+  readonly W2?: HumidityRatioInput;
+  /** Leaving relative humidity. */
+  readonly RH2?: RelativeHumidityInput;
+  /** Leaving dry-bulb. */
+  readonly T2?: QuantityLike<'temperature'>;
   /** Temperature of the water evaporated; default the entering wet-bulb (recirculated spray), at least 0 °C. */
   readonly Twater?: QuantityLike<'temperature'>;
+}
+
+/** {@link EvaporativeHumidifierInput} with run-time strings allowed. */
+export interface EvaporativeHumidifierInputLoose extends TargetInput {
+  readonly inlet: HumidAirResult;
+  readonly flow: AirFlowInput | string;
+  readonly Twater?: QuantityLike<'temperature'> | string;
 }
 
 /**
  * Adiabatic (evaporative) humidification to a leaving W2, RH2 or dry-bulb T2: the air cools along
  * h2 = h1 + (W2 − W1) hw, close to its wet-bulb line.
+ * @throws {@link OutOfRangeError} a target below the entering humidity or beyond saturation; water
+ *   outside 0–100 °C (an entering wet-bulb below 0 °C needs `Twater`)
+ * @example
+ * ```ts
+ * const hot = humidAir.state({ T: '35 °C', RH: 0.2 });
+ * humidAir.evaporativeHumidifier({ inlet: hot, flow: '1 kg/s', T2: '25 °C' }).leaving.RH;   //=> 0.561...
+ * ```
  */
-export function evaporativeHumidifier(input: EvaporativeHumidifierInput): ProcessResult {
-  const inlet = coreOf(input.inlet, 'inlet');
-  const mda = readFlow(input.flow, 'flow');
-  const [target, value] = readTarget(input, true);
-  const Tw = input.Twater === undefined ? inlet.Twb : readQuantity(input.Twater, 'temperature', 'Twater');
+export function evaporativeHumidifier<const I extends EvaporativeHumidifierInputLoose>(input: I & Checked<I, 'flow' | 'W2' | 'RH2' | 'T2' | 'Twater', 'inlet'>): ProcessResult {
+  const a = input as EvaporativeHumidifierInputLoose;
+  if (typeof a !== 'object' || a === null) throw new InvalidInputError('input.invalid', 'input', `humidAir.evaporativeHumidifier needs { inlet, flow, W2, RH2 or T2 }; got ${describeValue(a)}`);
+  const units = new CallUnits();
+  const inlet = coreOf(a.inlet, 'inlet');
+  const mda = readFlow(a.flow, 'flow', inlet, units);
+  const target = readTarget(a, true, units);
+  const Tw = a.Twater === undefined ? inlet.Twb : readTemperature(a.Twater as QuantityLike<'temperature'>, 'Twater', LIQUID_WATER, units);
+  if (!(Tw >= LIQUID_WATER.min && Tw <= LIQUID_WATER.max)) throw rangeError('Twb', Tw, 'temperature', { ...LIQUID_WATER, scope: `${LIQUID_WATER.scope}, for spray water at the entering wet-bulb (give Twater)` }, units);
   const out = new HumidAirState();
   const loads = new ProcessLoads();
-  const s = coreEvaporativeHumidifier(inlet, mda, target, value, Tw, true, out, loads);
-  check(s, loads.reason, 'evaporative humidifier', inlet.model);
-  return result(out, loads, mda, input.inlet.pressureFrom, true);
+  const s = coreEvaporativeHumidifier(inlet, mda, target.code, target.value, Tw, true, out, loads);
+  if (!ok(s)) {
+    fail(s, 'the evaporative humidifier', `${describeInlet(inlet, units)}, ${target.name} = ${target.value}`, () => {
+      const sat = new HumidAirState();
+      const c = coreEvaporativeHumidifier(inlet, mda, TARGET.RH, 1, Tw, false, sat, new ProcessLoads());
+      return targetError(target, inlet, ok(c) ? sat : undefined, units, 'evaporative humidifier');
+    });
+  }
+  return loadsResult(out, loads, mda, a.inlet.pressureFrom, true);
 }

@@ -8,7 +8,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import data from '../../data/humid-air/sublimation-iapws-r14.json';
-import { sublimationPressure, waterSaturationPressure } from '../../src/humid-air/core/saturation.js';
+import { saturationTemperatureAt, sublimationPressure, waterSaturationPressure } from '../../src/humid-air/core/saturation.js';
 import { expectClose } from '../helpers/tolerance.js';
 
 describe('IAPWS R14-08(2011) sublimation pressure', () => {
@@ -21,6 +21,9 @@ describe('IAPWS R14-08(2011) sublimation pressure', () => {
   it('the data file carries its source and basis', () => {
     expect(data.basis).toBe('from memory');
     expect(data.source.title).toMatch(/R14-08\(2011\)/);
+  });
+  it('its inverse (the frost point, Newton on Eq. 6) returns T to 1e-12 over 150 K to 273.15 K', () => {
+    for (let T = 150; T < 273.15; T += 0.37) expectClose(saturationTemperatureAt(sublimationPressure(T), 0, 1000), T, { rel: 1e-12 });
   });
   it('is used below 0 °C, increasing monotonically over the humid-air range (173.15 K to 273.15 K)', () => {
     let last = 0;
@@ -39,4 +42,8 @@ describe('IAPWS R7-97(2012) Table 35 through waterSaturationPressure (over liqui
     [500, 0.263889776e1],
     [600, 0.123443146e2],
   ])('p_s(%d K) = %d MPa', (T, p) => expectClose(waterSaturationPressure(T) / 1e6, p, { rel: 5.0001e-9 }));
+  it.each([
+    [0.1e6, 0.372755919e3],
+    [1e6, 0.453035632e3],
+  ])('the dew point of p = %d Pa is T_s = %d K (Table 36, through the humid-air inverse)', (p, T) => expectClose(saturationTemperatureAt(p, 0, 1000), T, { rel: 5.0001e-9 }));
 });

@@ -1,25 +1,16 @@
 /**
  * `heatstate/humid-air/core`: the plain-number SI core of the humid-air model (K, Pa, kg/kg,
  * J/kg dry air), on the library's model contract: caller-owned output objects and a status code
- * per call, no throwing. The documented facade is `heatstate/humid-air`.
+ * per call, no throwing. The model is the ideal-mixture relations of the ASHRAE Handbook—
+ * Fundamentals ch. 1 with IAPWS-IF97 (liquid) and IAPWS R14-08 (ice) saturation pressures,
+ * −100 °C to 200 °C, 0 < p ≤ 1 MPa. The documented facade is `heatstate/humid-air`.
  *
  * @packageDocumentation
  */
 export { Status, statusName } from '../../core/status.js';
 export type { StatusCode } from '../../core/status.js';
 export { HumidAirState, humidAirState as humidAirStateSI, PAIR, REASON, T_MIN, T_MAX, P_MAX, saturationHumidityRatioAt } from './state.js';
-export {
-  MODEL,
-  waterSaturationPressure,
-  sublimationPressure,
-  enhancementFactor,
-  enhancementInRange,
-  saturationTemperatureAt,
-  ENHANCED_T_MIN,
-  ENHANCED_T_MAX,
-  ENHANCED_P_MIN,
-  ENHANCED_P_MAX,
-} from './saturation.js';
+export { waterSaturationPressure, sublimationPressure, saturationTemperatureAt, T_ICE } from './saturation.js';
 export {
   humidityRatioFromVaporPressure,
   vaporPressureFromHumidityRatio,
@@ -28,6 +19,8 @@ export {
   temperatureFromEnthalpy,
   humidityRatioFromWetBulb,
   saturatorWaterEnthalpy,
+  saturationHumidityRatio,
+  saturatorConstant,
 } from './relations.js';
 export {
   ProcessLoads,

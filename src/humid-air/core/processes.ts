@@ -128,11 +128,11 @@ function fatal(s: StatusCode): boolean {
  * @example
  * ```ts
  * const out = new HumidAirState();
- * mixStreams(101325, Float64Array.of(0.0186, 0.0093), Float64Array.of(80.9e3, 47.7e3), Float64Array.of(1, 3), 2, MODEL.enhanced, true, out);   //=> 0
+ * mixStreams(101325, Float64Array.of(0.0186, 0.0093), Float64Array.of(80.9e3, 47.7e3), Float64Array.of(1, 3), 2, true, out);   //=> 0
  * out.W;   //=> 0.011625
  * ```
  */
-export function mixStreams(p: number, W: Float64Array, h: Float64Array, mda: Float64Array, count: number, model: number, wetBulb: boolean, out: HumidAirState): StatusCode {
+export function mixStreams(p: number, W: Float64Array, h: Float64Array, mda: Float64Array, count: number, wetBulb: boolean, out: HumidAirState): StatusCode {
   let m = 0;
   let mW = 0;
   let mh = 0;
@@ -154,7 +154,7 @@ export function mixStreams(p: number, W: Float64Array, h: Float64Array, mda: Flo
     out.reason = PROCESS_REASON.flow;
     return Status.invalidInput;
   }
-  return humidAirState(PAIR.W_h, mW / m, mh / m, p, model, wetBulb, out);
+  return humidAirState(PAIR.W_h, mW / m, mh / m, p, wetBulb, out);
 }
 
 /**
@@ -169,7 +169,7 @@ export function sensibleToTemperature(inlet: HumidAirState, mda: number, T2: num
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
   if (!Number.isFinite(T2)) return fail(loads, Status.invalidInput, REASON.notFinite);
   if (inlet.Tdp === inlet.Tdp && T2 < inlet.Tdp) return fail(loads, Status.outOfRange, PROCESS_REASON.condensation);
-  const s = humidAirState(PAIR.T_W, T2, inlet.W, inlet.p, inlet.model, wetBulb, out);
+  const s = humidAirState(PAIR.T_W, T2, inlet.W, inlet.p, wetBulb, out);
   if (fatal(s)) return fail(loads, s, out.reason);
   loads.waterEnthalpy = 0;
   loads.waterTemperature = 0;
@@ -184,7 +184,7 @@ export function sensibleByHeat(inlet: HumidAirState, mda: number, Q: number, wet
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
   if (!Number.isFinite(Q)) return fail(loads, Status.invalidInput, PROCESS_REASON.heat);
   const h2 = inlet.h + Q / mda;
-  const s = humidAirState(PAIR.W_h, inlet.W, h2, inlet.p, inlet.model, wetBulb, out);
+  const s = humidAirState(PAIR.W_h, inlet.W, h2, inlet.p, wetBulb, out);
   if (s === Status.outOfRange && out.reason === REASON.supersaturated) return fail(loads, s, PROCESS_REASON.condensation);
   if (fatal(s)) return fail(loads, s, out.reason);
   if (inlet.Tdp === inlet.Tdp && out.T < inlet.Tdp) return fail(loads, Status.outOfRange, PROCESS_REASON.condensation);
@@ -204,13 +204,13 @@ export function coolingCoilBypass(inlet: HumidAirState, mda: number, ADP: number
   if (!Number.isFinite(ADP) || !Number.isFinite(BF) || !Number.isFinite(Tcondensate)) return fail(loads, Status.invalidInput, REASON.notFinite);
   if (!(BF >= 0 && BF < 1)) return fail(loads, Status.outOfRange, PROCESS_REASON.bypassFactor);
   const p = inlet.p;
-  let s = humidAirState(PAIR.T_RH, ADP, 1, p, inlet.model, false, out);
+  let s = humidAirState(PAIR.T_RH, ADP, 1, p, false, out);
   if (fatal(s)) return fail(loads, s, out.reason);
   const Wadp = out.W;
   const hadp = out.h;
   if (Wadp > inlet.W) return fail(loads, Status.outOfRange, PROCESS_REASON.wouldHumidify);
   if ((s = liquidWater(p, Tcondensate, loads)) !== Status.ok) return s;
-  s = humidAirState(PAIR.W_h, Wadp + BF * (inlet.W - Wadp), hadp + BF * (inlet.h - hadp), p, inlet.model, wetBulb, out);
+  s = humidAirState(PAIR.W_h, Wadp + BF * (inlet.W - Wadp), hadp + BF * (inlet.h - hadp), p, wetBulb, out);
   if (fatal(s)) return fail(loads, s, out.reason);
   return finishLoads(inlet, mda, out, loads, s);
 }
@@ -223,7 +223,7 @@ export function coolingCoilBypass(inlet: HumidAirState, mda: number, ADP: number
 export function coolingCoilToState(inlet: HumidAirState, mda: number, T2: number, RH2: number, Tcondensate: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
   if (!Number.isFinite(Tcondensate)) return fail(loads, Status.invalidInput, REASON.notFinite);
-  let s = humidAirState(PAIR.T_RH, T2, RH2, inlet.p, inlet.model, wetBulb, out);
+  let s = humidAirState(PAIR.T_RH, T2, RH2, inlet.p, wetBulb, out);
   if (fatal(s)) return fail(loads, s, out.reason);
   if (out.W > inlet.W || out.T > inlet.T) return fail(loads, Status.outOfRange, PROCESS_REASON.wouldHumidify);
   if ((s = liquidWater(inlet.p, Tcondensate, loads)) !== Status.ok) return s;
@@ -239,7 +239,6 @@ export const TARGET = { W: 0, RH: 1, T: 2 } as const;
  */
 function humidifyAlongLine(inlet: HumidAirState, hw: number, target: number, value: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   const p = inlet.p;
-  const model = inlet.model;
   const H0 = inlet.h - inlet.W * hw;
   let W2: number;
   if (target === TARGET.W) {
@@ -250,19 +249,19 @@ function humidifyAlongLine(inlet: HumidAirState, hw: number, target: number, val
   } else {
     if (!(value >= 0 && value <= 1)) return fail(loads, Status.outOfRange, REASON.relativeHumidity);
     if (value < inlet.RH) return fail(loads, Status.outOfRange, PROCESS_REASON.target);
-    const flo = residual(RESIDUAL.humidifierRH, inlet.W, H0, hw, value, p, model);
+    const flo = residual(RESIDUAL.humidifierRH, inlet.W, H0, hw, value, p);
     let hi = inlet.W + 1e-3;
-    let fhi = residual(RESIDUAL.humidifierRH, hi, H0, hw, value, p, model);
+    let fhi = residual(RESIDUAL.humidifierRH, hi, H0, hw, value, p);
     for (let i = 0; i < 40 && fhi < 0; i++) {
       hi = 2 * hi + 1e-3;
-      fhi = residual(RESIDUAL.humidifierRH, hi, H0, hw, value, p, model);
+      fhi = residual(RESIDUAL.humidifierRH, hi, H0, hw, value, p);
     }
     if (fhi < 0) return fail(loads, Status.outOfRange, PROCESS_REASON.target);
-    W2 = brent(RESIDUAL.humidifierRH, inlet.W, hi, flo, fhi, H0, hw, value, p, model, 1e-15);
+    W2 = brent(RESIDUAL.humidifierRH, inlet.W, hi, flo, fhi, H0, hw, value, p, 1e-15);
     if (W2 < 0) return fail(loads, Status.noConvergence, REASON.none);
   }
   if (!(W2 >= inlet.W)) return fail(loads, Status.outOfRange, PROCESS_REASON.target);
-  const s = humidAirState(PAIR.W_h, W2, H0 + W2 * hw, p, model, wetBulb, out);
+  const s = humidAirState(PAIR.W_h, W2, H0 + W2 * hw, p, wetBulb, out);
   if (fatal(s)) return fail(loads, s, out.reason);
   return s;
 }

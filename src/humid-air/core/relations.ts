@@ -13,7 +13,7 @@
  * @module
  */
 import ashrae from '../../../data/humid-air/ashrae-moist-air.json';
-import { enhancementFactor, T_ICE, waterSaturationPressure } from './saturation.js';
+import { T_ICE, waterSaturationPressure } from './saturation.js';
 
 /** Ratio of the molar masses of water and dry air, 0.621945 (ASHRAE Eq. 22). */
 export const EPSILON = ashrae.molarMassRatio;
@@ -65,11 +65,11 @@ export function saturatorWaterEnthalpy(Tstar: number): number {
 }
 
 /**
- * Saturation humidity ratio Ws(p, T) with the enhancement factor of `model`, or
- * {@link NO_SATURATION} when f·p_ws ≥ p (T at or above the boiling point at p).
+ * Saturation humidity ratio Ws(p, T) of the ideal mixture (ASHRAE Eq. 23 with pws of pure water),
+ * or {@link NO_SATURATION} when p_ws ≥ p (T at or above the boiling point at p).
  */
-export function saturationHumidityRatio(p: number, T: number, model: number): number {
-  const ps = enhancementFactor(model, p, T) * waterSaturationPressure(T);
+export function saturationHumidityRatio(p: number, T: number): number {
+  const ps = waterSaturationPressure(T);
   return ps < p ? (EPSILON * ps) / (p - ps) : NO_SATURATION;
 }
 
@@ -77,8 +77,8 @@ export function saturationHumidityRatio(p: number, T: number, model: number): nu
  * The constant K(t*) = h(t*, Ws*) − Ws*·hw(t*) of the adiabatic-saturation balance
  * h(t, W) − W·hw(t*) = K(t*), or {@link NO_SATURATION} when Ws* does not exist.
  */
-export function saturatorConstant(p: number, Tstar: number, model: number): number {
-  const Wss = saturationHumidityRatio(p, Tstar, model);
+export function saturatorConstant(p: number, Tstar: number): number {
+  const Wss = saturationHumidityRatio(p, Tstar);
   if (Wss === NO_SATURATION) return NO_SATURATION;
   return moistAirEnthalpy(Tstar, Wss) - Wss * saturatorWaterEnthalpy(Tstar);
 }
@@ -88,8 +88,8 @@ export function saturatorConstant(p: number, Tstar: number, model: number): numb
  * written as the energy balance h(T, W) + (Ws* − W)·hw(t*) = h(t*, Ws*)), or
  * {@link NO_SATURATION} when Ws* does not exist. May be negative (no such state).
  */
-export function humidityRatioFromWetBulb(p: number, T: number, Tstar: number, model: number): number {
-  const K = saturatorConstant(p, Tstar, model);
+export function humidityRatioFromWetBulb(p: number, T: number, Tstar: number): number {
+  const K = saturatorConstant(p, Tstar);
   if (K === NO_SATURATION) return NO_SATURATION;
   const t = T - 273.15;
   return (K - CP_DRY_AIR * t) / (H_VAPOR_0 + CP_VAPOR * t - saturatorWaterEnthalpy(Tstar));

@@ -1,7 +1,7 @@
 /**
  * The one-dimensional solves of the humid-air core: Brent's method (R. P. Brent, Algorithms for
  * Minimization without Derivatives, 1973, ch. 4) on a residual picked by a code, so that no closure
- * is created per call. Every residual takes (x, a, b, c, p, model) as plain numbers.
+ * is created per call. Every residual takes (x, a, b, c, p) as plain numbers.
  *
  * @module
  */
@@ -13,7 +13,7 @@ import {
   temperatureFromEnthalpy,
   vaporPressureFromHumidityRatio,
 } from './relations.js';
-import { enhancementFactor, waterSaturationPressure } from './saturation.js';
+import { waterSaturationPressure } from './saturation.js';
 
 /** Residual codes. */
 export const RESIDUAL = {
@@ -30,32 +30,32 @@ export const RESIDUAL = {
   humidifierRH: 3,
 } as const;
 
-/** W at dry-bulb T and relative humidity RH, or {@link NO_SATURATION} when RH·f·p_ws ≥ p. */
-export function humidityRatioAtRH(p: number, T: number, RH: number, model: number): number {
-  const pw = RH * enhancementFactor(model, p, T) * waterSaturationPressure(T);
+/** W at dry-bulb T and relative humidity RH, or {@link NO_SATURATION} when RH·p_ws ≥ p. */
+export function humidityRatioAtRH(p: number, T: number, RH: number): number {
+  const pw = RH * waterSaturationPressure(T);
   return pw < p ? humidityRatioFromVaporPressure(p, pw) : NO_SATURATION;
 }
 
 /** The residual `kind` at x. */
-export function residual(kind: number, x: number, a: number, b: number, c: number, p: number, model: number): number {
+export function residual(kind: number, x: number, a: number, b: number, c: number, p: number): number {
   switch (kind) {
     case RESIDUAL.humidifierRH: {
       const T = temperatureFromEnthalpy(a + x * b, x);
       if (!(T > 0)) return NO_SATURATION;
-      return vaporPressureFromHumidityRatio(p, x) / (enhancementFactor(model, p, T) * waterSaturationPressure(T)) - c;
+      return vaporPressureFromHumidityRatio(p, x) / waterSaturationPressure(T) - c;
     }
     case RESIDUAL.wetBulbFromTW: {
-      const W = humidityRatioFromWetBulb(p, a, x, model);
+      const W = humidityRatioFromWetBulb(p, a, x);
       return W === NO_SATURATION ? NO_SATURATION : W - b;
     }
     case RESIDUAL.enthalpyAtRH: {
-      const W = humidityRatioAtRH(p, x, a, model);
+      const W = humidityRatioAtRH(p, x, a);
       return W === NO_SATURATION ? NO_SATURATION : moistAirEnthalpy(x, W) - b;
     }
     default: {
-      const Wrh = humidityRatioAtRH(p, x, a, model);
+      const Wrh = humidityRatioAtRH(p, x, a);
       if (Wrh === NO_SATURATION) return -NO_SATURATION;
-      const Wwb = humidityRatioFromWetBulb(p, x, b, model);
+      const Wwb = humidityRatioFromWetBulb(p, x, b);
       return Wwb === NO_SATURATION ? NO_SATURATION : Wwb - Wrh;
     }
   }
@@ -67,7 +67,7 @@ const MACHINE_EPSILON = 2.220446049250313e-16;
  * Root of residual `kind` in [x1, x2] given its values f1, f2 there (of opposite sign or zero), to
  * |Δx| ≤ xtol + 4ε|x|. Returns −1 when the bracket holds no sign change or after 100 iterations.
  */
-export function brent(kind: number, x1: number, x2: number, f1: number, f2: number, a1: number, b1: number, c1: number, p: number, model: number, xtol: number): number {
+export function brent(kind: number, x1: number, x2: number, f1: number, f2: number, a1: number, b1: number, c1: number, p: number, xtol: number): number {
   if (f1 === 0) return x1;
   if (f2 === 0) return x2;
   if ((f1 > 0 && f2 > 0) || (f1 < 0 && f2 < 0)) return -1;
@@ -128,7 +128,7 @@ export function brent(kind: number, x1: number, x2: number, f1: number, f2: numb
     a = b;
     fa = fb;
     b += Math.abs(d) > tol1 ? d : xm >= 0 ? tol1 : -tol1;
-    fb = residual(kind, b, a1, b1, c1, p, model);
+    fb = residual(kind, b, a1, b1, c1, p);
   }
   return -1;
 }

@@ -4,12 +4,11 @@
  * {@link HumidAirState}, a {@link Status} code and a {@link REASON} code; never throws, never
  * allocates.
  *
- * Relations: ASHRAE Handbook—Fundamentals (SI) ch. 1 (see `relations.ts`); saturation over liquid
- * by IAPWS-IF97 region 4, over ice by IAPWS R14-08(2011) (see `saturation.ts`); the default model
- * multiplies the saturation pressure by Buck's (1981) enhancement factor, the `ideal` model does not.
+ * Relations: the ideal-mixture relations of the ASHRAE Handbook—Fundamentals (SI) ch. 1 (see
+ * `relations.ts`); saturation over liquid by IAPWS-IF97 region 4, over ice by IAPWS R14-08(2011)
+ * (see `saturation.ts`). No enhancement factor (see data/humid-air/enhancement-buck-1981.json).
  *
- * Range: 173.15 K ≤ T, Tdp, Twb ≤ 473.15 K (−100 °C to 200 °C), 0 < p ≤ 1 MPa, 0 ≤ RH ≤ 1, W ≥ 0;
- * the enhanced model 193.15 K ≤ T ≤ 323.15 K (−80 °C to 50 °C) and 30 kPa ≤ p ≤ 110 kPa.
+ * Range: 173.15 K ≤ T, Tdp, Twb ≤ 473.15 K (−100 °C to 200 °C), 0 < p ≤ 1 MPa, 0 ≤ RH ≤ 1, W ≥ 0.
  *
  * @module
  */
@@ -30,17 +29,7 @@ import {
   temperatureFromEnthalpy,
   vaporPressureFromHumidityRatio,
 } from './relations.js';
-import {
-  ENHANCED_P_MAX,
-  ENHANCED_P_MIN,
-  ENHANCED_T_MAX,
-  ENHANCED_T_MIN,
-  enhancementFactor,
-  MODEL,
-  saturationTemperatureAt,
-  T_ICE,
-  waterSaturationPressure,
-} from './saturation.js';
+import { saturationTemperatureAt, T_ICE, waterSaturationPressure } from './saturation.js';
 
 /** Lowest temperature (dry-bulb, dew point, wet-bulb) of the humid-air core, K (−100 °C). */
 export const T_MIN = 173.15;
@@ -97,8 +86,6 @@ export const REASON = {
   supersaturated: 9,
   /** The two inputs fix the same thing (W and Tdp; h and Twb at t* = 0 °C) (Status.invalidInput). */
   dependentPair: 10,
-  /** Outside the enhanced model's range: −80 °C … 50 °C, 30 kPa … 110 kPa (Status.outOfRange). */
-  enhancementRange: 11,
   /** No state in range has these inputs (RH = 0 with W > 0, a wet-bulb too low for dry air …) (Status.outOfRange). */
   noState: 12,
   /** Not a pair code (Status.invalidInput). */
@@ -121,7 +108,7 @@ export class HumidAirState {
   Twb = 0;
   /** Dew-point temperature (frost point below 0 °C), K. */
   Tdp = 0;
-  /** Relative humidity pw/(f·pws), 0 … 1. */
+  /** Relative humidity pw/pws, 0 … 1. */
   RH = 0;
   /** Humidity ratio, kg water per kg dry air. */
   W = 0;
@@ -135,16 +122,12 @@ export class HumidAirState {
   pw = 0;
   /** Saturation pressure of pure water at T (over ice below 0 °C), Pa. */
   pws = 0;
-  /** Enhancement factor at (p, T) (1 in the ideal model). */
-  f = 1;
   /** Saturation humidity ratio at (p, T), kg/kg dry air. */
   Ws = 0;
   /** Degree of saturation W/Ws. */
   mu = 0;
   /** Heat capacity at constant p per kg of dry air, J/(kg·K): ∂h/∂T at constant W. */
   cp = 0;
-  /** The model used ({@link MODEL}). */
-  model = 0;
   /** Whether Twb was computed (states asked for without the wet-bulb leave it NaN). */
   wetBulbComputed = false;
   /** Why the status is not `ok` ({@link REASON}). */
@@ -157,37 +140,28 @@ function fail(out: HumidAirState, status: StatusCode, reason: number): StatusCod
 }
 
 /** Status of a temperature input or solved temperature, or ok. */
-function checkTemperature(out: HumidAirState, T: number, model: number): StatusCode {
+function checkTemperature(out: HumidAirState, T: number): StatusCode {
   if (!(T >= T_MIN && T <= T_MAX)) return fail(out, Status.outOfRange, REASON.temperature);
-  if (model === MODEL.enhanced && !(T >= ENHANCED_T_MIN && T <= ENHANCED_T_MAX)) return fail(out, Status.outOfRange, REASON.enhancementRange);
   return Status.ok;
-}
-
-function lowestTemperature(model: number): number {
-  return model === MODEL.enhanced ? ENHANCED_T_MIN : T_MIN;
-}
-function highestTemperature(model: number): number {
-  return model === MODEL.enhanced ? ENHANCED_T_MAX : T_MAX;
 }
 
 /**
  * The highest temperature at or below `T` at which saturated air exists at p (f·pws < p), K.
  * Equal to T except above the boiling point at p.
  */
-function belowBoiling(p: number, T: number, model: number): number {
-  if (enhancementFactor(model, p, T) * waterSaturationPressure(T) < p) return T;
-  const Tb = saturationTemperatureAt(p, p, model, 0, 1e4);
+function belowBoiling(p: number, T: number): number {
+  if (waterSaturationPressure(T) < p) return T;
+  const Tb = saturationTemperatureAt(p, 0, 1e4);
   return Tb * (1 - 1e-12);
 }
 
 /**
- * Fills every output from (p, T, W); `Tdp` and `Twb` are used as given when finite (the caller
- * knows them exactly), computed otherwise.
+ * Fills every output from (p, T, W); `Tdp`, `Twb` and `pwsAtT` (pws(T)) are used as given when
+ * not NaN (the caller knows them exactly), computed otherwise.
  */
-function fill(out: HumidAirState, p: number, T: number, W: number, model: number, Tdp: number, Twb: number, wetBulb: boolean): StatusCode {
-  const pws = waterSaturationPressure(T);
-  const f = enhancementFactor(model, p, T);
-  const psat = f * pws;
+function fill(out: HumidAirState, p: number, T: number, W: number, Tdp: number, Twb: number, wetBulb: boolean, pwsAtT: number): StatusCode {
+  const pws = pwsAtT === pwsAtT ? pwsAtT : waterSaturationPressure(T);
+  const psat = pws;
   const Ws = psat < p ? humidityRatioFromVaporPressure(p, psat) : NO_SATURATION;
   if (Ws !== NO_SATURATION && W > Ws) {
     // an h carries W only to about ε·|h|/h_g: at −100 °C, W ~ 1e-8, that is 1e-9 of W
@@ -203,7 +177,6 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   out.W = W;
   out.pw = pw;
   out.pws = pws;
-  out.f = f;
   const RH = pw / psat;
   out.RH = RH > 1 ? 1 : RH; // W ≤ Ws was checked: above 1 only by rounding
   if (Ws === NO_SATURATION) {
@@ -220,11 +193,10 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   out.v = moistAirVolume(p, T, W);
   out.rho = (1 + W) / out.v;
   out.cp = CP_DRY_AIR + CP_VAPOR * W;
-  out.model = model;
   // dew point
   let dew = Tdp;
   if (!(dew === dew)) {
-    dew = W > 0 ? saturationTemperatureAt(pw, p, model, lowestTemperature(model), T * (1 + 1e-12)) : -1;
+    dew = W > 0 ? saturationTemperatureAt(pw, T_MIN, T * (1 + 1e-12)) : -1;
     if (dew < 0) {
       dew = NaN;
       status = Status.undefinedProperty;
@@ -241,7 +213,7 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
   } else if (Twb === Twb) {
     out.Twb = Twb;
   } else {
-    const wb = wetBulbOf(p, T, W, dew === dew ? dew : lowestTemperature(model), model);
+    const wb = wetBulbOf(p, T, W, dew === dew ? dew : T_MIN);
     if (wb < 0) {
       out.Twb = NaN;
       status = Status.undefinedProperty;
@@ -255,13 +227,13 @@ function fill(out: HumidAirState, p: number, T: number, W: number, model: number
 }
 
 /** Thermodynamic wet-bulb of (p, T, W) in [lo, T], K, or −1 when it lies below lo. */
-function wetBulbOf(p: number, T: number, W: number, lo: number, model: number): number {
-  const hi = belowBoiling(p, T, model);
-  const fhi = residual(RESIDUAL.wetBulbFromTW, hi, T, W, 0, p, model);
+function wetBulbOf(p: number, T: number, W: number, lo: number): number {
+  const hi = belowBoiling(p, T);
+  const fhi = residual(RESIDUAL.wetBulbFromTW, hi, T, W, 0, p);
   if (fhi <= 0) return hi;
-  const flo = residual(RESIDUAL.wetBulbFromTW, lo, T, W, 0, p, model);
-  if (flo > 0) return lo === lowestTemperature(model) ? -1 : lo;
-  return brent(RESIDUAL.wetBulbFromTW, lo, hi, flo, fhi, T, W, 0, p, model, T_TOLERANCE);
+  const flo = residual(RESIDUAL.wetBulbFromTW, lo, T, W, 0, p);
+  if (flo > 0) return lo === T_MIN ? -1 : lo;
+  return brent(RESIDUAL.wetBulbFromTW, lo, hi, flo, fhi, T, W, 0, p, T_TOLERANCE);
 }
 
 /**
@@ -269,7 +241,6 @@ function wetBulbOf(p: number, T: number, W: number, lo: number, model: number): 
  * the pair's name: `PAIR.T_RH` takes (T, RH), `PAIR.h_Twb` takes (h, Twb). SI: K, fractions,
  * kg/kg dry air, J/kg dry air.
  *
- * @param model {@link MODEL}.enhanced (Buck's enhancement factor) or {@link MODEL}.ideal (ASHRAE ideal mixture)
  * @param wetBulb whether to compute the thermodynamic wet-bulb (a solve) when it is not an input
  * @returns Status.ok; Status.outOfRange, Status.invalidInput with `out.reason` saying why; or
  *   Status.undefinedProperty when the state is computed but Ws and μ (above boiling), Tdp (W = 0) or
@@ -277,61 +248,62 @@ function wetBulbOf(p: number, T: number, W: number, lo: number, model: number): 
  * @example
  * ```ts
  * const out = new HumidAirState();
- * humidAirState(PAIR.T_RH, 303.15, 0.5, 101325, MODEL.enhanced, true, out);   //=> 0 (Status.ok)
- * out.W;     //=> 0.0133735 (kg/kg dry air)
- * out.Twb;   //=> 295.147 (K)
- * humidAirState(PAIR.W_Tdp, 0.01, 285, 101325, MODEL.enhanced, true, out);    //=> 3 (invalidInput)
+ * humidAirState(PAIR.T_RH, 303.15, 0.5, 101325, true, out);   //=> 0 (Status.ok)
+ * out.W;     //=> 0.0133123... (kg/kg dry air)
+ * out.Twb;   //=> 295.154... (K)
+ * humidAirState(PAIR.W_Tdp, 0.01, 285, 101325, true, out);    //=> 3 (invalidInput)
  * out.reason === REASON.dependentPair;   //=> true
  * ```
  */
-export function humidAirState(pair: number, a: number, b: number, p: number, model: number, wetBulb: boolean, out: HumidAirState): StatusCode {
+export function humidAirState(pair: number, a: number, b: number, p: number, wetBulb: boolean, out: HumidAirState): StatusCode {
   if (!Number.isFinite(a) || !Number.isFinite(b) || !Number.isFinite(p)) return fail(out, Status.invalidInput, REASON.notFinite);
-  if (model !== MODEL.enhanced && model !== MODEL.ideal) return fail(out, Status.invalidInput, REASON.unknownPair);
   if (!(p > 0 && p <= P_MAX)) return fail(out, Status.outOfRange, REASON.pressure);
-  if (model === MODEL.enhanced && !(p >= ENHANCED_P_MIN && p <= ENHANCED_P_MAX)) return fail(out, Status.outOfRange, REASON.enhancementRange);
   let T = NaN;
   let W = NaN;
   let Tdp = NaN;
   let Twb = NaN;
+  let pwsT = NaN;
   let s: StatusCode;
   switch (pair) {
     case PAIR.T_RH: {
       T = a;
-      if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, T)) !== Status.ok) return s;
       if (!(b >= 0 && b <= 1)) return fail(out, Status.outOfRange, REASON.relativeHumidity);
-      W = humidityRatioAtRH(p, T, b, model);
-      if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
+      pwsT = waterSaturationPressure(T);
+      const pw = b * pwsT;
+      if (!(pw < p)) return fail(out, Status.outOfRange, REASON.noState);
+      W = humidityRatioFromVaporPressure(p, pw);
       if (b === 1) Tdp = T;
       break;
     }
     case PAIR.T_W:
       T = a;
       W = b;
-      if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, T)) !== Status.ok) return s;
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.humidityRatio);
       break;
     case PAIR.T_h:
       T = a;
-      if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, T)) !== Status.ok) return s;
       W = (b - CP_DRY_AIR * (T - 273.15)) / (H_VAPOR_0 + CP_VAPOR * (T - 273.15));
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.humidityRatio);
       break;
     case PAIR.T_Tdp:
       T = a;
       Tdp = b;
-      if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
-      if ((s = checkTemperature(out, Tdp, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, T)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Tdp)) !== Status.ok) return s;
       if (Tdp > T) return fail(out, Status.outOfRange, REASON.dewPointAboveDryBulb);
-      W = humidityRatioAtRH(p, Tdp, 1, model);
+      W = humidityRatioAtRH(p, Tdp, 1);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       break;
     case PAIR.T_Twb:
       T = a;
       Twb = b;
-      if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
-      if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, T)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Twb)) !== Status.ok) return s;
       if (Twb > T) return fail(out, Status.outOfRange, REASON.wetBulbAboveDryBulb);
-      W = humidityRatioFromWetBulb(p, T, Twb, model);
+      W = humidityRatioFromWetBulb(p, T, Twb);
       if (W === NO_SATURATION || !(W >= 0)) return fail(out, Status.outOfRange, REASON.noState);
       if (Twb === T) Tdp = T;
       break;
@@ -341,60 +313,60 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.humidityRatio);
       if (a === 0) return W === 0 ? fail(out, Status.invalidInput, REASON.dependentPair) : fail(out, Status.outOfRange, REASON.noState);
       if (W === 0) return fail(out, Status.outOfRange, REASON.noState);
-      T = saturationTemperatureAt(vaporPressureFromHumidityRatio(p, W) / a, p, model, lowestTemperature(model), highestTemperature(model));
+      T = saturationTemperatureAt(vaporPressureFromHumidityRatio(p, W) / a, T_MIN, T_MAX);
       if (T < 0) return fail(out, Status.outOfRange, REASON.temperature);
       if (a === 1) Tdp = T;
       break;
     }
     case PAIR.RH_h: {
       if (!(a >= 0 && a <= 1)) return fail(out, Status.outOfRange, REASON.relativeHumidity);
-      const lo = lowestTemperature(model);
-      const hi = a > 0 ? belowRH(p, a, model) : highestTemperature(model);
-      const flo = residual(RESIDUAL.enthalpyAtRH, lo, a, b, 0, p, model);
-      const fhi = residual(RESIDUAL.enthalpyAtRH, hi, a, b, 0, p, model);
+      const lo = T_MIN;
+      const hi = a > 0 ? belowRH(p, a) : T_MAX;
+      const flo = residual(RESIDUAL.enthalpyAtRH, lo, a, b, 0, p);
+      const fhi = residual(RESIDUAL.enthalpyAtRH, hi, a, b, 0, p);
       if (flo > 0 || fhi < 0) return fail(out, Status.outOfRange, REASON.temperature);
-      T = brent(RESIDUAL.enthalpyAtRH, lo, hi, flo, fhi, a, b, 0, p, model, T_TOLERANCE);
+      T = brent(RESIDUAL.enthalpyAtRH, lo, hi, flo, fhi, a, b, 0, p, T_TOLERANCE);
       if (T < 0) return fail(out, Status.noConvergence, REASON.none);
-      W = humidityRatioAtRH(p, T, a, model);
+      W = humidityRatioAtRH(p, T, a);
       if (a === 1) Tdp = T;
       break;
     }
     case PAIR.RH_Tdp: {
       Tdp = b;
       if (!(a >= 0 && a <= 1)) return fail(out, Status.outOfRange, REASON.relativeHumidity);
-      if ((s = checkTemperature(out, Tdp, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Tdp)) !== Status.ok) return s;
       if (a === 0) return fail(out, Status.outOfRange, REASON.noState);
-      W = humidityRatioAtRH(p, Tdp, 1, model);
+      W = humidityRatioAtRH(p, Tdp, 1);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
-      T = a === 1 ? Tdp : saturationTemperatureAt(vaporPressureFromHumidityRatio(p, W) / a, p, model, lowestTemperature(model), highestTemperature(model));
+      T = a === 1 ? Tdp : saturationTemperatureAt(vaporPressureFromHumidityRatio(p, W) / a, T_MIN, T_MAX);
       if (T < 0) return fail(out, Status.outOfRange, REASON.temperature);
       break;
     }
     case PAIR.RH_Twb: {
       Twb = b;
       if (!(a >= 0 && a <= 1)) return fail(out, Status.outOfRange, REASON.relativeHumidity);
-      if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Twb)) !== Status.ok) return s;
       if (a === 1) {
         T = Twb;
         Tdp = Twb;
-        W = humidityRatioAtRH(p, T, 1, model);
+        W = humidityRatioAtRH(p, T, 1);
         if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
         break;
       }
-      const K = saturatorConstant(p, Twb, model);
+      const K = saturatorConstant(p, Twb);
       if (K === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       // above T0 = t* + K/cp_a the balance needs W < 0
       let hi = 273.15 + K / CP_DRY_AIR;
-      const top = highestTemperature(model);
+      const top = T_MAX;
       if (hi > top) hi = top;
       if (!(hi > Twb)) hi = Twb;
-      const flo = residual(RESIDUAL.wetBulbAtRH, Twb, a, Twb, 0, p, model);
-      const fhi = residual(RESIDUAL.wetBulbAtRH, hi, a, Twb, 0, p, model);
+      const flo = residual(RESIDUAL.wetBulbAtRH, Twb, a, Twb, 0, p);
+      const fhi = residual(RESIDUAL.wetBulbAtRH, hi, a, Twb, 0, p);
       if (fhi > 0) return fail(out, Status.outOfRange, REASON.temperature);
       // flo = Ws*·(1 − RH) ≥ 0 up to rounding: at RH within rounding of 1 the root is t* itself
-      T = flo <= 0 ? Twb : brent(RESIDUAL.wetBulbAtRH, Twb, hi, flo, fhi, a, Twb, 0, p, model, T_TOLERANCE);
+      T = flo <= 0 ? Twb : brent(RESIDUAL.wetBulbAtRH, Twb, hi, flo, fhi, a, Twb, 0, p, T_TOLERANCE);
       if (T < 0) return fail(out, Status.noConvergence, REASON.none);
-      W = humidityRatioAtRH(p, T, a, model);
+      W = humidityRatioAtRH(p, T, a);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       break;
     }
@@ -409,8 +381,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       W = a;
       Twb = b;
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.humidityRatio);
-      if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
-      T = temperatureFromWetBulbAndW(p, Twb, W, model);
+      if ((s = checkTemperature(out, Twb)) !== Status.ok) return s;
+      T = temperatureFromWetBulbAndW(p, Twb, W);
       if (T === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       if (T < Twb * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
       if (T < Twb) T = Twb;
@@ -418,8 +390,8 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
     }
     case PAIR.h_Tdp:
       Tdp = b;
-      if ((s = checkTemperature(out, Tdp, model)) !== Status.ok) return s;
-      W = humidityRatioAtRH(p, Tdp, 1, model);
+      if ((s = checkTemperature(out, Tdp)) !== Status.ok) return s;
+      W = humidityRatioAtRH(p, Tdp, 1);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       T = temperatureFromEnthalpy(a, W);
       if (T < Tdp * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
@@ -427,11 +399,11 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
       break;
     case PAIR.h_Twb: {
       Twb = b;
-      if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Twb)) !== Status.ok) return s;
       const hw = saturatorWaterEnthalpy(Twb);
       // at t* = 0 °C over liquid hw = 0: every state on the line h = h(t*, Ws*) has this wet-bulb
       if (Math.abs(hw) < C_LIQUID_DEPENDENCE) return fail(out, Status.invalidInput, REASON.dependentPair);
-      const K = saturatorConstant(p, Twb, model);
+      const K = saturatorConstant(p, Twb);
       if (K === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       W = (a - K) / hw;
       if (!(W >= 0)) return fail(out, Status.outOfRange, REASON.noState);
@@ -443,12 +415,12 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
     case PAIR.Tdp_Twb: {
       Tdp = a;
       Twb = b;
-      if ((s = checkTemperature(out, Tdp, model)) !== Status.ok) return s;
-      if ((s = checkTemperature(out, Twb, model)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Tdp)) !== Status.ok) return s;
+      if ((s = checkTemperature(out, Twb)) !== Status.ok) return s;
       if (Tdp > Twb) return fail(out, Status.outOfRange, REASON.dewPointAboveWetBulb);
-      W = humidityRatioAtRH(p, Tdp, 1, model);
+      W = humidityRatioAtRH(p, Tdp, 1);
       if (W === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
-      T = Tdp === Twb ? Twb : temperatureFromWetBulbAndW(p, Twb, W, model);
+      T = Tdp === Twb ? Twb : temperatureFromWetBulbAndW(p, Twb, W);
       if (T === NO_SATURATION) return fail(out, Status.outOfRange, REASON.noState);
       if (T < Twb * (1 - ROUNDING)) return fail(out, Status.outOfRange, REASON.supersaturated);
       if (T < Twb) T = Twb;
@@ -457,34 +429,34 @@ export function humidAirState(pair: number, a: number, b: number, p: number, mod
     default:
       return fail(out, Status.invalidInput, REASON.unknownPair);
   }
-  if ((s = checkTemperature(out, T, model)) !== Status.ok) return s;
+  if ((s = checkTemperature(out, T)) !== Status.ok) return s;
   if (Tdp === Tdp && Tdp > T) Tdp = T;
   if (Twb === Twb && Twb > T) Twb = T;
-  return fill(out, p, T, W, model, Tdp, Twb, wetBulb);
+  return fill(out, p, T, W, Tdp, Twb, wetBulb, pwsT);
 }
 
 /** |hw| below this (J/kg: t* within 1e-6 K of 0 °C over liquid) makes (h, Twb) a dependent pair. */
 const C_LIQUID_DEPENDENCE = 4.186e-3;
 
 /** Dry-bulb (K) of air with wet-bulb t* and humidity ratio W: the balance solved for T. */
-function temperatureFromWetBulbAndW(p: number, Tstar: number, W: number, model: number): number {
-  const K = saturatorConstant(p, Tstar, model);
+function temperatureFromWetBulbAndW(p: number, Tstar: number, W: number): number {
+  const K = saturatorConstant(p, Tstar);
   if (K === NO_SATURATION) return NO_SATURATION;
   const hw = saturatorWaterEnthalpy(Tstar);
   return 273.15 + (K - W * (H_VAPOR_0 - hw)) / (CP_DRY_AIR + CP_VAPOR * W);
 }
 
-/** The highest temperature of the model's range at which RH·f·pws < p, K. */
-function belowRH(p: number, RH: number, model: number): number {
-  const top = highestTemperature(model);
-  if (humidityRatioAtRH(p, top, RH, model) !== NO_SATURATION) return top;
-  const T = saturationTemperatureAt(p / RH, p, model, 0, 1e4);
+/** The highest temperature of the range at which RH·pws < p, K. */
+function belowRH(p: number, RH: number): number {
+  const top = T_MAX;
+  if (humidityRatioAtRH(p, top, RH) !== NO_SATURATION) return top;
+  const T = saturationTemperatureAt(p / RH, 0, 1e4);
   return T * (1 - 1e-12);
 }
 
 /** The humidity ratio of saturated air at (p, T), kg/kg, or −1 when it does not exist. */
-export function saturationHumidityRatioAt(p: number, T: number, model: number): number {
-  const W = humidityRatioAtRH(p, T, 1, model);
+export function saturationHumidityRatioAt(p: number, T: number): number {
+  const W = humidityRatioAtRH(p, T, 1);
   return W === NO_SATURATION ? -1 : W;
 }
 
