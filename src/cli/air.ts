@@ -96,8 +96,8 @@ export function airRows(st: HumidAirResult, suffix = ''): Row[] {
     [n('Twb'), st.Twb],
     [n('Tdp'), st.Tdp],
     [n('RH'), st.RH],
-    [n('W'), Quantity.fromSI(st.W, 'humidityRatio')],
-    [n('Ws'), st.Ws === undefined ? undefined : Quantity.fromSI(st.Ws, 'humidityRatio')],
+    [n('W'), st.W],
+    [n('Ws'), st.Ws],
     [`${n('W')}/${n('Ws')}`, st.saturationDegree],
     [n('h'), st.h],
     [n('v'), st.v],
@@ -105,7 +105,6 @@ export function airRows(st: HumidAirResult, suffix = ''): Row[] {
     [n('cp'), st.cp],
     [n('pw'), st.pw],
     [n('pws'), st.pws],
-    [n('f'), st.f],
   ];
 }
 
@@ -113,7 +112,7 @@ function closing(st: HumidAirResult): Row[] {
   return [
     ['p', st.p],
     ['p from', st.pressureFrom],
-    ['model', st.model],
+    ['model', 'ideal mixture (ASHRAE Handbook—Fundamentals ch. 1)'],
     ['basis', 'W, h, v, cp per kg of dry air'],
   ];
 }
@@ -124,7 +123,7 @@ export function airCommand(args: Args): Row[] {
   onlyNames(args.values, 'air', [...PROPERTIES, 'p', 'altitude'], `${ANY_TWO}, with p or altitude optional`);
   const pressure = pressureOptions(args.values, 'air');
   const props = stateProperties(args.values, '', 'air');
-  const st = stateOf({ ...props, ...pressure, ...(args.model !== undefined ? { model: args.model } : {}) } as HumidAirStateInput, undefined);
+  const st = stateOf({ ...props, ...pressure } as HumidAirStateInput, undefined);
   return [...airRows(st), ...closing(st)];
 }
 
@@ -158,7 +157,7 @@ export function airMixCommand(args: Args): Row[] {
     const flowText = args.values.get(`flow${i}`);
     if (flowText === undefined) throw new UsageError(`heatstate air-mix stream ${i} has no flow${i}=<dry-air mass flow or volume flow>`);
     const props = stateProperties(args.values, String(i), 'air-mix');
-    const state = stateOf({ ...props, ...pressure, ...(args.model !== undefined ? { model: args.model } : {}) } as HumidAirStateInput, `stream ${i}`);
+    const state = stateOf({ ...props, ...pressure } as HumidAirStateInput, `stream ${i}`);
     list.push({ state, flow: flowAt(`flow${i}`, flowText, state) });
   }
   const mixed = humidAir.mix(list);
@@ -182,7 +181,7 @@ export function coilCommand(args: Args): Row[] {
   if (flowText === undefined) throw new UsageError(`heatstate coil needs flow=<dry-air mass flow or volume flow at the entering state>; it takes ${takes}`);
   const pressure = pressureOptions(args.values, 'coil');
   const props = stateProperties(args.values, '1', 'coil');
-  const inlet = stateOf({ ...props, ...pressure, ...(args.model !== undefined ? { model: args.model } : {}) } as HumidAirStateInput, 'entering air');
+  const inlet = stateOf({ ...props, ...pressure } as HumidAirStateInput, 'entering air');
   const flow = flowAt('flow', flowText, inlet);
   const Tc = args.values.get('Tcondensate');
   if (Tc !== undefined) readValue('Tcondensate', Tc, 'temperature');

@@ -22,14 +22,13 @@ export class InputError extends Error {
 /** Options that take a value, with the values each accepts. */
 export const VALUE_OPTIONS = {
   '--units': ['si', 'us'],
-  '--model': ['enhanced', 'ideal'],
 } as const;
 
 /** Options that take no value. */
 export const SWITCHES = ['--json', '--transport', '--help', '-h'] as const;
 
 /** The option list as shown in messages. */
-export const OPTION_LIST = '--units si|us, --model enhanced|ideal, --transport, --json, --help';
+export const OPTION_LIST = '--units si|us, --transport, --json, --help';
 
 /** A command line, read. */
 export interface Args {
@@ -39,8 +38,6 @@ export interface Args {
   readonly values: ReadonlyMap<string, string>;
   /** `--units`: `si` (default) or `us`. */
   readonly units: 'si' | 'us';
-  /** `--model` when given (humid air). */
-  readonly model: 'enhanced' | 'ideal' | undefined;
   readonly json: boolean;
   readonly transport: boolean;
   readonly help: boolean;
@@ -115,7 +112,6 @@ export function parseArgs(argv: readonly string[]): Args {
     positional,
     values,
     units: (chosen['--units'] ?? 'si') as Args['units'],
-    model: chosen['--model'] as Args['model'],
     json,
     transport,
     help,

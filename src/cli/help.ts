@@ -21,16 +21,16 @@ usage:
         ideal-gas properties (NASA polynomials); one species
   heatstate liquid <substance> T1=<value> T2=<value> [p1=<value>] [p2=<value>]
         incompressible mean c, Δu, Δh and Δs between two states (p1, p2 default 1 atm)
-  heatstate air <two of T, Twb, Tdp, RH, W, h> [p=<value> | altitude=<value>] [--model enhanced|ideal]
+  heatstate air <two of T, Twb, Tdp, RH, W, h> [p=<value> | altitude=<value>]
         a humid-air state (default 101.325 kPa); RH as 0.5 or 50%, W as 0.01, "10 g/kg" or
         "70 gr/lbm"; W, h, v and cp are per kg of dry air
   heatstate air-mix <two of T1, Twb1, Tdp1, RH1, W1, h1> flow1=<value> <the same for stream 2, …>
-                    [p=<value> | altitude=<value>] [--model enhanced|ideal]
+                    [p=<value> | altitude=<value>]
         adiabatic mixing of two or more streams; a flow is a dry-air mass flow (kg/s, lbm/h)
         or a volume flow (m³/s, cfm) converted at its stream's own state
   heatstate coil <two of T1, Twb1, Tdp1, RH1, W1, h1> flow=<value>
                  ADP=<value> BF=<number> | T2=<value> RH2=<value>
-                 [Tcondensate=<value>] [p=<value> | altitude=<value>] [--model enhanced|ideal]
+                 [Tcondensate=<value>] [p=<value> | altitude=<value>]
         a cooling coil with dehumidification, from its apparatus dew point ADP and bypass
         factor BF, or from the leaving dry-bulb T2 and RH2: leaving air, sensible, latent
         and total loads (negative: heat leaves the air), coil duty, SHR and condensate
@@ -44,8 +44,6 @@ options:
                           us: °F, psia, Btu/lbm, gr/lbm, lbm/(ft·h), Btu/h, …)
   --json                  JSON instead of a table
   --transport             transport properties (water and sat)
-  --model enhanced|ideal  humid-air model (default enhanced: −80 °C to 50 °C, 30 kPa to 110 kPa;
-                          ideal: −100 °C to 200 °C, up to 1 MPa)
   --help                  this text
 
 Values are decimal numbers with units (T=300K, p="1 atm"), quoted when they contain spaces;

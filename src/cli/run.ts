@@ -17,15 +17,15 @@ import { helpText } from './help.js';
 import { ValueError } from './inputs.js';
 
 /** The subcommands, with the options each takes beyond --units, --json and --help. */
-const COMMANDS: Readonly<Record<string, { run: (args: Args) => Row[]; transport?: true; model?: true }>> = {
+const COMMANDS: Readonly<Record<string, { run: (args: Args) => Row[]; transport?: true }>> = {
   water: { run: waterCommand, transport: true },
   sat: { run: saturationCommand, transport: true },
   saturation: { run: saturationCommand, transport: true },
   gas: { run: gasCommand },
   liquid: { run: liquidCommand },
-  air: { run: airCommand, model: true },
-  'air-mix': { run: airMixCommand, model: true },
-  coil: { run: coilCommand, model: true },
+  air: { run: airCommand },
+  'air-mix': { run: airMixCommand },
+  coil: { run: coilCommand },
   fluid: { run: fluidCommand },
 };
 const COMMAND_LIST = 'water, sat, gas, liquid, air, air-mix, coil or fluid';
@@ -36,9 +36,7 @@ function oneLine(s: string): string {
 
 function libraryMessage(e: HeatstateError, message: string, units: Units): string {
   const us = units === 'us' && e instanceof OutOfRangeError ? usWording(e) : '';
-  // the library names its own options; on the command line the humid-air model is an option
-  const option = message.includes("model: 'ideal'") ? ' (on the command line: --model ideal)' : '';
-  return `${message}${us}${option} [${e.code}]`;
+  return `${message}${us} [${e.code}]`;
 }
 
 /** Runs the command line; returns the exit code. Output and errors go to the given writers. */
@@ -57,7 +55,6 @@ export function run(argv: readonly string[], stdout: (s: string) => void, stderr
     const spec = Object.hasOwn(COMMANDS, command) ? COMMANDS[command]! : undefined;
     if (spec === undefined) throw new UsageError(`unknown command "${command}": use ${COMMAND_LIST} (see heatstate --help)`);
     if (args.transport && spec.transport !== true) throw new UsageError(`--transport applies to heatstate water and heatstate sat, not to ${command}`);
-    if (args.model !== undefined && spec.model !== true) throw new UsageError(`--model applies to heatstate air, air-mix and coil, not to ${command}`);
     const rows = spec.run(args);
     stdout(format(rows, args.units, args.json));
     return 0;
