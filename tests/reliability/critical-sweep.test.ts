@@ -162,7 +162,7 @@ describe('IF97 two-phase states just below the critical point', () => {
   });
 
   // known fault (reported): within 1e-13 of T_c, p_s(T) rounds to p_c itself, and the (p, h) and
-  // (p, s) flashes at p = p_c answer status 0 with a state whose h or s is off by up to 3e-5
+  // (p, s) flashes at p = p_c answer status 0 with a state whose h or s is off by about 1.5e-5
   it.fails('(T, x) and (p, x) within 1e-13 of the critical point, to its last ulp: likewise (known fault: flashes at p = p_c exactly return unconverged states)', () => {
     const fail = new Failures();
     twoPhaseBack([2 ** -53, 2 ** -52, 3 * 2 ** -52, 1e-15, 3e-15, 1e-14, 3e-14], 33, fail);
