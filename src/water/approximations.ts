@@ -10,7 +10,8 @@
  *
  * @module
  */
-import { OutOfRangeError } from '../errors.js';
+import { describeValue, readFlag, readOptions, readPair } from '../core/read.js';
+import { InvalidInputError, OutOfRangeError } from '../errors.js';
 import { heatCapacityAt } from '../incompressible/model.js';
 import { lookupIncompressible } from '../incompressible/catalogue.js';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
@@ -75,7 +76,12 @@ function incompressibleWater(): { c: number; v: number } {
   return { c: heatCapacityAt(model, 298.15), v: model.v };
 }
 
-function readLiquid(state: LiquidStateInput, name: string): { T: number; p: number } {
+function readLiquid(state: LiquidStateInput, name: string, fn: string): { T: number; p: number } {
+  if (typeof state !== 'object' || state === null || Array.isArray(state)) {
+    throw new InvalidInputError('input.invalid', name, `${fn}: ${name} must be a liquid state { T, p }, such as { T: '80 °C', p: '10 MPa' }; got ${describeValue(state)}`);
+  }
+  // exactly T and p: a third input (an h or an x) would be silently ignored otherwise
+  readPair(state, `${fn} ${name}`, [['T', 'p']]);
   const T = readQuantity(state.T, 'temperature', `${name}.T`);
   const p = readQuantity(state.p, 'pressure', `${name}.p`);
   if (!(T >= T_MIN && T < T_CRITICAL)) {
@@ -91,6 +97,12 @@ function readLiquid(state: LiquidStateInput, name: string): { T: number; p: numb
     );
   }
   return { T, p };
+}
+
+/** Reads the shortcut's name: one of {@link LIQUID_APPROXIMATIONS}, no default. */
+function readMethod(method: unknown): LiquidApproximation {
+  if (typeof method === 'string' && (LIQUID_APPROXIMATIONS as readonly string[]).includes(method)) return method as LiquidApproximation;
+  throw new InvalidInputError('input.invalid', 'method', `approximateLiquid: method must be one of ${LIQUID_APPROXIMATIONS.map((m) => `"${m}"`).join(', ')}; got ${describeValue(method)}`);
 }
 
 function estimate(method: LiquidApproximation, T: number, p: number): Values {
@@ -121,6 +133,8 @@ function relative(approx: number, truth: number): number | undefined {
  * @param method `'saturated-liquid'`, `'pressure-corrected'` or `'incompressible'`
  * @param options `{ compare: true }` adds `deviation` (shortcut − IF97, absolute and relative)
  * @throws {@link OutOfRangeError} for a vapour state or a state outside the liquid range
+ * @throws {@link InvalidInputError} a state that is not `{ T, p }`, an unknown method, an unknown
+ *   option or a `compare` that is not true or false
  * @example
  * ```ts
  * const a = approximateLiquid({ T: '80 °C', p: '10 MPa' }, 'pressure-corrected', { compare: true });
@@ -129,8 +143,10 @@ function relative(approx: number, truth: number): number | undefined {
  * approximateLiquid({ T: '200 °C', p: '1 bar' }, 'saturated-liquid');   // throws: the state is vapour
  * ```
  */
-export function approximateLiquid(state: LiquidStateInput, method: LiquidApproximation, options: { readonly compare?: boolean } = {}): ApproximateLiquid {
-  const { T, p } = readLiquid(state, 'state');
+export function approximateLiquid(state: LiquidStateInput, method: LiquidApproximation, options?: { readonly compare?: boolean }): ApproximateLiquid {
+  const { T, p } = readLiquid(state, 'state', 'approximateLiquid');
+  method = readMethod(method);
+  const compare = readFlag(readOptions<{ compare: boolean }>(options, 'options', ['compare']).compare, 'options.compare');
   const a = estimate(method, T, p);
   const result: ApproximateLiquid = {
     method,
@@ -139,7 +155,7 @@ export function approximateLiquid(state: LiquidStateInput, method: LiquidApproxi
     h: Quantity.fromSI(a.h, 'specificEnergy'),
     s: Quantity.fromSI(a.s, 'specificEntropy'),
   };
-  if (!options.compare) return result;
+  if (!compare) return result;
   const e = if97(T, p);
   return {
     ...result,
@@ -168,6 +184,7 @@ export interface ProcessEstimate {
  * For the incompressible model, Δu = c·ΔT and Δh = c·ΔT + v·Δp.
  *
  * @throws {@link OutOfRangeError} if either state is not liquid
+ * @throws {@link InvalidInputError} a state that is not `{ T, p }`
  * @example
  * ```ts
  * // a boiler feed pump: 40 °C, 10 kPa → 41 °C, 15 MPa
@@ -180,8 +197,8 @@ export function compareLiquidProcess(state1: LiquidStateInput, state2: LiquidSta
   readonly if97: { readonly deltaU: Quantity<'specificEnergy'>; readonly deltaH: Quantity<'specificEnergy'> };
   readonly methods: Readonly<Record<LiquidApproximation, ProcessEstimate>>;
 } {
-  const s1 = readLiquid(state1, 'state1');
-  const s2 = readLiquid(state2, 'state2');
+  const s1 = readLiquid(state1, 'state1', 'compareLiquidProcess');
+  const s2 = readLiquid(state2, 'state2', 'compareLiquidProcess');
   const e1 = if97(s1.T, s1.p);
   const e2 = if97(s2.T, s2.p);
   const du = e2.u - e1.u;
