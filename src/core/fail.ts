@@ -26,6 +26,7 @@ export interface FailureContext {
  * Throws the typed error for a failed core status. Never returns.
  * @example
  * ```ts
+ * const range = () => new OutOfRangeError({ quantity: 'h', value: 1, unit: 'J/kg', min: 0, max: 4e6, scope: 'the (h, s) flash' });
  * throwForStatus(Status.noConvergence, { what: 'the (h, s) flash', inputs: 'h = 1 J/kg, s = 2 J/(kg·K)', range });
  * // throws ConvergenceError: the (h, s) flash did not converge for h = 1 J/kg, s = 2 J/(kg·K)
  * ```

@@ -208,7 +208,7 @@ export function readOptions<T extends object>(input: unknown, parameter: string,
  * ```ts
  * readPair({ p: '1 bar', T: '300 K' }, 'water.state', [['T', 'p'], ['p', 'h']]);   //=> 'T,p'
  * readPair({ p: '1 bar', T: '300 K', h: '1 kJ/kg' }, 'water.state', [['T', 'p'], ['p', 'h']]);
- * // throws InvalidInputError: water.state got { T, p, h }: …
+ * // throws InvalidInputError: water.state got { p, T, h }: that is more inputs than a state needs
  * ```
  */
 export function readPair(input: unknown, fn: string, accepted: readonly (readonly string[])[]): string {

@@ -43,7 +43,7 @@ export class RootResult {
  * ```ts
  * const r = new RootResult();
  * bracketedNewton({ value: (x) => x * x - 2, slope: (x) => 2 * x }, 0, 2, 1, 1e-15, r);   //=> 0
- * r.x;   //=> 1.4142135623730951
+ * r.x;   //=> 1.41421356237310 (√2 to within the 1e-15 tolerance)
  * ```
  */
 export function bracketedNewton(f: ResidualWithSlope, lo: number, hi: number, x0: number, tolerance: number, out: RootResult): StatusCode {
@@ -97,7 +97,7 @@ function done(out: RootResult, x: number, iterations: number): StatusCode {
  * ```ts
  * const r = new RootResult();
  * brent({ value: (x) => Math.cos(x) - x }, 0, 1, 1e-15, r);   //=> 0
- * r.x;   //=> 0.7390851332151607
+ * r.x;   //=> 0.739085133215161
  * ```
  */
 export function brent(f: Residual, lo: number, hi: number, relTolerance: number, out: RootResult): StatusCode {

@@ -409,11 +409,11 @@ function applyOptions(built: Built, options: IdealGasOptions | undefined): Built
  * @example
  * ```ts
  * const air = idealGas('air');
- * air.cp('300 K').in('kJ/(kg·K)');     //=> 1.0061...
+ * air.cp('300 K').in('kJ/(kg·K)');     //=> 1.0049...
  * air.k('300 K');                      //=> 1.3998...
  * idealGas('nitrogen').deltaH('300 K', '1000 K').in('Btu/lbm');  //=> 328.5...
  * idealGas('CO2', { basis: 'molar' }).h('298.15 K').in('kJ/mol');  //=> -393.5... (formation)
- * idealGas('N2').cp('7000 K');   // throws OutOfRangeError: T = 7000 K is outside the data for N2 (200 to 6000 K)
+ * idealGas('N2').cp('7000 K');   // throws OutOfRangeError: T = 7000 K is above the upper limit of the data for N2 (6000 K); valid range 200 to 6000 K
  * ```
  */
 export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?: IdealGasOptions<'mass'>): IdealGas<'mass'>;
@@ -503,7 +503,7 @@ export function massToMoleFractions(composition: Composition, options?: { readon
  * @example
  * ```ts
  * const flue = mixture({ N2: 0.72, CO2: 0.09, H2O: 0.17, O2: 0.02 });
- * flue.cp('600 K').in('kJ/(kg·K)');   //=> 1.16...
+ * flue.cp('600 K').in('kJ/(kg·K)');   //=> 1.1768...
  * mixture({ N2: 0.8, O2: 0.3 });      // throws OutOfRangeError: fractions sum to 1.1
  * ```
  */

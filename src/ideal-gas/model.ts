@@ -168,8 +168,8 @@ export class ConstantCpModel implements IdealGasModel {
  * A constant-cp model frozen from another model at T0 (default 298.15 K): same h° and s° at T0.
  * @example
  * ```ts
- * const cold = constantCpFrom(idealGas('air').core);   // cp frozen at 298.15 K
- * cold.cpR(1000) === cold.cpR(300);                   //=> true
+ * const cold: IdealGasModel = constantCpFrom(idealGas('air').core);   // cp frozen at 298.15 K
+ * cold.cpR(1000) === cold.cpR(300);                                   //=> true
  * ```
  */
 export function constantCpFrom(model: IdealGasModel, T0 = REFERENCE_TEMPERATURE_K): ConstantCpModel {

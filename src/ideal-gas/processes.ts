@@ -257,7 +257,7 @@ export interface ConstantCpDeviation<B extends Basis = 'mass'> {
  * @example
  * ```ts
  * const d = constantCpDeviation(idealGas('air'), { machine: 'turbine', T1: '1400 K', p1: '1.6 MPa', p2: '100 kPa', efficiency: 0.9 });
- * d.workRelativeDifference;   //=> −0.046: cp frozen at 298 K under-predicts this hot expansion by 4.6 %
+ * d.workRelativeDifference;   //=> -0.046 (cp frozen at 298 K under-predicts this hot expansion by 4.6 %)
  * ```
  */
 export function constantCpDeviation<B extends Basis, const P extends MachineInput & { readonly machine: 'compressor' | 'turbine'; readonly referenceT?: LooseQuantity<'temperature'> }>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): ConstantCpDeviation<B> {

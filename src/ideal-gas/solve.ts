@@ -57,7 +57,7 @@ export class IdealGasSolver {
    * const n2 = idealGas('N2').core;
    * const solver = new IdealGasSolver(n2);
    * solver.temperatureAtEnthalpy(1000 * n2.hRT(1000), 900);   //=> 0
-   * solver.result.x;                                          //=> 1000 (K)
+   * solver.result.x;                                          //=> 1000.000000 (K)
    * ```
    */
   temperatureAtEnthalpy(hOverR: number, guess: number): StatusCode {

@@ -254,7 +254,9 @@ export class GasTransportResult {
  * @example
  * ```ts
  * const out = new GasTransportResult();
- * gasTransport(gasTransportModel('air')!, 300, out);    //=> 0; out.mu = 1.8351e-5 Pa·s, out.Pr = 0.690
+ * gasTransport(gasTransportModel('air')!, 300, out);    //=> 0 (Status.ok)
+ * out.mu;                                               //=> 1.8351e-5 (Pa·s)
+ * out.Pr;                                               //=> 0.690
  * gasTransport(gasTransportModel('He')!, 1500, out);    //=> 1 (Status.outOfRange: above 100 ε/k = 1022 K)
  * ```
  */

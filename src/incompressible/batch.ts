@@ -29,9 +29,9 @@ class Point {
  * @throws {@link InvalidInputError} only for a malformed call; never for a bad element
  * @example
  * ```ts
- * const r = incompressibleBatch(incompressible('copper'), { T: Float64Array.of(300, 900) }, ['c']);
- * r.c[0];       //=> 385 (J/(kg·K))
- * r.status;     //=> Uint8Array [0, 1]  (900 K is outside the data)
+ * const r = incompressibleBatch(incompressible('copper'), { T: Float64Array.of(300, 1400) }, ['c']);
+ * r.c[0];       //=> 384.95 (J/(kg·K))
+ * r.status;     //=> Uint8Array [0, 1]  (1400 K is above copper's data, which end at its melting point, 1358 K)
  * ```
  */
 export function incompressibleBatch<P extends IncompressibleBatchProperty>(

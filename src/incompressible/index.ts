@@ -29,7 +29,7 @@ export type { IncompressibleBatchProperty } from './batch.js';
 /**
  * An incompressible substance from the catalogue (by name or alias) or from your own definition.
  *
- * The model: cp = cv = c(T), density constant. Δu = ∫c dT; Δh = Δu + v·Δp; Δs = ∫c/T dT.
+ * The model: cp = cv = c(T), density constant or ρ(T). Δu = ∫c dT; Δh = Δu + v̄·Δp; Δs = ∫c/T dT.
  * For solids, v·Δp is tiny and Δh ≈ Δu. For a liquid pumped at constant temperature, Δu = 0
  * and Δh = v·Δp. Each catalogue entry carries its source and valid temperature range; values
  * outside the range throw rather than extrapolate.
@@ -41,10 +41,10 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * @example
  * ```ts
  * const copper = incompressible('copper');
- * copper.deltaU('20 °C', '120 °C').in('kJ/kg');   //=> 38.9... (c from 385 to 394 J/(kg·K))
+ * copper.deltaU('20 °C', '120 °C').in('kJ/kg');   //=> 39.14... (c from 383.6 to 397.7 J/(kg·K))
  * const water = incompressible('water');
- * water.deltaH({ T: '20 °C', p: '1 atm' }, { T: '20 °C', p: '500 psia' }).in('kJ/kg'); //=> 3.356...
- * copper.c('900 K');   // throws OutOfRangeError: T = 900 K is above the upper limit of the data for copper (800 K)
+ * water.deltaH({ T: '20 °C', p: '1 atm' }, { T: '20 °C', p: '500 psia' }).in('kJ/kg'); //=> 3.352... (v(20 °C)·Δp)
+ * copper.c('1400 K');  // throws OutOfRangeError: T = 1400 K is above the upper limit of the data for copper (1358 K)
  * ```
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {

@@ -74,7 +74,7 @@ export function heatCapacityAt(m: IncompressibleModel, T: number): number {
  * Δu = ∫ c dT from T1 to T2, in J/kg.
  * @example
  * ```ts
- * internalEnergyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 251.1e3 (J/kg)
+ * internalEnergyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 251.0e3 (J/kg)
  * ```
  */
 export function internalEnergyChange(m: IncompressibleModel, T1: number, T2: number): number {
@@ -85,7 +85,7 @@ export function internalEnergyChange(m: IncompressibleModel, T1: number, T2: num
  * Δs = ∫ c/T dT from T1 to T2, in J/(kg·K).
  * @example
  * ```ts
- * entropyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 779 (J/(kg·K))
+ * entropyChange(lookupIncompressible('water').model, 293.15, 353.15);   //=> 778.9 (J/(kg·K))
  * ```
  */
 export function entropyChange(m: IncompressibleModel, T1: number, T2: number): number {

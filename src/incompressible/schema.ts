@@ -87,7 +87,7 @@ export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSc
  * @example
  * ```ts
  * compileDefinition({ name: 'brine', state: 'liquid', c: '3.6 kJ/(kg·K)', density: '1180 kg/m³', T: { min: '-20 °C', max: '40 °C' } }).model.v;   //=> 0.000847 (m³/kg)
- * compileDefinition({ name: 'x', state: 'gas' });   // throws DefinitionError naming each bad field
+ * compileDefinition({ name: 'x', state: 'gas' });   // throws DefinitionError: invalid incompressible substance "x": state: … c: … density: … T: …
  * ```
  */
 export function compileDefinition(input: unknown): CompiledSubstance {

@@ -153,6 +153,8 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
    *   missing; `Status.invalidInput` for a NaN input, an unknown column or method
    * @example
    * ```ts
+   * const g = defineGrid({ kind: 'grid', name: 'test grid', source: 'test', x: { name: 'T', unit: 'K', values: [300, 400] }, y: { name: 'p', unit: 'MPa', values: [1, 2] },
+   *   columns: { h: { unit: 'kJ/kg', values: [[301, 401], [302, 402]] } } } as const);
    * const out = new GridValue();
    * g.valueAt('h', 350, 1.5e6, out);   //=> 0 (Status.ok)
    * out.value;                         //=> 351500 (J/kg)
@@ -201,8 +203,11 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
    *   dimension; {@link InvalidInputError} an unknown column, a malformed point or bad options
    * @example
    * ```ts
+   * // no h at (500 K, 2 MPa): that cell is empty (null)
+   * const g = defineGrid({ kind: 'grid', name: 'test grid', source: 'test', x: { name: 'T', unit: 'K', values: [300, 400, 500] }, y: { name: 'p', unit: 'MPa', values: [1, 2] },
+   *   columns: { h: { unit: 'kJ/kg', values: [[301, 401, 501], [302, 402, null]] } } } as const);
    * g.lookup('h', { T: '350 K', p: '1.5 MPa' }).value.in('kJ/kg');   //=> 351.5
-   * g.lookup('h', { T: '450 K', p: '1.5 MPa' });   // throws OutOfRangeError: grid "test grid" has no h data at p = 1.5 MPa …
+   * g.lookup('h', { T: '450 K', p: '1.5 MPa' });   // throws OutOfRangeError: grid "test grid" has no h data at p = 1.5 MPa … its h data cover T = 300 K to 400 K
    * ```
    */
   lookup(column: C, at: Readonly<Record<X | Y, Quantity | string>>, options?: GridLookupOptions): LookupResult {
@@ -260,6 +265,8 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
    *   reach the value along that line (its bounds: the column's smallest and largest value on the line)
    * @example
    * ```ts
+   * const g = defineGrid({ kind: 'grid', name: 'test grid', source: 'test', x: { name: 'T', unit: 'K', values: [300, 400] }, y: { name: 'p', unit: 'MPa', values: [1, 2] },
+   *   columns: { h: { unit: 'kJ/kg', values: [[301, 401], [302, 402]] } } } as const);
    * g.inverse('h', '351.5 kJ/kg', { p: '1.5 MPa' }).value.in('K');   //=> 350
    * ```
    */

@@ -42,7 +42,9 @@ function readText(value: unknown, parameter: string): string | undefined {
  * @throws {@link DefinitionError} naming the row and column of each problem
  * @example
  * ```ts
- * tableFromJSON(readFileSync('pump-curve.json', 'utf8')).lookup('head', '120 m³/h');
+ * // the text would usually come from a file: readFileSync('pump-curve.json', 'utf8')
+ * const text = '{ "name": "pump curve", "source": "vendor sheet", "key": "Q", "columns": { "Q": { "unit": "m³/h", "values": [100, 150] }, "head": { "unit": "m", "values": [52, 44] } } }';
+ * tableFromJSON(text).lookup('head', '120 m³/h').value.in('m');   //=> 48.8
  * ```
  */
 export function tableFromJSON(json: string | object): PropertyTable {
@@ -55,7 +57,13 @@ export function tableFromJSON(json: string | object): PropertyTable {
  * @throws {@link DefinitionError} naming the axis, row and cell of each problem
  * @example
  * ```ts
- * gridFromJSON(readFileSync('superheated.json', 'utf8')).lookup('h', { p: '1 MPa', T: '300 °C' });
+ * // four IF97 enthalpies of superheated steam, as a file would hold them
+ * const grid = gridFromJSON({
+ *   kind: 'grid', name: 'superheated steam', source: 'IAPWS-IF97 via heatstate',
+ *   x: { name: 'T', unit: '°C', values: [250, 350] }, y: { name: 'p', unit: 'MPa', values: [0.5, 1.5] },
+ *   columns: { h: { unit: 'kJ/kg', values: [[2961.1, 3168.1], [2924.0, 3148.0]] } },
+ * });
+ * grid.lookup('h', { p: '1 MPa', T: '300 °C' }).value.in('kJ/kg');   //=> 3050.3 (bilinear; IF97 gives 3051.7)
  * ```
  */
 export function gridFromJSON(json: string | object): PropertyGrid {

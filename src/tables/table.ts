@@ -170,6 +170,8 @@ export class PropertyTable<C extends string = string> {
    *   with values ≤ 0 or log-key on keys ≤ 0
    * @example
    * ```ts
+   * const oil = defineTable({ name: 'thermal oil data sheet', source: 'vendor sheet rev. B', key: 'T',
+   *   columns: { T: { unit: '°C', values: [20, 80, 140] }, cp: { unit: 'kJ/(kg·K)', values: [1.88, 2.09, 2.3] } } } as const);
    * const out = new TableValue();
    * oil.valueAt('cp', 353.15, out);   //=> 0 (Status.ok)
    * out.value;                        //=> 2090 (J/(kg·K), SI)
@@ -193,6 +195,8 @@ export class PropertyTable<C extends string = string> {
    *   column, a key that is not a quantity, bad options, a log method on data that are not positive
    * @example
    * ```ts
+   * const oil = defineTable({ name: 'thermal oil data sheet', source: 'vendor sheet rev. B', key: 'T',
+   *   columns: { T: { unit: '°C', values: [20, 80, 140] }, cp: { unit: 'kJ/(kg·K)', values: [1.88, 2.09, 2.3] } } } as const);
    * oil.lookup('cp', '80 °C').value.in('kJ/(kg·K)');   //=> 2.09
    * oil.lookup('cp', '200 °C');   // throws OutOfRangeError: T = 200 °C (473.15 K) is above the upper limit of table "thermal oil data sheet" (140 °C (413.15 K)); …
    * ```
@@ -240,8 +244,10 @@ export class PropertyTable<C extends string = string> {
    * @throws {@link OutOfRangeError} when no pair of rows brackets the value, naming the column's range
    * @example
    * ```ts
+   * const oil = defineTable({ name: 'thermal oil data sheet', source: 'vendor sheet rev. B', key: 'T',
+   *   columns: { T: { unit: '°C', values: [20, 80, 140] }, rho: { unit: 'kg/m³', values: [870, 832.5, 795] } } } as const);
    * oil.inverse('rho', '832.5 kg/m³').value.in('°C');   //=> 80
-   * oil.inverse('rho', '900 kg/m³');   // throws OutOfRangeError: rho = 900 kg/m³ is not reached in table "thermal oil data sheet" …
+   * oil.inverse('rho', '900 kg/m³');   // throws OutOfRangeError: rho = 900 kg/m³ is not reached in table "thermal oil data sheet": the column runs from 795 kg/m³ to 870 kg/m³
    * ```
    */
   inverse(column: C, value: Quantity | string, options?: { readonly method?: InterpolationMethod }): InverseResult<C> {

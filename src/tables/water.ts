@@ -46,7 +46,7 @@ function grid(id: string, data: unknown): PropertyGrid<GridColumn, 'T', 'p'> {
  * ```ts
  * waterTables.saturationByP().lookup('hfg', '1 atm').value.in('kJ/kg');     //=> 2256.5 (between rows)
  * waterTables.superheated().lookup('h', { p: '1 MPa', T: '300 °C' }).value.in('kJ/kg');   //=> 3051.7
- * waterTables.us.superheated().inverse('h', '1200 Btu/lbm', { p: '100 psia' }).value.in('°F');
+ * waterTables.us.superheated().inverse('h', '1250 Btu/lbm', { p: '100 psia' }).value.in('°F');   //=> 442.6 (IF97: 442.5)
  * ```
  */
 export const waterTables = {

@@ -757,6 +757,7 @@ export function temperatureDifference<U extends DifferenceUnit | (string & {})>(
  * @example
  * ```ts
  * readQuantity('14.7 psig', 'pressure', 'p');   //=> 202677.9322095749 (Pa)
+ * // @ts-expect-error: unit text of a temperature where a pressure belongs does not compile
  * readQuantity('300 K', 'pressure', 'p');      // throws DimensionError: p must be a pressure
  * ```
  */

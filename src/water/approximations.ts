@@ -139,8 +139,8 @@ function relative(approx: number, truth: number): number | undefined {
  * ```ts
  * const a = approximateLiquid({ T: '80 °C', p: '10 MPa' }, 'pressure-corrected', { compare: true });
  * a.h.in('kJ/kg');              //=> 345.19 (IF97: 342.87)
- * a.deviation!.h.relative;      //=> 0.0068 (vs −0.023 for 'saturated-liquid')
- * approximateLiquid({ T: '200 °C', p: '1 bar' }, 'saturated-liquid');   // throws: the state is vapour
+ * a.deviation!.h.relative;      //=> 0.0068 (vs -0.023 for 'saturated-liquid')
+ * approximateLiquid({ T: '200 °C', p: '1 bar' }, 'saturated-liquid');   // throws OutOfRangeError: … is vapour (p is below the saturation pressure
  * ```
  */
 export function approximateLiquid(state: LiquidStateInput, method: LiquidApproximation, options?: { readonly compare?: boolean }): ApproximateLiquid {
@@ -190,7 +190,7 @@ export interface ProcessEstimate {
  * // a boiler feed pump: 40 °C, 10 kPa → 41 °C, 15 MPa
  * const r = compareLiquidProcess({ T: '40 °C', p: '10 kPa' }, { T: '41 °C', p: '15 MPa' });
  * r.if97.deltaH.in('kJ/kg');                          //=> 17.38
- * r.methods['saturated-liquid'].deltaHRelativeError;  //=> −0.76: it ignores the pump work
+ * r.methods['saturated-liquid'].deltaHRelativeError;  //=> -0.76 (it ignores the pump work)
  * ```
  */
 export function compareLiquidProcess(state1: LiquidStateInput, state2: LiquidStateInput): {

@@ -262,11 +262,11 @@ function enthalpyRange(): [number, number] {
  * const s = water.state({ p: '10 MPa', T: '500 °C' });
  * s.h.in('kJ/kg');          //=> 3375.06...
  * s.phase;                  //=> 'vapor'
- * s.superheat?.in('K');     //=> 188.84...
- * water.state({ p: '1 atm', h: '1500 kJ/kg' }).x;     //=> 0.4792... (two-phase)
+ * s.superheat?.in('K');     //=> 189.00... (T_sat(10 MPa) = 311.00 °C)
+ * water.state({ p: '1 atm', h: '1500 kJ/kg' }).x;     //=> 0.47906 (two-phase)
  * water.state({ p: '150 psia', T: '400 °F' }).h.in('Btu/lbm');
  * water.state({ T: '4500 °F', p: '150 psia' });
- * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 region 5 (3631.67 °F (2273.15 K)) …
+ * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 region 5 (3632 °F (2273.15 K))
  * ```
  */
 export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>): WaterStateResult {
@@ -432,7 +432,7 @@ export function waterSaturation<const P extends { readonly T: LooseQuantity<'tem
  * Δh = h(state2) − h(state1) between two states given by any {@link WaterPair}.
  * @example
  * ```ts
- * water.deltaH({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/kg');   //=> -1030.2...
+ * water.deltaH({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/kg');   //=> -1030.37...
  * ```
  */
 export function waterDeltaH<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEnergy'> {

@@ -142,7 +142,7 @@ const SURFACE: Bounds = { min: SURFACE_TENSION_T_MIN, max: SURFACE_TENSION_T_MAX
  * @example
  * ```ts
  * water.surfaceTension({ T: '25 °C' }).in('mN/m');   //=> 71.97... (R1-76 Table 1: 71.97)
- * water.surfaceTension({ T: '700 K' });              // throws OutOfRangeError: above the critical point
+ * water.surfaceTension({ T: '700 K' });              // throws OutOfRangeError: T = 700 K is above the upper limit of IAPWS R1-76(2014) … (647.096 K)
  * ```
  */
 export function waterSurfaceTension<const P extends { readonly T: LooseQuantity<'temperature'> }>(at: P & CheckedInputs<P, WaterInputDimensions>): Quantity<'surfaceTension'> {

@@ -26,7 +26,7 @@ export function region1TemperaturePH(p: number, h: number): number {
  * B2bc: pressure on the 2b/2c boundary at h (J/kg), in Pa (Eq. 20).
  * @example
  * ```ts
- * b2bcPressure(3516.004323e3);   //=> 100e6 (Pa)
+ * b2bcPressure(3516.004323e3);   //=> 100.00000e6 (Pa; IF97 Eq. 20's check point, 100 MPa)
  * ```
  */
 export function b2bcPressure(h: number): number {

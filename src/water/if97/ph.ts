@@ -13,7 +13,8 @@ import type { WaterState } from './water-state.js';
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromPH(1e6, 3000e3, out);   //=> 0; out.T = 549.1 K
+ * stateFromPH(1e6, 3000e3, out);   //=> 0 (Status.ok)
+ * out.T;                           //=> 549.1 (K)
  * stateFromPH(1e6, 9e6, out);      //=> 1 (Status.outOfRange)
  * ```
  */

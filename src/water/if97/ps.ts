@@ -13,7 +13,8 @@ import type { WaterState } from './water-state.js';
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromPS(10e6, 6.6e3, out);   //=> 0; out.T ≈ 773 K
+ * stateFromPS(10e6, 6.6e3, out);   //=> 0 (Status.ok)
+ * out.T;                           //=> 773.35 (K)
  * ```
  */
 export function stateFromPS(p: number, s: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {

@@ -13,7 +13,8 @@ import type { WaterState } from './water-state.js';
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromTX(373.15, 0, out);   //=> 0; out.h = 419.1e3 J/kg
+ * stateFromTX(373.15, 0, out);   //=> 0 (Status.ok)
+ * out.h;                         //=> 419.1e3 (J/kg)
  * ```
  */
 export function stateFromTX(T: number, x: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {
@@ -28,7 +29,9 @@ export function stateFromTX(T: number, x: number, out: WaterState, ctx: SolverCo
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromPX(1e6, 0.9, out);   //=> 0; out.region = 4, out.cp is NaN (not defined)
+ * stateFromPX(1e6, 0.9, out);   //=> 0 (Status.ok)
+ * out.region;                   //=> 4
+ * out.cp;                       //=> NaN (not defined inside the dome)
  * ```
  */
 export function stateFromPX(p: number, x: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {

@@ -26,7 +26,8 @@ export const P_SAT_13 = saturationPressure(T_13);
  * @example
  * ```ts
  * const liquid = new WaterProperties(), vapor = new WaterProperties();
- * saturationAtT(373.15, liquid, vapor);   //=> 0 (Status.ok); liquid.p = 101418 Pa
+ * saturationAtT(373.15, liquid, vapor);   //=> 0 (Status.ok)
+ * liquid.p;                               //=> 101417.98 (Pa)
  * ```
  */
 export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {
@@ -71,7 +72,8 @@ export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterPr
  * @example
  * ```ts
  * const liquid = new WaterProperties(), vapor = new WaterProperties();
- * saturationAtP(101325, liquid, vapor);   //=> 0 (Status.ok); vapor.h - liquid.h is h_fg
+ * saturationAtP(101325, liquid, vapor);   //=> 0 (Status.ok)
+ * vapor.h - liquid.h;                     //=> 2256.54e3 (J/kg: h_fg at 1 atm)
  * ```
  */
 export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {

@@ -22,7 +22,8 @@ import type { WaterState } from './water-state.js';
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromTV(773.15, 0.0328, out);   //=> 0; out.p ≈ 10 MPa
+ * stateFromTV(773.15, 0.0328, out);   //=> 0 (Status.ok)
+ * out.p;                               //=> 10.004e6 (Pa)
  * ```
  */
 export function stateFromTV(T: number, v: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {

@@ -117,7 +117,8 @@ function criticalPart(T: number, rho: number, t: number, dr: number, d: Critical
  * ```ts
  * const out = new ConductivityResult();
  * const none = new CriticalEnhancementInputs();   // not read without the enhancement
- * thermalConductivity(298.15, 998, false, none, out);   //=> 0; out.lambda = 0.607712868 W/(m·K) (R15-11 Table 4)
+ * thermalConductivity(298.15, 998, false, none, out);   //=> 0 (Status.ok)
+ * out.lambda;                                           //=> 0.607712868 (W/(m·K); R15-11 Table 4)
  * thermalConductivity(298.15, -1, false, none, out);    //=> 3 (Status.invalidInput: negative density)
  * ```
  */

@@ -104,7 +104,9 @@ function solveGibbsDensity(region: number, T: number, rho: number, pLo: number, 
  * @example
  * ```ts
  * const work = new If97InputsWork();
- * if97StateAtDensity(647.35, 322, work);   //=> 0; work.region = 3, work.state.p = 22.132e6 Pa
+ * if97StateAtDensity(647.35, 322, work);   //=> 0 (Status.ok)
+ * work.region;                             //=> 3
+ * work.state.p;                            //=> 22.132e6 (Pa)
  * if97StateAtDensity(373.15, 10, work);    //=> 1 (Status.outOfRange: inside the dome at 373.15 K)
  * ```
  */
@@ -169,7 +171,8 @@ export function if97StateAtDensity(T: number, rho: number, work: If97InputsWork)
  * @example
  * ```ts
  * const d = new CriticalEnhancementInputs();
- * referenceDensityDerivative(322, d, new If97InputsWork());   //=> 0; d.dRhoDpReference = 2.7927e-6 kg/(m³·Pa)
+ * referenceDensityDerivative(322, d, new If97InputsWork());   //=> 0 (Status.ok)
+ * d.dRhoDpReference;                                          //=> 2.7927e-6 (kg/(m³·Pa))
  * referenceDensityDerivative(750, d, new If97InputsWork());   //=> 1 (Status.outOfRange)
  * ```
  */
@@ -199,7 +202,8 @@ export function referenceDensityDerivative(rho: number, out: CriticalEnhancement
  * ```ts
  * const st = new WaterProperties(), d = new CriticalEnhancementInputs();
  * region3(322, 647.35, st);
- * enhancementInputsFromState(st, d, new If97InputsWork());   //=> 0; d.dRhoDp = 6.9265e-3 kg/(m³·Pa)
+ * enhancementInputsFromState(st, d, new If97InputsWork());   //=> 0 (Status.ok)
+ * d.dRhoDp;                                                  //=> 6.9265e-3 (kg/(m³·Pa))
  * ```
  */
 export function enhancementInputsFromState(state: WaterProperties, out: CriticalEnhancementInputs, work: If97InputsWork): StatusCode {
@@ -219,7 +223,9 @@ export function enhancementInputsFromState(state: WaterProperties, out: Critical
  * ```ts
  * const d = new CriticalEnhancementInputs();
  * const work = new If97InputsWork();
- * if97EnhancementInputs(647.35, 322, d, work);   //=> 0; d.cp = 3.1209e6 J/(kg·K), work.state.p = 22.132e6 Pa
+ * if97EnhancementInputs(647.35, 322, d, work);   //=> 0 (Status.ok)
+ * d.cp;                                          //=> 3.1209e6 (J/(kg·K))
+ * work.state.p;                                  //=> 22.132e6 (Pa)
  * ```
  */
 export function if97EnhancementInputs(T: number, rho: number, out: CriticalEnhancementInputs, work: If97InputsWork): StatusCode {

@@ -32,8 +32,10 @@ export class SurfaceTensionResult {
  * @example
  * ```ts
  * const out = new SurfaceTensionResult();
- * surfaceTension(373.15, out);   //=> 0; out.sigma = 0.0589119 N/m (58.91 mN/m, R1-76 Table 1)
- * surfaceTension(647.096, out);  //=> 0; out.sigma = 0 (critical point)
+ * surfaceTension(373.15, out);   //=> 0 (Status.ok)
+ * out.sigma;                     //=> 0.0589119 (N/m: 58.91 mN/m, R1-76 Table 1)
+ * surfaceTension(647.096, out);  //=> 0 (Status.ok)
+ * out.sigma;                     //=> 0 (at the critical point)
  * surfaceTension(273.15, out);   //=> 1 (Status.outOfRange: below the triple point)
  * ```
  */
