@@ -4,7 +4,7 @@
  *
  * @module
  */
-import { HeatstateError } from '../errors.js';
+import { HeatstateError, InvalidInputError } from '../errors.js';
 
 /** The outcome of a call made through {@link safe}. */
 export type SafeResult<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly error: HeatstateError };
@@ -25,6 +25,7 @@ export type SafeResult<T> = { readonly ok: true; readonly value: T } | { readonl
  * ```
  */
 export function safe<A extends unknown[], R>(fn: (...args: A) => R): (...args: A) => SafeResult<R> {
+  if (typeof fn !== 'function') throw new InvalidInputError('input.invalid', 'fn', `safe takes a function to wrap, such as water.state; got ${fn === null ? 'null' : typeof fn}`);
   return (...args: A): SafeResult<R> => {
     try {
       return { ok: true, value: fn(...args) };

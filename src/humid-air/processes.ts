@@ -278,8 +278,9 @@ export interface CoolingCoilInputLoose {
  *   water or a higher dry-bulb than the entering air, BF outside [0, 1), condensate outside 0–100 °C
  * @example
  * ```ts
- * const coil = humidAir.coolingCoil({ inlet: mixed.leaving, flow: '4 kg/s', ADP: '10 °C', bypassFactor: 0.15 });
- * coil.heat.in('kW');   //=> -81.83... (negative: heat removed; the coil duty is about 82 kW)
+ * const inlet = humidAir.state({ T: '30 °C', RH: 0.5 });
+ * const coil = humidAir.coolingCoil({ inlet, flow: '4 kg/s', ADP: '10 °C', bypassFactor: 0.15 });
+ * coil.heat.in('kW');   //=> -117.95 (negative: heat removed; the coil duty is about 118 kW)
  * ```
  */
 export function coolingCoil<const I extends CoolingCoilInputLoose>(input: I & Checked<I, 'flow' | 'ADP' | 'T2' | 'RH2' | 'Tcondensate', 'inlet' | 'bypassFactor'>): ProcessResult {

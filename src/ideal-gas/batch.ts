@@ -7,6 +7,8 @@
 import { MOLAR_GAS_CONSTANT } from '../chem/constants.js';
 import { runBatch, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
 import { Status, type StatusCode } from '../core/status.js';
+import { describeValue } from '../core/read.js';
+import { InvalidInputError } from '../errors.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
 import type { Basis, IdealGas } from './gas.js';
 
@@ -80,5 +82,9 @@ export function idealGasBatch<P extends IdealGasBatchProperty, B extends Basis>(
   props: readonly P[],
   out?: BatchOut<P>,
 ): BatchResult<P> {
+  const g = gas as Partial<IdealGas<B>> | null;
+  if (typeof g !== 'object' || g === null || typeof g.core !== 'object' || typeof g.bounds !== 'object') {
+    throw new InvalidInputError('input.invalid', 'gas', `idealGasBatch takes a gas from idealGas() or mixture() as its first argument; got ${describeValue(gas)}`);
+  }
   return runBatch(model(gas), inputs, props, out) as BatchResult<P>;
 }

@@ -6,10 +6,10 @@
 import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, STANDARD_STATE_PRESSURE_PA } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
 import { throwForStatus } from '../core/fail.js';
-import { ABSOLUTE_TEMPERATURE, rangeError, readAbsolutePressure, readChoice, readFlag, readFractions, readInput, readOptions, readPair, readTemperature, type Bounds } from '../core/read.js';
+import { ABSOLUTE_TEMPERATURE, describeValue, rangeError, readAbsolutePressure, readChoice, readFlag, readFractions, readInput, readOptions, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
-import { DefinitionError, HeatstateError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
+import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
 import { Quantity, readQuantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import { IdealGasSolver } from './solve.js';
@@ -443,7 +443,13 @@ function readGasOptions(options: unknown, parameter: string, known: readonly str
     extrapolate: readFlag(o.extrapolate, `${parameter}.extrapolate`),
     fractions: readChoice<'mole' | 'mass'>(o.fractions, `${parameter}.fractions`, ['mole', 'mass'], 'mole'),
     normalize: readFlag(o.normalize, `${parameter}.normalize`),
+    ...(o.name === undefined ? {} : { name: readName(o.name, `${parameter}.name`) }),
   };
+}
+
+function readName(name: unknown, parameter: string): string {
+  if (typeof name === 'string' && name.trim() !== '') return name;
+  throw new InvalidInputError('input.invalid', parameter, `${parameter} must be a non-empty string; got ${describeValue(name)}`);
 }
 
 /** Composition: species name or formula → fraction. */
@@ -471,7 +477,8 @@ function checkFractions(composition: Composition, normalize: boolean): [string[]
  * ```
  */
 export function moleToMassFractions(composition: Composition, options?: { readonly normalize?: boolean }): Record<string, number> {
-  const [names, y] = checkFractions(composition, options?.normalize === true);
+  const o = readOptions<{ normalize?: boolean }>(options, 'options', ['normalize']);
+  const [names, y] = checkFractions(composition, readFlag(o.normalize, 'options.normalize'));
   const M = names.map((n) => speciesModel(n).model.M);
   const total = y.reduce((acc, yi, i) => acc + yi * M[i]!, 0);
   return Object.fromEntries(names.map((n, i) => [n, (y[i]! * M[i]!) / total]));
@@ -485,7 +492,8 @@ export function moleToMassFractions(composition: Composition, options?: { readon
  * ```
  */
 export function massToMoleFractions(composition: Composition, options?: { readonly normalize?: boolean }): Record<string, number> {
-  const [names, w] = checkFractions(composition, options?.normalize === true);
+  const o = readOptions<{ normalize?: boolean }>(options, 'options', ['normalize']);
+  const [names, w] = checkFractions(composition, readFlag(o.normalize, 'options.normalize'));
   const M = names.map((n) => speciesModel(n).model.M);
   const total = w.reduce((acc, wi, i) => acc + wi / M[i]!, 0);
   return Object.fromEntries(names.map((n, i) => [n, w[i]! / M[i]! / total]));

@@ -10,7 +10,7 @@
 import { MOLAR_GAS_CONSTANT } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
 import { throwForStatus } from '../core/fail.js';
-import { rangeError, readAbsolutePressure, readNumber, readTemperature } from '../core/read.js';
+import { describeValue, rangeError, readAbsolutePressure, readChoice, readNumber, readOptions, readTemperature } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
 import { Status, type StatusCode } from '../core/status.js';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
@@ -65,15 +65,24 @@ function energyDimension<B extends Basis>(gas: IdealGas<B>): EnergyDimension<B> 
   return (gas.basis === 'molar' ? 'molarEnergy' : 'specificEnergy') as EnergyDimension<B>;
 }
 
+/** Checks that `gas` is a gas object from idealGas() or mixture(). */
+function checkGas(gas: unknown, fn: string): void {
+  const g = gas as Partial<IdealGas<Basis>> | null;
+  if (typeof g !== 'object' || g === null || typeof g.core !== 'object' || g.core === null || typeof g.solver !== 'object' || typeof g.bounds !== 'object') {
+    throw new InvalidInputError('input.invalid', 'gas', `${fn} takes a gas from idealGas() or mixture() as its first argument; got ${describeValue(gas)}`);
+  }
+}
+
 /** An isentropic efficiency, 0 < η ≤ 1 (default 1). */
 function efficiencyOf(efficiency: unknown): number {
   return efficiency === undefined ? 1 : readNumber(efficiency, 'efficiency', { min: 0, max: 1, scope: 'an isentropic efficiency (0 < η ≤ 1)', minExclusive: true });
 }
 
 /** The inlet of a process: T1 in the gas's range, p1 and p2 absolute, read once in the caller's units. */
-function inlet(gas: IdealGas<Basis>, input: unknown, fn: string): { T1: number; p1: number; p2: number; units: CallUnits } {
-  if (typeof input !== 'object' || input === null) throw new InvalidInputError('input.invalid', 'input', `${fn} takes { T1, p1, p2 } (and options); got ${String(input)}`);
-  const a = input as Record<string, unknown>;
+function inlet(gas: IdealGas<Basis>, input: unknown, fn: string, keys: readonly string[] = ['T1', 'p1', 'p2', 'efficiency']): { T1: number; p1: number; p2: number; units: CallUnits } {
+  checkGas(gas, fn);
+  const a = readOptions<Record<string, unknown>>(input, 'input', keys);
+  if (input === undefined) throw new InvalidInputError('input.invalid', 'input', `${fn} takes { ${keys.join(', ')} }; got undefined`);
   const units = new CallUnits();
   const T1 = readTemperature(a.T1 as QuantityLike<'temperature'>, 'T1', gas.bounds, units);
   const p1 = readAbsolutePressure(a.p1 as QuantityLike<'pressure'>, 'p1', undefined, units);
@@ -106,7 +115,7 @@ export function isentropicEnd<B extends Basis, const P extends ProcessInlet>(gas
   readonly deltaH: Quantity<EnergyDimension<B>>;
   readonly deltaU: Quantity<EnergyDimension<B>>;
 } {
-  const { T1, p1, p2, units } = inlet(gas, input, 'isentropicEnd');
+  const { T1, p1, p2, units } = inlet(gas, input, 'isentropicEnd', ['T1', 'p1', 'p2']);
   const core = gas.core;
   const status = gas.solver.isentropicTemperature(T1, p1, p2);
   if (status !== Status.ok) failEnd(gas, status, 'isentropic end temperature', units, isentropicTemperatureConstantCp(core.cpR(T1) / (core.cpR(T1) - 1), T1, p1, p2));
@@ -204,7 +213,7 @@ export interface PolytropicResult<B extends Basis = 'mass'> {
  * ```
  */
 export function polytropic<B extends Basis, const P extends ProcessInlet & { readonly n: number }>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): PolytropicResult<B> {
-  const { T1, p1, p2, units } = inlet(gas, input, 'polytropic');
+  const { T1, p1, p2, units } = inlet(gas, input, 'polytropic', ['T1', 'p1', 'p2', 'n']);
   const n = readNumber(input.n, 'n', { min: 0, max: Infinity, scope: 'a polytropic exponent (n ≥ 0; n → ∞, isochoric, is not accepted)' });
   if (n === 0 && p1 !== p2) throw new InvalidInputError('input.invalid', 'p2', 'n = 0 is a constant-pressure process: p2 must equal p1 (give T2 to another function)');
   const T2 = n === 0 ? T1 : T1 * (p2 / p1) ** ((n - 1) / n);
@@ -225,6 +234,10 @@ export function polytropic<B extends Basis, const P extends ProcessInlet & { rea
     technicalWork: resultQuantity(scale * wt, en, 'technicalWork'),
     heat: resultQuantity(scale * (du + wb), en, 'heat'),
   };
+}
+
+function missingMachine(): never {
+  throw new InvalidInputError('input.invalid', 'machine', `constantCpDeviation needs machine: "compressor" or "turbine"`);
 }
 
 /** Constant-cp machine by the closed forms, for {@link constantCpDeviation}. */
@@ -261,11 +274,13 @@ export interface ConstantCpDeviation<B extends Basis = 'mass'> {
  * ```
  */
 export function constantCpDeviation<B extends Basis, const P extends MachineInput & { readonly machine: 'compressor' | 'turbine'; readonly referenceT?: LooseQuantity<'temperature'> }>(gas: IdealGas<B>, input: P & CheckedInputs<P, ProcessDimensions>): ConstantCpDeviation<B> {
-  const variableCp = machine(gas, input, input.machine);
-  const { T1, p1, p2, units } = inlet(gas, input, 'constantCpDeviation');
+  checkGas(gas, 'constantCpDeviation');
+  const kind = input === null || typeof input !== 'object' || input.machine === undefined ? missingMachine() : readChoice<'compressor' | 'turbine'>(input.machine, 'machine', ['compressor', 'turbine'], 'turbine');
+  const { T1, p1, p2, units } = inlet(gas, input, 'constantCpDeviation', ['T1', 'p1', 'p2', 'efficiency', 'machine', 'referenceT']);
+  const variableCp = machine(gas, { T1: input.T1, p1: input.p1, p2: input.p2, efficiency: input.efficiency } as MachineInput, kind);
   const T0 = input.referenceT === undefined ? 298.15 : readTemperature(input.referenceT, 'referenceT', gas.bounds, units);
   const cpR = gas.core.cpR(T0);
-  const c = machineConstantCp(cpR, T1, p1, p2, efficiencyOf(input.efficiency), input.machine);
+  const c = machineConstantCp(cpR, T1, p1, p2, efficiencyOf(input.efficiency), kind);
   if (!(c.T2 > 0 && c.T2s > 0)) throw rangeError('T2', c.T2, 'temperature', { min: 0, max: Infinity, scope: 'the constant-cp closed form (it gives a non-positive temperature here)', minExclusive: true }, units);
   const scale = energyScale(gas);
   const en = energyDimension(gas);

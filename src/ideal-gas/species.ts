@@ -71,7 +71,10 @@ const byFormula = new Map<string, SpeciesRecord>();
 for (const r of RECORDS) {
   byFormula.set(r.id, r);
   if (r.formula !== undefined && !byFormula.has(r.formula)) byFormula.set(r.formula, r);
-  for (const n of [r.id, ...r.names]) byKey.set(normaliseName(n), r);
+  // ids that are formulas match by exact case only (CO is carbon monoxide; Co, cobalt, is not a gas
+  // here); ids that are names (air) and the common names match in any case
+  const idIsFormula = r.formula !== undefined && r.formula !== '' && r.id === r.formula;
+  for (const n of idIsFormula ? r.names : [r.id, ...r.names]) byKey.set(normaliseName(n), r);
 }
 const compiled = new Map<SpeciesRecord, NasaPolynomialModel>();
 

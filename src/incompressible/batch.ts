@@ -7,6 +7,8 @@
 import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { runBatch, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
 import { Status, type StatusCode } from '../core/status.js';
+import { describeValue } from '../core/read.js';
+import { InvalidInputError } from '../errors.js';
 import { densityAt, enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange } from './model.js';
 import type { IncompressibleSubstance } from './substance.js';
 
@@ -40,6 +42,9 @@ export function incompressibleBatch<P extends IncompressibleBatchProperty>(
   props: readonly P[],
   out?: BatchOut<P>,
 ): BatchResult<P> {
+  if (typeof substance !== 'object' || substance === null || typeof (substance as Partial<IncompressibleSubstance>).core !== 'object') {
+    throw new InvalidInputError('input.invalid', 'substance', `incompressibleBatch takes a substance from incompressible() as its first argument; got ${describeValue(substance)}`);
+  }
   const m = substance.core;
   const Tref = substance.reference.T.si;
   const pRef = STANDARD_ATMOSPHERE_PA;

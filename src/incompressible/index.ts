@@ -3,7 +3,8 @@
  *
  * @packageDocumentation
  */
-import { readFlag, readOptions } from '../core/read.js';
+import { describeValue, readFlag, readOptions } from '../core/read.js';
+import { InvalidInputError } from '../errors.js';
 import { lookupIncompressible, type CatalogueOptions } from './catalogue.js';
 import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 import { substanceFacade, type IncompressibleSubstance } from './substance.js';
@@ -49,6 +50,11 @@ export type { IncompressibleBatchProperty } from './batch.js';
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {
   const { extrapolate, ...lookup } = readOptions<IncompressibleOptions>(options, 'options', ['supercooled', 'massFraction', 'volumeFraction', 'extrapolate']);
+  if (lookup.supercooled !== undefined) readFlag(lookup.supercooled, 'options.supercooled');
+  for (const key of ['massFraction', 'volumeFraction'] as const) {
+    const v = lookup[key];
+    if (v !== undefined && typeof v !== 'number') throw new InvalidInputError('input.invalid', `options.${key}`, `options.${key} must be a number from 0 to 1; got ${describeValue(v)}`);
+  }
   const compiled = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, lookup) : compileDefinition(nameOrDefinition);
   return substanceFacade(compiled, readFlag(extrapolate, 'options.extrapolate'));
 }

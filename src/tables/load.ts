@@ -150,7 +150,7 @@ export function tableFromCSV(text: string, options?: CsvOptions): PropertyTable 
   const names: string[] = [];
   const units: string[] = [];
   heads.forEach((h, c) => {
-    const m = /^(.+?)\s*[[(]\s*(.+?)\s*[\])]\s*$/.exec(h);
+    const m = splitHeader(h);
     if (!m) {
       issues.push({ path: ['header', c], message: `column ${c + 1} header "${h}" has no unit: write it as "name [unit]", for example "T [°F]"` });
       names.push(h);
@@ -185,4 +185,21 @@ export function tableFromCSV(text: string, options?: CsvOptions): PropertyTable 
   // so the table's check refuses reserved names by name
   const columns = Object.fromEntries(names.map((n, c) => [n, { unit: units[c]!, values: values[c]! }])) as Record<string, { unit: string; values: (number | null)[] }>;
   return new PropertyTable({ name, source: source ?? 'user CSV', key: key ?? names[0]!, columns });
+}
+
+/**
+ * A header cell "name [unit]" (or "name (unit)") split without a regular expression, in one pass
+ * over the text: the unit is what the last closing bracket closes. Returns undefined when the cell
+ * has no bracketed unit after a name.
+ */
+function splitHeader(cell: string): [string, string, string] | undefined {
+  const text = cell.trim();
+  const close = text[text.length - 1];
+  if (close !== ']' && close !== ')') return undefined;
+  const open = text.lastIndexOf(close === ']' ? '[' : '(');
+  if (open <= 0) return undefined;
+  const name = text.slice(0, open).trim();
+  const unit = text.slice(open + 1, -1).trim();
+  if (name === '' || unit === '') return undefined;
+  return [text, name, unit];
 }

@@ -586,9 +586,7 @@ describe('the printed-value rules', () => {
  * fixed. The claim must still fail, with nothing else failing in its example; once it holds, the
  * 'known code bugs' test below fails so that its entry is removed.
  */
-const KNOWN_BUGS: Record<string, string> = {
-  'src/ideal-gas/species.ts:105': "findSpecies('Co') returns carbon monoxide: names are matched case-insensitively, so the formula 'Co' (cobalt) falls through to the id 'CO'",
-};
+const KNOWN_BUGS: Record<string, string> = {};
 
 describe('every example in the docs runs and its //=> values hold', () => {
   const outcomes = new Map<string, Outcome>();

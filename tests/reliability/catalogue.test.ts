@@ -220,7 +220,7 @@ add('guessed', 'mixture', [
   { label: "fractions: 'volume'", call: () => mixture({ N2: 0.79, O2: 0.21 }, any({ fractions: 'volume' })), ...invalid, names: ['"volume"'] },
   { label: 'fractions that sum to 1.1', call: () => mixture({ N2: 0.8, O2: 0.3 }), ...range, names: ['1.1'] },
   { label: 'empty composition', call: () => mixture({}), ...invalid, names: ['composition'] },
-  { label: 'name as a number', call: () => mixture({ N2: 0.79, O2: 0.21 }, any({ name: 5 })), ...invalid, names: ['name'], fault: 'accepted: a gas named 5 (the name option is not type-checked; src/ideal-gas/gas.ts readGasOptions)' },
+  { label: 'name as a number', call: () => mixture({ N2: 0.79, O2: 0.21 }, any({ name: 5 })), ...invalid, names: ['name'] },
 ]);
 add('plain-error', 'mixture', [
   { label: 'null composition', call: () => mixture(any(null)), ...invalid, names: ['composition'] },
@@ -229,37 +229,37 @@ add('plain-error', 'mixture', [
 ]);
 add('plain-error', 'moleToMassFractions', [
   { label: 'null', call: () => moleToMassFractions(any(null)), ...invalid, names: ['composition'] },
-  { label: 'options as a string', call: () => moleToMassFractions({ N2: 1 }, any('normalize')), ...invalid, names: ['options'], fault: 'accepted: the options argument is not checked (src/ideal-gas/gas.ts moleToMassFractions)' },
+  { label: 'options as a string', call: () => moleToMassFractions({ N2: 1 }, any('normalize')), ...invalid, names: ['options'] },
 ]);
 add('guessed', 'moleToMassFractions', [{ label: 'a negative fraction', call: () => moleToMassFractions({ N2: 1.2, O2: -0.2 }), ...invalid, names: ['O2'] }]);
 const machine = { T1: '300 K', p1: '1 bar', p2: '5 bar' } as const;
 add('plain-error', 'isentropicEnd', [
-  { label: 'null gas', call: () => isentropicEnd(any(null), machine), ...invalid, names: ['gas'], fault: 'TypeError: Cannot read properties of null (reading \'bounds\') (src/ideal-gas/processes.ts)' },
+  { label: 'null gas', call: () => isentropicEnd(any(null), machine), ...invalid, names: ['gas'] },
   { label: 'null input', call: () => isentropicEnd(air, any(null)), ...invalid, names: ['null'] },
   { label: 'p2 as a number', call: () => isentropicEnd(air, any({ ...machine, p2: 5e5 })), ...invalid, names: ['p2'] },
 ]);
 add('plain-error', 'compressor', [
   { label: "efficiency as the string '0.85'", call: () => compressor(air, any({ ...machine, efficiency: '0.85' })), ...invalid, names: ['efficiency'] },
-  { label: 'a gas name instead of a gas', call: () => compressor(any('air'), machine), ...invalid, names: ['gas'], fault: "TypeError: Cannot read properties of undefined (src/ideal-gas/processes.ts takes the gas's fields unchecked)" },
+  { label: 'a gas name instead of a gas', call: () => compressor(any('air'), machine), ...invalid, names: ['gas'] },
 ]);
 add('guessed', 'compressor', [
   { label: 'p2 < p1', call: () => compressor(air, { ...machine, p2: '0.5 bar' }), ...invalid, names: ['p2'] },
-  { label: 'misspelt option efficency', call: () => compressor(air, any({ ...machine, efficency: 0.8 })), ...invalid, names: ['efficency'], fault: 'accepted: the unknown key is ignored and the efficiency taken as 1 (src/ideal-gas/processes.ts readInlet)' },
+  { label: 'misspelt option efficency', call: () => compressor(air, any({ ...machine, efficency: 0.8 })), ...invalid, names: ['efficency'] },
 ]);
 add('non-finite', 'compressor', [{ label: 'efficiency NaN', call: () => compressor(air, { ...machine, efficiency: NaN }), ...notFinite, names: ['efficiency'] }]);
 add('guessed', 'turbine', [
   { label: 'efficiency 1.2', call: () => turbine(air, { T1: '1000 K', p1: '10 bar', p2: '1 bar', efficiency: 1.2 }), ...range, names: ['efficiency'] },
-  { label: 'unknown key', call: () => turbine(air, any({ T1: '1000 K', p1: '10 bar', p2: '1 bar', bogus: 1 })), ...invalid, names: ['bogus'], fault: 'accepted: unknown keys of the machine input are ignored (src/ideal-gas/processes.ts)' },
+  { label: 'unknown key', call: () => turbine(air, any({ T1: '1000 K', p1: '10 bar', p2: '1 bar', bogus: 1 })), ...invalid, names: ['bogus'] },
 ]);
 add('plain-error', 'polytropic', [{ label: "n as the string '1.3'", call: () => polytropic(air, any({ ...machine, n: '1.3' })), ...invalid, names: ['n'] }]);
 add('guessed', 'polytropic', [{ label: 'n missing', call: () => polytropic(air, any(machine)), ...invalid, names: ['n'] }]);
 add('guessed', 'constantCpDeviation', [
-  { label: "machine 'pump'", call: () => constantCpDeviation(air, any({ ...machine, machine: 'pump' })), ...invalid, names: ['"pump"'], fault: "treated as a turbine: 'a pump needs p2 < p1' (src/ideal-gas/processes.ts does not read machine with readChoice)" },
-  { label: 'machine missing', call: () => constantCpDeviation(air, any({ ...machine })), ...invalid, names: ['machine'], fault: 'treated as a turbine (src/ideal-gas/processes.ts)' },
+  { label: "machine 'pump'", call: () => constantCpDeviation(air, any({ ...machine, machine: 'pump' })), ...invalid, names: ['"pump"'] },
+  { label: 'machine missing', call: () => constantCpDeviation(air, any({ ...machine })), ...invalid, names: ['machine'] },
 ]);
 add('plain-error', 'idealGasBatch', [
-  { label: 'null gas', call: () => idealGasBatch(any(null), { T: T1 }, ['cp']), ...invalid, names: ['gas'], fault: "TypeError: Cannot read properties of null (reading 'core') (src/ideal-gas/batch.ts)" },
-  { label: "the gas's name instead of the gas", call: () => idealGasBatch(any('air'), { T: T1 }, ['cp']), ...invalid, names: ['gas', '"air"'], fault: "TypeError: Cannot read properties of undefined (reading 'R') (src/ideal-gas/batch.ts)" },
+  { label: 'null gas', call: () => idealGasBatch(any(null), { T: T1 }, ['cp']), ...invalid, names: ['gas'] },
+  { label: "the gas's name instead of the gas", call: () => idealGasBatch(any('air'), { T: T1 }, ['cp']), ...invalid, names: ['gas', '"air"'] },
   { label: 'null inputs', call: () => idealGasBatch(air, any(null), ['cp']), ...invalid, names: ['null'] },
   { label: 'props null', call: () => idealGasBatch(air, { T: T1 }, any(null)), ...invalid, names: ['null'] },
 ]);
@@ -272,13 +272,13 @@ add('guessed', 'idealGasBatch', [
 // ---------------------------------------------------------------------------------------------
 // incompressible
 add('plain-error', 'incompressible', [
-  { label: 'options null', call: () => incompressible('copper', any(null)), ...invalid, names: ['options'], fault: "TypeError: Cannot read properties of null (reading 'supercooled') (src/incompressible/catalogue.ts)" },
-  { label: "massFraction as the string '0.3'", call: () => incompressible('ethylene glycol solution', any({ massFraction: '0.3' })), ...invalid, names: ['massFraction'], fault: "code input.not-finite and 'got 0.3' for a string (src/incompressible/brines.ts: a non-number is input.invalid elsewhere)" },
+  { label: 'options null', call: () => incompressible('copper', any(null)), ...invalid, names: ['options'] },
+  { label: "massFraction as the string '0.3'", call: () => incompressible('ethylene glycol solution', any({ massFraction: '0.3' })), ...invalid, names: ['massFraction'] },
   { label: 'a number for the name', call: () => incompressible(any(5)), ...definition, names: ['number'] },
 ]);
 add('guessed', 'incompressible', [
-  { label: 'unknown option', call: () => incompressible('copper', any({ bogus: 1 })), ...invalid, names: ['bogus'], fault: 'accepted: options are not checked for unknown keys (src/incompressible/catalogue.ts)' },
-  { label: "supercooled: 'yes'", call: () => incompressible('water', any({ supercooled: 'yes' })), ...invalid, names: ['supercooled'], fault: "accepted and read as false (src/incompressible/catalogue.ts compares with === true)" },
+  { label: 'unknown option', call: () => incompressible('copper', any({ bogus: 1 })), ...invalid, names: ['bogus'] },
+  { label: "supercooled: 'yes'", call: () => incompressible('water', any({ supercooled: 'yes' })), ...invalid, names: ['supercooled'] },
   { label: 'both massFraction and volumeFraction', call: () => incompressible('ethylene glycol solution', { massFraction: 0.3, volumeFraction: 0.3 }), ...invalid, names: ['massFraction'] },
   { label: 'a solution without its concentration', call: () => incompressible('ethylene glycol solution'), ...invalid, names: ['massFraction'] },
   { label: 'unknown name', call: () => incompressible('unobtainium'), error: UnknownNameError, code: 'name.unknown', names: ['unobtainium'] },
@@ -302,7 +302,7 @@ add('guessed', 'substance.deltaH', [
   { label: 'over-determined first state', call: () => liquidWater.deltaH(any({ T: '300 K', p: '1 bar', x: 1 }), { T: '310 K', p: '1 bar' }), ...invalid, names: ['"x"'] },
 ]);
 add('plain-error', 'incompressibleBatch', [
-  { label: 'null substance', call: () => incompressibleBatch(any(null), { T: T1 }, ['c']), ...invalid, names: ['substance'], fault: "TypeError: Cannot read properties of null (reading 'core') (src/incompressible/batch.ts)" },
+  { label: 'null substance', call: () => incompressibleBatch(any(null), { T: T1 }, ['c']), ...invalid, names: ['substance'] },
   { label: 'props null', call: () => incompressibleBatch(copper, { T: T1 }, any(null)), ...invalid, names: ['null'] },
   { label: 'null inputs', call: () => incompressibleBatch(copper, any(null), ['c']), ...invalid, names: ['null'] },
 ]);
@@ -490,34 +490,33 @@ add('guessed', 'humidAir.state', [
   { label: 'one input { T }', call: () => humidAir.state(any({ T: '30 °C' })), ...invalid, names: ['T'] },
   { label: 'both p and altitude', call: () => humidAir.state({ T: '30 °C', RH: 0.5, p: '1 bar', altitude: '100 m' }), ...invalid, names: ['altitude'] },
   { label: "model 'bogus'", call: () => humidAir.state(any({ T: '30 °C', RH: 0.5, model: 'bogus' })), ...invalid, names: ['bogus'] },
-  { label: 'an unknown key Tx', call: () => humidAir.state(any({ T: '30 °C', RH: 0.5, Tx: '20 °C' })), ...invalid, names: ['Tx'], fault: 'accepted: unknown keys are ignored (src/humid-air/state.ts readPair)' },
+  { label: 'an unknown key Tx', call: () => humidAir.state(any({ T: '30 °C', RH: 0.5, Tx: '20 °C' })), ...invalid, names: ['Tx'] },
 ]);
 add('non-finite', 'humidAir.state', [{ label: 'p = 1e400 Pa', call: () => humidAir.state({ T: '30 °C', RH: 0.5, p: any('1e400 Pa') }), ...notFinite, names: ['Infinity'] }]);
 add('plain-error', 'humidAir.mix', [
   { label: 'null', call: () => humidAir.mix(any(null)), ...invalid, names: ['streams'] },
-  { label: 'null streams inside the array', call: () => humidAir.mix(any([null, null])), ...invalid, names: ['streams[0]'], fault: "TypeError: Cannot read properties of null (reading 'state') (src/humid-air/processes.ts mix)" },
+  { label: 'null streams inside the array', call: () => humidAir.mix(any([null, null])), ...invalid, names: ['streams[0]'] },
 ]);
 add('plain-error', 'humidAir.heat', [
-  { label: 'null', call: () => humidAir.heat(any(null)), ...invalid, names: ['input', 'humidAir.heat'], fault: "TypeError: Cannot read properties of null (reading 'inlet') (src/humid-air/processes.ts heat)" },
+  { label: 'null', call: () => humidAir.heat(any(null)), ...invalid, names: ['input', 'humidAir.heat'] },
   { label: 'empty object', call: () => humidAir.heat(any({})), ...invalid, names: ['inlet'] },
 ]);
 add('guessed', 'humidAir.heat', [
-  { label: 'over-determined { T2, Q }', call: () => humidAir.heat(any({ inlet: moist, flow: '1 kg/s', T2: '40 °C', Q: '5 kW' })), ...invalid, names: ['Q'], fault: 'accepted: T2 is used and Q silently ignored (src/humid-air/processes.ts heat)' },
+  { label: 'over-determined { T2, Q }', call: () => humidAir.heat(any({ inlet: moist, flow: '1 kg/s', T2: '40 °C', Q: '5 kW' })), ...invalid, names: ['Q'] },
 ]);
-add('plain-error', 'humidAir.coolingCoil', [{ label: 'null', call: () => humidAir.coolingCoil(any(null)), ...invalid, names: ['input', 'humidAir.coolingCoil'], fault: "TypeError: Cannot read properties of null (reading 'inlet') (src/humid-air/processes.ts coolingCoil)" }]);
+add('plain-error', 'humidAir.coolingCoil', [{ label: 'null', call: () => humidAir.coolingCoil(any(null)), ...invalid, names: ['input', 'humidAir.coolingCoil'] }]);
 add('guessed', 'humidAir.coolingCoil', [
   {
     label: 'over-determined { ADP, bypassFactor, T2, RH2 }',
     call: () => humidAir.coolingCoil(any({ inlet: moist, flow: '1 kg/s', ADP: '10 °C', bypassFactor: 0.1, T2: '14 °C', RH2: 0.9 })),
     ...invalid,
     names: ['T2', 'ADP'],
-    fault: 'accepted: ADP and bypassFactor are used, T2 and RH2 silently ignored (src/humid-air/processes.ts coolingCoil)',
   },
   { label: "bypassFactor as the string '0.1'", call: () => humidAir.coolingCoil(any({ inlet: moist, flow: '1 kg/s', ADP: '10 °C', bypassFactor: '0.1' })), ...invalid, names: ['bypassFactor'] },
 ]);
-add('plain-error', 'humidAir.steamHumidifier', [{ label: 'null', call: () => humidAir.steamHumidifier(any(null)), ...invalid, names: ['input', 'humidAir.steamHumidifier'], fault: "TypeError: Cannot read properties of null (reading 'inlet') (src/humid-air/processes.ts)" }]);
+add('plain-error', 'humidAir.steamHumidifier', [{ label: 'null', call: () => humidAir.steamHumidifier(any(null)), ...invalid, names: ['input', 'humidAir.steamHumidifier'] }]);
 add('guessed', 'humidAir.steamHumidifier', [{ label: 'two targets { W2, RH2 }', call: () => humidAir.steamHumidifier(any({ inlet: moist, flow: '1 kg/s', steam: { p: '1 bar', T: '120 °C' }, W2: 0.015, RH2: 0.6 })), ...invalid, names: ['W2'] }]);
-add('plain-error', 'humidAir.evaporativeHumidifier', [{ label: 'null', call: () => humidAir.evaporativeHumidifier(any(null)), ...invalid, names: ['input', 'humidAir.evaporativeHumidifier'], fault: "TypeError: Cannot read properties of null (reading 'inlet') (src/humid-air/processes.ts)" }]);
+add('plain-error', 'humidAir.evaporativeHumidifier', [{ label: 'null', call: () => humidAir.evaporativeHumidifier(any(null)), ...invalid, names: ['input', 'humidAir.evaporativeHumidifier'] }]);
 add('plain-error', 'humidAir.pressureAtAltitude', [{ label: 'null', call: () => humidAir.pressureAtAltitude(any(null)), ...invalid, names: ['altitude'] }]);
 add('plain-error', 'humidAirBatch', [
   { label: 'null inputs', call: () => humidAirBatch(any(null), ['W']), ...invalid, names: ['humidAirBatch', 'inputs'] },
@@ -548,7 +547,7 @@ add('unnamed', 'fluid.saturation', [{ label: '{ h } names h', call: () => iapws9
 
 // ---------------------------------------------------------------------------------------------
 // safe, chem
-add('plain-error', 'safe', [{ label: 'null for the function', call: () => safe(any(null)), ...invalid, names: ['fn', 'function'], fault: 'accepted: safe(null) returns a wrapper whose every call fails with internal.unexpected (src/core/safe.ts does not check fn)' }]);
+add('plain-error', 'safe', [{ label: 'null for the function', call: () => safe(any(null)), ...invalid, names: ['fn', 'function'] }]);
 add('plain-error', 'molarMass', [
   { label: 'null', call: () => molarMass(any(null)), ...invalid, names: ['formula'] },
   { label: 'a number', call: () => molarMass(any(18)), ...invalid, names: ['formula'] },
@@ -648,10 +647,10 @@ const cliCases: CliCase[] = [
   { argv: ['liquid', 'copper', 'T1=20degC'], names: ['T2'] },
   { argv: ['bogus'], names: ['bogus'] },
   { argv: ['water', 'p=1MPa', 'T=300K', '--units', 'imperial'], names: ['imperial'] },
-  { argv: ['sat', 'T=300K', 'p=1MPa'], names: ['T', 'p'], fault: 'accepted: T is used and p ignored (src/cli/run.ts saturationRows)' },
-  { argv: ['gas', 'N2', 'O2', 'T=300K'], names: ['O2'], fault: 'accepted: the second species is ignored (src/cli/run.ts gasRows)' },
-  { argv: ['water', 'p=1MPa', 'x='], names: ['x'], fault: 'accepted: an empty x is read as Number("") = 0 (src/cli/run.ts waterRows)' },
-  { argv: ['water', 'p=1MPa', 'x=0x1'], names: ['0x1'], fault: 'accepted: Number("0x1") = 1, hexadecimal (src/cli/run.ts waterRows)' },
+  { argv: ['sat', 'T=300K', 'p=1MPa'], names: ['T', 'p'] },
+  { argv: ['gas', 'N2', 'O2', 'T=300K'], names: ['O2'] },
+  { argv: ['water', 'p=1MPa', 'x='], names: ['x'] },
+  { argv: ['water', 'p=1MPa', 'x=0x1'], names: ['0x1'] },
   { argv: ['water', 'p=1MPa', 'x=1_0'], names: ['1_0', 'x'] },
 ];
 describe('the CLI refuses malformed lines with a message naming the input (src/cli/run.ts)', () => {

@@ -162,7 +162,10 @@ export function mixStreams(p: number, W: Float64Array, h: Float64Array, mda: Flo
  * dry-bulb T2 (K). Cooling below the entering dew point is refused (PROCESS_REASON.condensation).
  * @example
  * ```ts
- * sensibleToTemperature(inlet, 2, 308.15, true, outlet, loads);   // loads.sensible = 2·(1006 + 1860 W)(T2 − T1)
+ * const inlet = new HumidAirState(), outlet = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 293.15, 0.5, 101325, true, inlet);   // 20 °C, 50 %
+ * sensibleToTemperature(inlet, 2, 308.15, true, outlet, loads);   //=> 0
+ * loads.sensible;   //=> 30585.28 (W: 2 kg/s dry air × (h2 − h1))
  * ```
  */
 export function sensibleToTemperature(inlet: HumidAirState, mda: number, T2: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
