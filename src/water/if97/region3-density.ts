@@ -42,9 +42,10 @@ function pressure3(rho: number, T: number, ctx: SolverContext): number {
 
 /**
  * The root of p₃(ρ, T) = p inside [a, b], where p₃(a) − p < 0 < p₃(b) − p; writes ctx.rho. Newton steps
- * on ρ with the slope (∂p/∂ρ)_T that comes with each pressure evaluation, kept inside the shrinking
- * bracket (bisection whenever a step would leave it), from the linear interpolation between the
- * ends; Brent's method if that has not converged after 40 steps. `pa`, `pb`: p₃ at a and b when the
+ * on ln p (on p where p₃ ≤ 0) with the slope (∂p/∂ρ)_T that comes with each pressure evaluation, kept
+ * inside the shrinking bracket (bisection whenever a step would leave it), from near the dense end of
+ * a wide bracket or by linear interpolation in a narrow one; Brent's method if that has not converged
+ * after 40 steps. `pa`, `pb`: p₃ at a and b when the
  * caller has them.
  */
 function polishDensity(p: number, T: number, a: number, b: number, ctx: SolverContext, pa = pressure3(a, T, ctx), pb = pressure3(b, T, ctx)): StatusCode {
@@ -55,8 +56,11 @@ function polishDensity(p: number, T: number, a: number, b: number, ctx: SolverCo
   const fb = pb - p;
   if (fa === 0) return found(lo, ctx);
   if (fb === 0) return found(hi, ctx);
-  let x = fa < 0 && fb > 0 ? lo + (hi - lo) * (-fa / (fb - fa)) : 0.5 * (lo + hi);
+  // a narrow bracket (a step of the branch search): linear interpolation; a wide one (up to 800 kg/m³,
+  // where the isotherm climbs steeply): near its dense end, from which Newton on ln p runs down the convex part
+  let x = hi - lo > 100 ? hi - 0.1 * (hi - lo) : fa < 0 && fb > 0 ? lo + (hi - lo) * (-fa / (fb - fa)) : 0.5 * (lo + hi);
   if (!(x > lo && x < hi)) x = 0.5 * (lo + hi);
+  let last = Infinity;
   for (let i = 0; i < 40; i++) {
     region3Pressure(x, T, pr);
     const f = pr[0]! - p;
@@ -64,9 +68,15 @@ function polishDensity(p: number, T: number, a: number, b: number, ctx: SolverCo
     if (f < 0) lo = x;
     else hi = x;
     const d = pr[1]!;
-    let next = d > 0 ? x - f / d : 0.5 * (lo + hi);
+    // Newton on ln p where p₃ > 0 (the isotherms rise nearly exponentially in ρ there), else on p
+    const P = pr[0]!;
+    let next = d > 0 ? (P > 0 ? x - (Math.log(P / p) * P) / d : x - f / d) : 0.5 * (lo + hi);
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (Math.abs(next - x) <= 1e-15 * x || hi - lo <= 1e-15 * x) return found(next, ctx);
+    const step = Math.abs(next - x);
+    // done at 1e-15; or after a Newton step below 1e-9 that followed a larger one (quadratic convergence
+    // puts the next iterate at the rounding level of p₃); or where the steps stop shrinking at that level
+    if (step <= 1e-15 * x || hi - lo <= 1e-15 * x || (step <= 1e-9 * x && step <= 0.1 * last) || (step <= 1e-11 * x && step >= 0.5 * last)) return found(next, ctx);
+    last = step;
     x = next;
   }
   ctx.density.target = p;
