@@ -145,7 +145,11 @@ function fusedLoop(pair: Pair, ctx: SolverContext, a: Float64Array, b: Float64Ar
     const f4 = fields[slot(4)]!;
     const f5 = fields[slot(5)]!;
     for (let i = 0; i < n; i++) {
-      let code = solveInto(pair, a[i]!, second[i]!, ctx);
+      const x = a[i]!;
+      const y = second[i]!;
+      let code: number;
+      if (pair === PAIR_PT) code = certainlyRegion1(x, y) ? region1State(x, y, st) : stateFromPT(x, y, st, ctx);
+      else code = pair === PAIR_PH ? stateFromPH(x, y, st, ctx) : stateFromPS(x, y, st, ctx);
       if (code === Status.ok) {
         copyState(row, 0, wantK);
         const v0 = row[f0]!;
@@ -154,7 +158,9 @@ function fusedLoop(pair: Pair, ctx: SolverContext, a: Float64Array, b: Float64Ar
         const v3 = row[f3]!;
         const v4 = row[f4]!;
         const v5 = row[f5]!;
-        code = okStatus(v0 + v1 + (v2 + v3) + (v4 + v5), row, 0, fields, st.phase === PHASE.twoPhase, wantDomeUndefined);
+        const dome = st.phase === PHASE.twoPhase;
+        const sum = v0 + v1 + (v2 + v3) + (v4 + v5);
+        code = sum - sum === 0 ? (dome && wantDomeUndefined ? Status.undefinedProperty : Status.ok) : okStatus(sum, row, 0, fields, dome, wantDomeUndefined);
         if (code !== Status.invalidInput) {
           c0[i] = v0;
           c1[i] = v1;
