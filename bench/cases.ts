@@ -1,7 +1,9 @@
 /**
  * The benchmark cases. Each measures one hot function on the path a caller uses.
  * `perCall` divides a case that loops internally; `baseline` names a case measured in the same run.
+ * `cases` holds the cases of this file and of every bench/cases/*.ts file that exports `cases`.
  */
+import { readdirSync } from 'node:fs';
 import { idealGas, incompressible, quantity } from '../src/index.js';
 import { enthalpyChange } from '../src/incompressible/model.js';
 import { lookupIncompressible } from '../src/incompressible/catalogue.js';
@@ -15,23 +17,9 @@ import { idealGasBatch } from '../src/ideal-gas/index.js';
 import { waterTables } from '../src/tables/water.js';
 import { GridValue, TableValue } from '../src/tables/index.js';
 
-export interface BenchCase {
-  name: string;
-  fn: () => void;
-  perCall?: number;
-  targetNs?: number;
-  baseline?: string;
-  baselinePerCall?: number;
-}
+import { consume, type BenchCase } from './kit.js';
 
-let sink = 0;
-/** Keeps results alive so the optimiser cannot drop the work. */
-export function consume(x: number): void {
-  sink += x;
-}
-export function sinkValue(): number {
-  return sink;
-}
+export { consume, sinkValue, type BenchCase } from './kit.js';
 
 const psia = resolveUnit('psia');
 const kPa = resolveUnit('kPa');
@@ -122,7 +110,7 @@ const batchOut = { h: new Float64Array(BATCH), rho: new Float64Array(BATCH), sta
 const gasT = Float64Array.from({ length: BATCH }, (_, i) => 250 + (i % 2500));
 const gasOut = { cp: new Float64Array(BATCH), h: new Float64Array(BATCH), status: new Uint8Array(BATCH) };
 
-export const cases: BenchCase[] = [
+const own: BenchCase[] = [
   {
     name: 'batch: waterBatch (p, T) → h, ρ, 10⁶ states (per state)',
     fn: () => {
@@ -317,3 +305,17 @@ export const cases: BenchCase[] = [
     fn: () => consume(liquidWater.deltaH({ T: '20 °C', p: '1 bar' }, { T: '30 °C', p: '5 bar' }).si),
   },
 ];
+
+/** The cases of every bench/cases/*.ts file that exports `cases`, in file-name order. */
+async function caseFiles(): Promise<BenchCase[]> {
+  const dir = new URL('./cases/', import.meta.url);
+  const files = readdirSync(dir).filter((f) => f.endsWith('.ts') && !f.endsWith('.d.ts')).sort();
+  const found: BenchCase[] = [];
+  for (const file of files) {
+    const mod = (await import(new URL(file, dir).href)) as { cases?: unknown };
+    if (Array.isArray(mod.cases)) found.push(...(mod.cases as BenchCase[]));
+  }
+  return found;
+}
+
+export const cases: BenchCase[] = [...own, ...(await caseFiles())];

@@ -5,12 +5,22 @@
  *
  * Each case may name a target (ns per call) and a baseline case measured in the same run;
  * the table shows the ratio to the baseline and how far a target is missed.
+ *
+ * Then, when a C compiler is present (gcc, cc or clang), the native comparison: bench/c/region1.c
+ * (generated from data/if97 by scripts/generate-c-reference.ts) is built with -O2 and timed against
+ * `waterBatch` over the same region 1 states, alternating runs, process CPU time; the C results are
+ * checked bit for bit against `region1`. Without a compiler it says "no compiler" and goes on.
+ * Last, cold start: the import of each built entry, as the difference to a bare `node` start.
  */
-import { execFileSync } from 'node:child_process';
-import { existsSync, writeFileSync } from 'node:fs';
+import { execFileSync, spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
+import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Bench } from 'tinybench';
+import { checksum, region1BenchInputs } from '../scripts/generate-c-reference.js';
+import { region1, WaterProperties } from '../src/water/if97/index.js';
+import { waterBatch } from '../src/water/index.js';
 import { cases } from './cases.js';
 
 const quick = process.argv.includes('--quick');
@@ -61,25 +71,127 @@ console.table(
   })),
 );
 
-/** Time to import a built entry in a fresh Node process (measured inside the process, median of 7). */
-function coldStart(entry: string): { entry: string; medianMs: number; runs: number[] } | { entry: string; skipped: string } {
-  const url = new URL(`../dist/${entry}.js`, import.meta.url);
-  if (!existsSync(url)) return { entry, skipped: 'dist/ not built: run `npm run build` (npm run bench does)' };
-  const script = `const t = performance.now(); await import(${JSON.stringify(url.href)}); console.log(performance.now() - t);`;
-  const runs: number[] = [];
-  for (let i = 0; i < 7; i++) runs.push(Number(execFileSync(process.execPath, ['--input-type=module', '-e', script], { encoding: 'utf8' }).trim()));
-  const sorted = [...runs].sort((a, b) => a - b);
-  return { entry, medianMs: sorted[3]!, runs };
+/** Median of a list. */
+const mid = (xs: number[]): number => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length % 2 === 1 ? s[s.length >> 1]! : (s[s.length / 2 - 1]! + s[s.length / 2]!) / 2;
+};
+
+/** Process CPU time of f, ns per state (less disturbed than wall time by other work on a shared machine). */
+function cpuNsPerState(f: () => void, n: number): number {
+  const t = process.cpuUsage();
+  f();
+  const d = process.cpuUsage(t);
+  return ((d.user + d.system) * 1e3) / n;
 }
 
-// the target (30 ms) is for the root entry; the subpaths are reported beside it
-const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map(coldStart);
+interface Native {
+  compiler?: string;
+  skipped?: string;
+  states?: number;
+  cPlainNs?: number;
+  cCheckedNs?: number;
+  batchNs?: number;
+  singleNs?: number;
+  ratioToC?: number;
+  ratioToCChecked?: number;
+  bitForBit?: boolean;
+}
+
+/** The region 1 batch against the C build of the same equations (see the header). */
+function nativeComparison(): Native {
+  const compiler = ['gcc', 'cc', 'clang'].find((c) => spawnSync(c, ['--version'], { stdio: 'ignore' }).status === 0);
+  if (compiler === undefined) return { skipped: 'no compiler' };
+  const exe = join(mkdtempSync(join(os.tmpdir(), 'heatstate-c-')), 'region1');
+  const source = fileURLToPath(new URL('./c/region1.c', import.meta.url));
+  const built = spawnSync(compiler, ['-O2', '-o', exe, source, '-lm'], { encoding: 'utf8' });
+  if (built.status !== 0) return { compiler, skipped: `the C build failed: ${built.stderr.trim().split('\n')[0]}` };
+  const n = quick ? 200_000 : 1_000_000;
+  const reps = quick ? 3 : 7;
+  const rounds = quick ? 3 : 7;
+  const { p, T } = region1BenchInputs(n);
+  const out = { v: new Float64Array(n), h: new Float64Array(n), u: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), w: new Float64Array(n), status: new Uint8Array(n) };
+  const props = ['v', 'h', 'u', 's', 'cp', 'w'] as const;
+  const props1 = new WaterProperties();
+  const single = () => {
+    for (let i = 0; i < n; i++) {
+      region1(p[i]!, T[i]!, props1);
+      out.h[i] = props1.h;
+      out.w[i] = props1.w;
+    }
+  };
+  // the C results equal region1's bit for bit (same terms, same order): checksums of h and w
+  single();
+  const hBits = checksum(out.h);
+  const wBits = checksum(out.w);
+  const cPlain: number[] = [];
+  const cChecked: number[] = [];
+  const batch: number[] = [];
+  let bitForBit = true;
+  for (let r = 0; r < rounds; r++) {
+    const c = JSON.parse(execFileSync(exe, [String(n), String(reps)], { encoding: 'utf8' })) as { plainNs: number; checkedNs: number; hBits: string; wBits: string };
+    cPlain.push(c.plainNs);
+    cChecked.push(c.checkedNs);
+    bitForBit &&= c.hBits === hBits && c.wBits === wBits;
+    const js: number[] = [];
+    for (let k = 0; k < reps; k++) js.push(cpuNsPerState(() => waterBatch({ p, T }, props, out), n));
+    batch.push(mid(js));
+  }
+  const singleRuns: number[] = [];
+  for (let k = 0; k < reps; k++) singleRuns.push(cpuNsPerState(single, n));
+  const cPlainNs = mid(cPlain);
+  const batchNs = mid(batch);
+  return { compiler, states: n, cPlainNs, cCheckedNs: mid(cChecked), batchNs, singleNs: mid(singleRuns), ratioToC: batchNs / cPlainNs, ratioToCChecked: batchNs / mid(cChecked), bitForBit };
+}
+
+const native = nativeComparison();
+console.log('');
+if (native.skipped !== undefined) console.log(`native comparison: ${native.skipped}`);
+else {
+  console.log(
+    `native comparison (${native.compiler} -O2, ${native.states} region 1 states, v h u s cp w, CPU time, medians): C ${native.cPlainNs!.toFixed(1)} ns/state ` +
+      `(with the region test ${native.cCheckedNs!.toFixed(1)}), waterBatch ${native.batchNs!.toFixed(1)} ns/state: ${native.ratioToC!.toFixed(2)}× the C build ` +
+      `(target 1.2×: ${native.ratioToC! <= 1.2 ? 'met' : `missed by ${(native.ratioToC! / 1.2).toFixed(2)}×`}); C results ${native.bitForBit ? 'equal region1 bit for bit' : 'DIFFER from region1'}`,
+  );
+}
+
+/** Milliseconds of a fresh Node process running `script` (wall clock, spawn to exit). */
+function processMs(args: string[]): number {
+  const t = performance.now();
+  execFileSync(process.execPath, args, { stdio: 'ignore' });
+  return performance.now() - t;
+}
+
+/**
+ * Cold start of a built entry: a fresh Node process that imports it, minus a bare `node` start,
+ * alternating the two, median of the differences over `runs` (≥ 10) pairs.
+ */
+function coldStart(entry: string, runs: number): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
+  const url = new URL(`../dist/${entry}.js`, import.meta.url);
+  if (!existsSync(url)) return { entry, skipped: 'dist/ not built: run `npm run build` (npm run bench does)' };
+  const bare = ['--input-type=module', '-e', ''];
+  const load = ['--input-type=module', '-e', `await import(${JSON.stringify(url.href)});`];
+  const diffs: number[] = [];
+  const bares: number[] = [];
+  processMs(load); // the file system cache
+  for (let i = 0; i < runs; i++) {
+    const b = processMs(bare);
+    const l = processMs(load);
+    bares.push(b);
+    diffs.push(l - b);
+  }
+  return { entry, medianMs: mid(diffs), bareMs: mid(bares), runs: diffs };
+}
+
+// targets: 15 ms for the root entry, 8 ms for each subpath (the difference to a bare node start)
+const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map((e) => coldStart(e, quick ? 10 : 20));
 console.log('');
 for (const c of cold) {
   const name = c.entry === 'index' ? 'heatstate' : `heatstate/${c.entry.replace('/index', '')}`;
   if ('medianMs' in c) {
-    const verdict = c.entry === 'index' ? ` (target 30 ms: ${c.medianMs <= 30 ? 'met' : `missed by ${(c.medianMs / 30).toFixed(2)}×`})` : '';
-    console.log(`cold start: import of ${name} in a fresh Node process, median ${c.medianMs.toFixed(1)} ms${verdict}`);
+    const target = c.entry === 'index' ? 15 : 8;
+    const verdict = ` (target ${target} ms: ${c.medianMs <= target ? 'met' : `missed by ${(c.medianMs / target).toFixed(2)}×`})`;
+    console.log(`cold start: import of ${name}, median ${c.medianMs.toFixed(1)} ms over a bare node start (${c.bareMs.toFixed(1)} ms), ${c.runs.length} runs${verdict}`);
   } else {
     console.log(`cold start of ${name}: skipped (${c.skipped})`);
   }
@@ -89,6 +201,6 @@ const cpu = os.cpus()[0]?.model ?? 'unknown';
 const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
   outPath,
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, coldStart: cold, rows }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, native, coldStart: cold, rows }, null, 2)}\n`,
 );
 console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

@@ -24,7 +24,7 @@ import { dirname, resolve } from 'node:path';
 const root = resolve(dirname(fileURLToPath(import.meta.url)), '..');
 export const KERNELS_PATH = resolve(root, 'src/water/if97/kernels.generated.ts');
 
-interface Terms {
+export interface Terms {
   I: number[];
   J: number[];
   n: number[];
@@ -93,8 +93,8 @@ function sum(coefficients: number[], terms: string[]): string {
   return parts.length === 0 ? '0' : parts.join(' +\n    ').replace(/\+ -/g, '- ');
 }
 
-/** A function filling out[0..5] with S, Sx, Sxx, Sy, Syy, Sxy. */
-function sumsFunction(fn: string, doc: string, t: Terms): string {
+/** A function filling out[0..5] with S, Sx, Sxx, Sy, Syy, Sxy (also the body of the C reference, scripts/generate-c-reference.ts). */
+export function sumsFunction(fn: string, doc: string, t: Terms): string {
   const lines: string[] = [];
   lines.push(`/** ${doc} */`);
   lines.push(`export function ${fn}(x: number, y: number, out: Float64Array): void {`);

@@ -2,7 +2,7 @@
  * Benchmark cases of the Helmholtz-energy engine on IAPWS-95 water (SI core, caller-owned outputs).
  * Targets: full property set at (T, ρ) ≤ 1 µs, (p, T) ≤ 3 µs, saturation by T ≤ 5 µs, (p, h) ≤ 10 µs.
  */
-import { consume, type BenchCase } from '../cases.js';
+import { consume, type BenchCase } from '../kit.js';
 import { waterModel } from '../../src/fluids/catalogue.js';
 import { stateFromPH, stateFromPT } from '../../src/fluids/flash.js';
 import { FluidContext, FluidState, propertiesAt } from '../../src/fluids/model.js';

@@ -3,7 +3,7 @@
  * Targets: (T, RH, p) without wet-bulb ≤ 200 ns, with wet-bulb ≤ 1 µs, (T, Twb) ≤ 1 µs,
  * batch (T, RH, p) → Tdp, W, h at ≥ 3 M states/s (≤ 333 ns per state).
  */
-import { consume, type BenchCase } from '../cases.js';
+import { consume, type BenchCase } from '../kit.js';
 import { HumidAirState, humidAirState, PAIR } from '../../src/humid-air/core/state.js';
 import { humidAir, humidAirBatch } from '../../src/humid-air/index.js';
 

@@ -4,7 +4,7 @@
  * them), the IF97 helper that computes those inputs, and dilute-gas μ(T), λ(T). Each case loops over
  * a spread of states and reports per call.
  */
-import { type BenchCase, consume } from '../cases.js';
+import { type BenchCase, consume } from '../kit.js';
 import { gasTransportModel } from '../../src/ideal-gas/transport.js';
 import { ConductivityResult, CriticalEnhancementInputs, if97EnhancementInputs, If97InputsWork, thermalConductivity, viscosity, ViscosityResult } from '../../src/water/transport/index.js';
 

@@ -4,6 +4,9 @@
  * element out. A malformed call (unknown or over-determined inputs, arrays of different lengths,
  * an `out` array of the wrong length or type, an unknown property) throws before any work; a bad
  * element never throws: it gets a status and NaN outputs, and the rest are still computed.
+ * A model may hand the runner a fused loop per input set ({@link BatchLoop}) that replaces the
+ * per-element dispatch through `solve` and the property readers; the checks of the call run first
+ * either way.
  *
  * @module
  */
@@ -11,12 +14,23 @@ import { InvalidInputError } from '../errors.js';
 import { describeValue } from './read.js';
 import { Status, type StatusCode } from './status.js';
 
+/**
+ * A model's own loop over a whole batch, for speed: it fills `columns[c][i]` (property `props[c]`) and
+ * `status[i]` for every element i, exactly as the runner's loop over {@link BatchInputSet.solve} would
+ * (same status codes, same values bit for bit, NaN in every column of a failed element). The runner
+ * calls it only after every check of the call has passed. It returns false, before writing anything,
+ * to hand the batch back to the runner's loop (for a request it does not specialise).
+ */
+export type BatchLoop<P extends string> = (a: Float64Array, b: Float64Array | undefined, props: readonly P[], columns: readonly Float64Array[], status: Uint8Array) => boolean;
+
 /** One accepted set of batch inputs and the SI core that solves it. */
-export interface BatchInputSet<Out> {
+export interface BatchInputSet<Out, P extends string = string> {
   /** The input names, in the order `solve` takes them (`['p', 'T']`). */
   readonly keys: readonly string[];
   /** The SI core: one element's inputs (the second is 0 for a one-input set) into `out`. */
   readonly solve: (a: number, b: number, out: Out) => StatusCode;
+  /** Optional fused loop equivalent to the runner's loop over `solve` (see {@link BatchLoop}). */
+  readonly loop?: BatchLoop<P>;
 }
 
 /** What a model tells the runner. */
@@ -24,7 +38,7 @@ export interface BatchModel<Out, P extends string> {
   /** The batch function's name, for messages. */
   readonly name: string;
   /** The accepted input sets. */
-  readonly inputs: readonly BatchInputSet<Out>[];
+  readonly inputs: readonly BatchInputSet<Out, P>[];
   /** Each property's reader from the output object. */
   readonly properties: { readonly [K in P]: (out: Out) => number };
   /** The output object, created once per batch call. */
@@ -127,6 +141,7 @@ export function runBatch<Out, P extends string>(model: BatchModel<Out, P>, input
 
   const a = columnsIn[0]!;
   const b = columnsIn.length > 1 ? columnsIn[1]! : undefined;
+  if (set.loop !== undefined && set.loop(a, b, wanted, columns, status)) return result as BatchResult<P>;
   const solve = set.solve;
   const state = model.createOutput();
   const undefinedAt = model.undefinedAt;

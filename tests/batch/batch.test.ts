@@ -100,3 +100,64 @@ describe('idealGasBatch', () => {
     expect(() => idealGasBatch(idealGas('air'), { T: new Float64Array(2) }, ['s'])).toThrow(InvalidInputError);
   });
 });
+
+import { runBatch, type BatchModel } from '../../src/core/batch.js';
+import { SolverContext } from '../../src/water/if97/context.js';
+import { stateFromPS } from '../../src/water/if97/index.js';
+import { PHASE } from '../../src/water/if97/water-state.js';
+import type { WaterBatchProperty } from '../../src/water/index.js';
+
+/** The water model on the runner's own loop (no fused loop): the reference the fused loop must equal bit for bit. */
+function genericWaterModel(): BatchModel<WaterState, WaterBatchProperty> {
+  const ctx = new SolverContext();
+  const dome = new Set(['cp', 'cv', 'w', 'k']);
+  return {
+    name: 'reference',
+    inputs: [
+      { keys: ['p', 'T'], solve: (p, T, out) => stateFromPT(p, T, out, ctx) },
+      { keys: ['p', 'h'], solve: (p, h, out) => stateFromPH(p, h, out, ctx) },
+      { keys: ['p', 's'], solve: (p, s, out) => stateFromPS(p, s, out, ctx) },
+    ],
+    properties: { T: (o) => o.T, p: (o) => o.p, v: (o) => o.v, rho: (o) => o.rho, u: (o) => o.u, h: (o) => o.h, s: (o) => o.s, cp: (o) => o.cp, cv: (o) => o.cv, w: (o) => o.w, k: (o) => o.cp / o.cv, x: (o) => o.x },
+    mayBeNaN: { x: true },
+    undefinedAt: (o, prop) => o.phase === PHASE.twoPhase && dome.has(prop),
+    createOutput: () => new WaterState(),
+  };
+}
+
+const ALL: WaterBatchProperty[] = ['T', 'p', 'v', 'rho', 'u', 'h', 's', 'cp', 'cv', 'w', 'k', 'x'];
+const same = (a: Float64Array, b: Float64Array) => a.every((x, i) => Object.is(x, b[i]));
+
+describe('waterBatch fused loop', () => {
+  // inputs over every region, the dome, the range edges and bad values; lengths across the 128-element blocks
+  const pressure = fc.oneof(fc.double({ min: 500, max: 100e6, noNaN: true }), fc.constantFrom(NaN, -1, 0, Infinity, 16.6e6, 100e6, 22.064e6, 5e-324));
+  const temperature = fc.oneof(fc.double({ min: 270, max: 2300, noNaN: true }), fc.constantFrom(NaN, 273.15, 623.15, 647.096, 1073.15));
+  const enthalpy = fc.oneof(fc.double({ min: -1e4, max: 7e6, noNaN: true }), fc.constantFrom(NaN, 0));
+  const entropy = fc.oneof(fc.double({ min: -100, max: 13e3, noNaN: true }), fc.constantFrom(NaN, 4.41e3));
+  const request = fc.shuffledSubarray(ALL, { minLength: 1 });
+  it.each([
+    ['T', temperature],
+    ['h', enthalpy],
+    ['s', entropy],
+  ] as const)('(p, %s) equals the runner over the SI core bit for bit, every status and every property set', (key, second) => {
+    fc.assert(
+      fc.property(fc.array(fc.tuple(pressure, second), { minLength: 1, maxLength: 300 }), request, (pairs, props) => {
+        const p = Float64Array.from(pairs, ([x]) => x);
+        const y = Float64Array.from(pairs, ([, v]) => v);
+        const inputs = { p, [key]: y } as unknown as { p: Float64Array; T: Float64Array };
+        const fused = waterBatch(inputs, props);
+        const generic = runBatch(genericWaterModel(), inputs, props);
+        expect(Array.from(fused.status)).toEqual(Array.from(generic.status));
+        for (const prop of props) expect(same(fused[prop], generic[prop]), prop).toBe(true);
+      }),
+      { numRuns: key === 'T' ? 60 : 15 },
+    );
+  });
+  it('a request naming a property twice goes through the runner and gives the same values', () => {
+    const p = Float64Array.of(1e6, 20e6);
+    const T = Float64Array.of(300, 700);
+    const r = waterBatch({ p, T }, ['h', 'h'] as WaterBatchProperty[]);
+    const g = runBatch(genericWaterModel(), { p, T }, ['h', 'h']);
+    expect(same(r.h, g.h)).toBe(true);
+  });
+});

@@ -11,12 +11,14 @@
 import { brent } from '../../core/root.js';
 import { Status, type StatusCode } from '../../core/status.js';
 import { region1PressureHS, region2PressureHS } from './backward-hs.js';
-import { b13EnthalpyHS, region3aPressureHS, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from './backward-hs-region3.js';
+import { b23Pressure } from './b23.js';
+import { b13EnthalpyHS, b23TemperatureHS, region3aPressureHS, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from './backward-hs-region3.js';
 import { P_MAX, P_SEARCH_MIN, S_B13_MAX, S_B13_MIN, S_CRITICAL, S_VAPOR_MAX, T_CRITICAL, T_MIN } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
 import { BY_H } from './isobar-residual.js';
 import { stateOnIsobar } from './isobar.js';
 import { saturationPressure } from './region4.js';
+import { region3bStartPressureHS } from './start-region3b-hs.js';
 import { P_SAT_MIN } from './saturation.js';
 import type { WaterState } from './water-state.js';
 
@@ -82,7 +84,10 @@ function pressureSpanFor(h: number, ctx: SolverContext): boolean {
  * A starting pressure for the (h, s) flash from the backward equations: below the saturation line of
  * the h–s plane (SR4-04 h′(s), h″(s)) the two-phase T_sat(h, s) and p_s(T); on the liquid side
  * p_1(h, s) (SR2-01) below the B13 boundary and p_3a(h, s) (SR4-04) above it; on the vapour side
- * p_2(h, s) (SR2-01), also as the start for region 3b.
+ * p_2(h, s) (SR2-01) in region 2 and our fit to IF97 in region 3b (data/if97/fit-region3b-hs.json),
+ * divided by the B23 line in (h, s) as SR4-04 divides them: 3b below s = 5.048 kJ/(kg·K) (the least
+ * entropy on B23), region 2 above 5.261 kJ/(kg·K), and between them 3b where p_2(h, s) lies above
+ * p_B23(T_B23(h, s)) (SR4-04 Eq. 8 within its box 2.563–2.812 MJ/kg).
  */
 function startPressureHS(h: number, s: number): number {
   if (s >= 0 && s <= S_VAPOR_MAX) {
@@ -99,7 +104,10 @@ function startPressureHS(h: number, s: number): number {
     const inRegion1 = s < S_B13_MIN || (s <= S_B13_MAX && h <= b13EnthalpyHS(s));
     return inRegion1 ? region1PressureHS(h, s) : region3aPressureHS(h, s);
   }
-  return region2PressureHS(h, s);
+  if (s < 5.048e3 || (s <= 5.261e3 && h < 2.563e6)) return region3bStartPressureHS(h, s);
+  const p2 = region2PressureHS(h, s);
+  if (s <= 5.261e3 && h <= 2.812e6 && p2 > b23Pressure(b23TemperatureHS(h, s))) return region3bStartPressureHS(h, s);
+  return p2;
 }
 
 /**

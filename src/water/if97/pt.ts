@@ -6,11 +6,14 @@
  */
 import { Status, type StatusCode } from '../../core/status.js';
 import { finishSinglePhase, regionOfPT } from './classify.js';
+import { P_MAX, T_13, T_MIN } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
+import { region1 } from './region1.js';
+import { region2 } from './region2.js';
 import { region3 } from './region3.js';
 import { region3DensityAt } from './region3-density.js';
-import { evaluateForward } from './regions.js';
-import type { WaterState } from './water-state.js';
+import { region5 } from './region5.js';
+import { PHASE, type WaterState } from './water-state.js';
 
 /**
  * All properties at (p [Pa], T [K]). Status `outOfRange` outside IF97. On the saturation line the
@@ -23,17 +26,46 @@ import type { WaterState } from './water-state.js';
  * ```
  */
 export function stateFromPT(p: number, T: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {
+  if (certainlyRegion1(p, T)) return region1State(p, T, out);
   if (!Number.isFinite(p) || !Number.isFinite(T)) return Status.invalidInput;
   const region = regionOfPT(p, T);
+  if (region === 1) return region1State(p, T, out);
   if (region === 0) return Status.outOfRange;
-  if (region === 3) {
-    if (region3DensityAt(p, T, 0, ctx) !== Status.ok) return Status.noConvergence;
-    region3(ctx.rho, T, out);
-    out.p = p;
-  } else {
-    evaluateForward(region, p, T, out);
-  }
+  if (region === 3) return region3FromPT(p, T, out, ctx);
+  if (region === 2) region2(p, T, out);
+  else region5(p, T, out);
   return finishSinglePhase(out, region);
+}
+
+/**
+ * Above this pressure (Pa) every state up to 623.15 K lies in region 1 without computing p_s(T): the
+ * saturation pressure of Eq. 30 peaks at 16.529 MPa there (p_s(623.15 K), IF97 Section 4).
+ */
+export const P_REGION1_WITHOUT_SATURATION = 16.6e6;
+
+/**
+ * True when (p, T) is in region 1 by bounds alone (p ≥ 16.6 MPa, T ≤ 623.15 K): the same answer as
+ * `regionOfPT` there, without the saturation pressure. NaN fails every comparison.
+ */
+export function certainlyRegion1(p: number, T: number): boolean {
+  return p >= P_REGION1_WITHOUT_SATURATION && p <= P_MAX && T >= T_MIN && T <= T_13;
+}
+
+/** The region 1 state at (p, T), marked as {@link finishSinglePhase} would (region 1 is liquid: T ≤ 623.15 K < T_c). */
+export function region1State(p: number, T: number, out: WaterState): StatusCode {
+  region1(p, T, out);
+  out.region = 1;
+  out.x = NaN;
+  out.phase = PHASE.liquid;
+  return Status.ok;
+}
+
+/** Region 3 at (p, T): the density, then the basic equation (kept out of {@link stateFromPT}'s hot path). */
+function region3FromPT(p: number, T: number, out: WaterState, ctx: SolverContext): StatusCode {
+  if (region3DensityAt(p, T, 0, ctx) !== Status.ok) return Status.noConvergence;
+  region3(ctx.rho, T, out);
+  out.p = p;
+  return finishSinglePhase(out, 3);
 }
 
 /** The output of {@link region3Density}. */
