@@ -99,7 +99,7 @@ export function runBatch<Out, P extends string>(model: BatchModel<Out, P>, input
     if (a.length !== n) throw new InvalidInputError('input.invalid', `inputs.${set.keys[i]}`, `input arrays differ in length (inputs.${set.keys[0]} has ${n}, inputs.${set.keys[i]} has ${a.length})`);
   });
 
-  if (!Array.isArray(props)) throw new InvalidInputError('input.invalid', 'props', `${name} needs a list of properties such as [${Object.keys(model.properties).slice(0, 3).map((p) => `'${p}'`).join(', ')}]; got ${describeValue(props)}`);
+  if (!Array.isArray(props)) throw new InvalidInputError('input.invalid', 'props', `${name}: props must be a list of properties such as [${Object.keys(model.properties).slice(0, 3).map((p) => `'${p}'`).join(', ')}]; got ${describeValue(props)}`);
   const known = Object.keys(model.properties);
   for (const prop of props) {
     if (typeof prop !== 'string' || !known.includes(prop)) throw new InvalidInputError('input.invalid', 'props', `unknown property ${describeValue(prop)}; choose from ${known.join(', ')}`);

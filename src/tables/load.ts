@@ -189,14 +189,15 @@ export function tableFromCSV(text: string, options?: CsvOptions): PropertyTable 
 
 /**
  * A header cell "name [unit]" (or "name (unit)") split without a regular expression, in one pass
- * over the text: the unit is what the last closing bracket closes. Returns undefined when the cell
- * has no bracketed unit after a name.
+ * over the text. Returns undefined when the cell
+ * has no bracketed unit after a name. The unit starts after the first opening bracket of the kind
+ * that closes the cell, so brackets inside a unit (`kJ/(kg·K)`) stay in the unit.
  */
 function splitHeader(cell: string): [string, string, string] | undefined {
   const text = cell.trim();
   const close = text[text.length - 1];
   if (close !== ']' && close !== ')') return undefined;
-  const open = text.lastIndexOf(close === ']' ? '[' : '(');
+  const open = text.indexOf(close === ']' ? '[' : '(');
   if (open <= 0) return undefined;
   const name = text.slice(0, open).trim();
   const unit = text.slice(open + 1, -1).trim();

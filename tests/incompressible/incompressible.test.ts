@@ -112,7 +112,7 @@ describe('bad input', () => {
       expect(e).toBeInstanceOf(OutOfRangeError);
       const r = (e as OutOfRangeError).range;
       expect([r.min, r.max, r.unit]).toEqual([200, 1358, 'K']);
-      expect((e as Error).message).toBe('T = 1400 K is above the upper limit of the data for copper (1358 K); valid range 200 to 1358 K');
+      expect((e as Error).message).toBe('T = 1400 K is above the upper limit of the data for copper (1358 K); valid range 200 to 1358 K; pass { extrapolate: true } to compute outside it (results are then flagged)');
     }
   });
   it('a non-positive absolute pressure throws', () => {

@@ -103,7 +103,7 @@ describe('ideal gases: random states of every species', () => {
           for (const ulps of [1, 4, 1e3]) {
             const past = value + (above ? 1 : -1) * Math.abs(value || 1) * ulps * Number.EPSILON;
             try {
-              const st = gas.state({ [name]: Quantity.fromSI(past, name === 'h' ? 'specificEnergy' : 'specificHeat'), p } as never);
+              const st = gas.state({ [name]: Quantity.fromSI(past, name === 'h' ? 'specificEnergy' : 'specificEntropy'), p } as never);
               if (!Number.isFinite(st.T.si) || st.T.si < gas.range.T.min.si || st.T.si > gas.range.T.max.si) fail.add(`${gas.name} ${name} = ${past}: T = ${st.T.si}`);
             } catch (e) {
               if (!(e instanceof OutOfRangeError)) fail.add(`${gas.name} ${name} = ${past} (${ulps} ulp past ${T} K): ${(e as Error).name}: ${(e as Error).message}`);
