@@ -453,50 +453,60 @@ export function waterResidual(delta: number, tau: number, out: Float64Array): vo
   const dm1 = d - 1;
   const tm1 = t - 1;
   const q = dm1 * dm1;
+  const qh = Math.sqrt(q);
+  const qc = Math.cbrt(q);
   // non-analytic term 0: n = -0.14874640856724, a = 3.5, b = 0.85, B = 0.2, C = 28, D = 700, A = 0.32, β = 0.3
-  const qe0 = Math.pow(q, 0.6666666666666667);
-  const qa0 = Math.pow(q, 2.5);
-  const th0 = 1 - t + 0.32 * q * qe0;
-  const D0 = th0 * th0 + 0.2 * q * qa0;
-  const G0 = 2.1333333333333333 * th0 * qe0 + 1.4000000000000001 * qa0;
-  const Dd0 = dm1 * G0;
-  const Ddd0 = G0 + 7.000000000000001 * qa0 + 2.2755555555555556 * Math.pow(q, 2.3333333333333335) + 2.8444444444444446 * th0 * qe0;
-  const Db0 = Math.pow(D0, 0.85);
-  const Db10 = D0 > 0 ? Db0 / D0 : 0;
-  const Db20 = Db10 / D0;
-  const Bd0 = 0.85 * Db10 * Dd0;
-  const Bdd0 = 0.85 * (Db10 * Ddd0 + -0.15000000000000002 * Db20 * Dd0 * Dd0);
-  const Bt0 = -1.7 * th0 * Db10;
-  const Btt0 = 1.7 * Db10 + -0.51 * th0 * th0 * Db20;
-  const Bdt0 = -1.8133333333333335 * Db10 * dm1 * qe0 + 0.255 * th0 * Db20 * Dd0;
-  const ps0 = Math.exp(-28 * q - 700 * tm1 * tm1);
-  const psd0 = -56 * dm1 * ps0;
-  const psdd0 = (56 * q - 1) * 56 * ps0;
-  const pst0 = -1400 * tm1 * ps0;
-  const pstt0 = (1400 * tm1 * tm1 - 1) * 1400 * ps0;
-  const psdt0 = 78400 * dm1 * tm1 * ps0;
+  let Db0 = 0, Bd0 = 0, Bdd0 = 0, Bt0 = 0, Btt0 = 0, Bdt0 = 0, ps0 = 0, psd0 = 0, psdd0 = 0, pst0 = 0, pstt0 = 0, psdt0 = 0;
+  const pe0 = 28 * q + 700 * tm1 * tm1;
+  if (pe0 < 200) {
+    const qe0 = qc * qc;
+    const qa0 = q * q * qh;
+    const th0 = 1 - t + 0.32 * q * qe0;
+    const D0 = th0 * th0 + 0.2 * q * qa0;
+    const G0 = 2.1333333333333333 * th0 * qe0 + 1.4000000000000001 * qa0;
+    const Dd0 = dm1 * G0;
+    const Ddd0 = G0 + 7.000000000000001 * qa0 + 2.2755555555555556 * q * q * qc + 2.8444444444444446 * th0 * qe0;
+    Db0 = Math.pow(D0, 0.85);
+    const Db10 = D0 > 0 ? Db0 / D0 : 0;
+    const Db20 = Db10 / D0;
+    Bd0 = 0.85 * Db10 * Dd0;
+    Bdd0 = 0.85 * (Db10 * Ddd0 + -0.15000000000000002 * Db20 * Dd0 * Dd0);
+    Bt0 = -1.7 * th0 * Db10;
+    Btt0 = 1.7 * Db10 + -0.51 * th0 * th0 * Db20;
+    Bdt0 = -1.8133333333333335 * Db10 * dm1 * qe0 + 0.255 * th0 * Db20 * Dd0;
+    ps0 = Math.exp(-pe0);
+    psd0 = -56 * dm1 * ps0;
+    psdd0 = (56 * q - 1) * 56 * ps0;
+    pst0 = -1400 * tm1 * ps0;
+    pstt0 = (1400 * tm1 * tm1 - 1) * 1400 * ps0;
+    psdt0 = 78400 * dm1 * tm1 * ps0;
+  }
   // non-analytic term 1: n = 0.31806110878444, a = 3.5, b = 0.95, B = 0.2, C = 32, D = 800, A = 0.32, β = 0.3
-  const qe1 = Math.pow(q, 0.6666666666666667);
-  const qa1 = Math.pow(q, 2.5);
-  const th1 = 1 - t + 0.32 * q * qe1;
-  const D1 = th1 * th1 + 0.2 * q * qa1;
-  const G1 = 2.1333333333333333 * th1 * qe1 + 1.4000000000000001 * qa1;
-  const Dd1 = dm1 * G1;
-  const Ddd1 = G1 + 7.000000000000001 * qa1 + 2.2755555555555556 * Math.pow(q, 2.3333333333333335) + 2.8444444444444446 * th1 * qe1;
-  const Db1 = Math.pow(D1, 0.95);
-  const Db11 = D1 > 0 ? Db1 / D1 : 0;
-  const Db21 = Db11 / D1;
-  const Bd1 = 0.95 * Db11 * Dd1;
-  const Bdd1 = 0.95 * (Db11 * Ddd1 + -0.050000000000000044 * Db21 * Dd1 * Dd1);
-  const Bt1 = -1.9 * th1 * Db11;
-  const Btt1 = 1.9 * Db11 + -0.19000000000000017 * th1 * th1 * Db21;
-  const Bdt1 = -2.026666666666667 * Db11 * dm1 * qe1 + 0.09500000000000008 * th1 * Db21 * Dd1;
-  const ps1 = Math.exp(-32 * q - 800 * tm1 * tm1);
-  const psd1 = -64 * dm1 * ps1;
-  const psdd1 = (64 * q - 1) * 64 * ps1;
-  const pst1 = -1600 * tm1 * ps1;
-  const pstt1 = (1600 * tm1 * tm1 - 1) * 1600 * ps1;
-  const psdt1 = 102400 * dm1 * tm1 * ps1;
+  let Db1 = 0, Bd1 = 0, Bdd1 = 0, Bt1 = 0, Btt1 = 0, Bdt1 = 0, ps1 = 0, psd1 = 0, psdd1 = 0, pst1 = 0, pstt1 = 0, psdt1 = 0;
+  const pe1 = 32 * q + 800 * tm1 * tm1;
+  if (pe1 < 200) {
+    const qe1 = qc * qc;
+    const qa1 = q * q * qh;
+    const th1 = 1 - t + 0.32 * q * qe1;
+    const D1 = th1 * th1 + 0.2 * q * qa1;
+    const G1 = 2.1333333333333333 * th1 * qe1 + 1.4000000000000001 * qa1;
+    const Dd1 = dm1 * G1;
+    const Ddd1 = G1 + 7.000000000000001 * qa1 + 2.2755555555555556 * q * q * qc + 2.8444444444444446 * th1 * qe1;
+    Db1 = Math.pow(D1, 0.95);
+    const Db11 = D1 > 0 ? Db1 / D1 : 0;
+    const Db21 = Db11 / D1;
+    Bd1 = 0.95 * Db11 * Dd1;
+    Bdd1 = 0.95 * (Db11 * Ddd1 + -0.050000000000000044 * Db21 * Dd1 * Dd1);
+    Bt1 = -1.9 * th1 * Db11;
+    Btt1 = 1.9 * Db11 + -0.19000000000000017 * th1 * th1 * Db21;
+    Bdt1 = -2.026666666666667 * Db11 * dm1 * qe1 + 0.09500000000000008 * th1 * Db21 * Dd1;
+    ps1 = Math.exp(-pe1);
+    psd1 = -64 * dm1 * ps1;
+    psdd1 = (64 * q - 1) * 64 * ps1;
+    pst1 = -1600 * tm1 * ps1;
+    pstt1 = (1600 * tm1 * tm1 - 1) * 1600 * ps1;
+    psdt1 = 102400 * dm1 * tm1 * ps1;
+  }
   out[0] =
     (s0 +
     e1 * s1 +

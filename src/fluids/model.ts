@@ -52,6 +52,14 @@ export class FluidModel {
   readonly rlT: Float64Array;
   readonly rvN: Float64Array;
   readonly rvT: Float64Array;
+  /**
+   * The ancillaries' exponents as multiples k/q of one root ϑ^(1/q) (q ≤ 24, shared by the three
+   * equations), so that ϑ^t is a short product instead of Math.pow; q = 0 when there is none.
+   */
+  readonly ancillaryRoot: number;
+  readonly psK: Int32Array;
+  readonly rlK: Int32Array;
+  readonly rvK: Int32Array;
   readonly pressureMargin: number;
 
   constructor(
@@ -82,6 +90,14 @@ export class FluidModel {
     this.rvN = Float64Array.from(a.vaporDensity.n);
     this.rvT = Float64Array.from(a.vaporDensity.t);
     this.pressureMargin = a.pressureMargin;
+    const all = [...a.vaporPressure.t, ...a.liquidDensity.t, ...a.vaporDensity.t];
+    let q = 0;
+    for (let c = 1; c <= 24 && q === 0; c++) if (all.every((t) => t > 0 && Math.abs(t * c - Math.round(t * c)) < 1e-9)) q = c;
+    this.ancillaryRoot = q;
+    const ks = (t: readonly number[]) => Int32Array.from(t, (x) => (q === 0 ? 0 : Math.round(x * q)));
+    this.psK = ks(a.vaporPressure.t);
+    this.rlK = ks(a.liquidDensity.t);
+    this.rvK = ks(a.vaporDensity.t);
   }
 }
 
@@ -131,28 +147,59 @@ export class FluidContext {
   satDL = NaN;
   satDV = NaN;
   satP = NaN;
+  /** Saturation temperature of the last saturation solve by pressure (scratch). */
+  satT = NaN;
 
   constructor(readonly model: FluidModel) {}
 }
 
-/** ϑ = 1 − T/Tc; Σ n ϑ^t of an ancillary. */
-function ancillarySum(n: Float64Array, t: Float64Array, theta: number): number {
+/** x^k for an integer k ≥ 0 by binary powering. */
+function integerPower(x: number, k: number): number {
+  let r = 1;
+  let b = x;
+  let e = k;
+  while (e > 0) {
+    if ((e & 1) === 1) r *= b;
+    b *= b;
+    e >>= 1;
+  }
+  return r;
+}
+
+/** ϑ^(1/q) of the model's ancillary root (q = 1, 2, 3, 4, 6 by roots; otherwise Math.pow once). */
+function ancillaryBase(m: FluidModel, theta: number): number {
+  const q = m.ancillaryRoot;
+  if (q === 1) return theta;
+  if (q === 2) return Math.sqrt(theta);
+  if (q === 3) return Math.cbrt(theta);
+  if (q === 4) return Math.sqrt(Math.sqrt(theta));
+  if (q === 6) return Math.cbrt(Math.sqrt(theta));
+  return Math.pow(theta, 1 / q);
+}
+
+/** ϑ = 1 − T/Tc; Σ n ϑ^t of an ancillary (powers of one root when the model has one). */
+function ancillarySum(m: FluidModel, n: Float64Array, t: Float64Array, k: Int32Array, theta: number): number {
   let s = 0;
-  for (let i = 0; i < n.length; i++) s += n[i]! * Math.pow(theta, t[i]!);
+  if (m.ancillaryRoot === 0) {
+    for (let i = 0; i < n.length; i++) s += n[i]! * Math.pow(theta, t[i]!);
+    return s;
+  }
+  const r = ancillaryBase(m, theta);
+  for (let i = 0; i < n.length; i++) s += n[i]! * integerPower(r, k[i]!);
   return s;
 }
 
 /** Ancillary vapour pressure (Pa) at T < Tc: a starting value. */
 export function ancillaryPressure(m: FluidModel, T: number): number {
-  return m.pc * Math.exp((m.Tc / T) * ancillarySum(m.psN, m.psT, 1 - T / m.Tc));
+  return m.pc * Math.exp((m.Tc / T) * ancillarySum(m, m.psN, m.psT, m.psK, 1 - T / m.Tc));
 }
 /** Ancillary saturated liquid density (kg/m³) at T < Tc. */
 export function ancillaryLiquidDensity(m: FluidModel, T: number): number {
-  return m.rhoc * (1 + ancillarySum(m.rlN, m.rlT, 1 - T / m.Tc));
+  return m.rhoc * (1 + ancillarySum(m, m.rlN, m.rlT, m.rlK, 1 - T / m.Tc));
 }
 /** Ancillary saturated vapour density (kg/m³) at T < Tc. */
 export function ancillaryVaporDensity(m: FluidModel, T: number): number {
-  return m.rhoc * Math.exp(ancillarySum(m.rvN, m.rvT, 1 - T / m.Tc));
+  return m.rhoc * Math.exp(ancillarySum(m, m.rvN, m.rvT, m.rvK, 1 - T / m.Tc));
 }
 
 /** Pressure (Pa) at (T, ρ), with (∂p/∂ρ)_T into ctx.ar-derived scratch: returns p; `pressureSlope` reads the slope. */
