@@ -147,6 +147,8 @@ export function stateFromPT(ctx: FluidContext, p: number, T: number, out: FluidS
   const phase = ctx.work.phase;
   const st = propertiesAt(ctx, T, ctx.work.rho, out);
   out.phase = phase;
+  // the density solves p(T, ρ) = p to rounding: report the pressure asked for
+  out.p = p;
   return st;
 }
 
@@ -399,12 +401,17 @@ function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: 
 
 /** The state at (p [Pa], h [J/kg]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN. */
 export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidState): StatusCode {
-  return flashPY(ctx, p, h, BY_H, out);
+  const st = flashPY(ctx, p, h, BY_H, out);
+  // solved to rounding in p: report the pressure asked for
+  if (st === Status.ok) out.p = p;
+  return st;
 }
 
 /** The state at (p [Pa], s [J/(kg·K)]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN. */
 export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidState): StatusCode {
-  return flashPY(ctx, p, s, BY_S, out);
+  const st = flashPY(ctx, p, s, BY_S, out);
+  if (st === Status.ok) out.p = p;
+  return st;
 }
 
 /**

@@ -8,7 +8,23 @@
  *
  * @packageDocumentation
  */
-export { fluid, fluidNames, type Fluid, type FluidPair, type FluidPhase, type FluidSaturationResult, type FluidStateResult, type FluidSaturatedPhase } from './fluid.js';
+export {
+  fluid,
+  fluidNames,
+  type Fluid,
+  type FluidPair,
+  type FluidPairInput,
+  type FluidPairCheck,
+  type FluidPhase,
+  type FluidRange,
+  type FluidSaturationCheck,
+  type FluidSaturationInput,
+  type FluidSaturationResult,
+  type FluidStateResult,
+  type FluidSaturatedPhase,
+} from './fluid.js';
+export { fluidBatch, type FluidBatchInputs, type FluidBatchProperty } from './batch.js';
+export { saturationTable, type FluidSaturationColumn, type SaturationTableOptions } from './tables.js';
 export type { FluidSource } from './definition.js';
 export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, UnknownNameError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
@@ -16,4 +32,4 @@ export { safe } from '../core/safe.js';
 export type { SafeResult } from '../core/safe.js';
 export type { StatusCode } from '../core/status.js';
 export { quantity, temperatureDifference, Quantity } from '../units/quantity.js';
-export type { QuantityLike } from '../units/quantity.js';
+export type { QuantityInput, QuantityLike } from '../units/quantity.js';
