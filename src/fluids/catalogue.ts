@@ -30,7 +30,15 @@ export function fluidDefinition(name: string): FluidDefinition | undefined {
 
 const compiled = new Map<string, FluidModel>();
 
-/** The compiled model of a catalogue fluid (built on first use, then shared: it is immutable). */
+/**
+ * The compiled model of a catalogue fluid (built on first use, then shared: it is immutable), or
+ * undefined for a name that is not in the catalogue (catalogue names only; aliases are the facade's).
+ * @example
+ * ```ts
+ * fluidModel('water')!.Tc;   //=> 647.096
+ * fluidModel('nope');        //=> undefined
+ * ```
+ */
 export function fluidModel(name: string): FluidModel | undefined {
   let m = compiled.get(name);
   if (m === undefined) {

@@ -27,8 +27,8 @@ const HIGH_END_BELOW = -2;
  * Density (kg/m³) with p(T, ρ) = p on [lo, hi], where p(T, lo) < p is expected (checked when the
  * iteration starts at lo: {@link LOW_END_ABOVE} when it is not); p(T, hi) > p is checked only if the
  * iteration needs the upper end ({@link HIGH_END_BELOW} when it is not). NaN when there is no
- * convergence. A Newton step below 1e-10·ρ is taken as the answer (the error after it is of order
- * 1e-20·ρ, quadratic convergence).
+ * convergence. A Newton step below 1e-8·ρ is taken as the answer (the error after it is of order
+ * 1e-16·ρ times a constant of order one: quadratic convergence).
  */
 function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: number, guess: number): number {
   const m = ctx.model;
@@ -54,7 +54,7 @@ function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: n
     // converged: f at its rounding level
     if (Math.abs(f) <= 4e-16 * x * Math.abs(df)) return x;
     let next = df > 0 ? x - f / df : NaN;
-    if (Math.abs(next - x) <= 1e-10 * x && next > a && next < b) return next;
+    if (Math.abs(next - x) <= 1e-8 * x && next > a && next < b) return next;
     if (!(next > a && next < b)) {
       if (!hiChecked) {
         // the upper end is needed: check that it brackets the root
@@ -136,7 +136,11 @@ function checkPT(ctx: FluidContext, p: number, T: number): StatusCode {
  * @returns `Status.ok`; `Status.outOfRange` outside the fluid's range; `Status.invalidInput`
  * @example
  * ```ts
- * stateFromPT(ctx, 101325, 300, out);   //=> 0; out.rho = 996.5 kg/m³, out.phase = FLUID_PHASE.liquid
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPT(ctx, 101325, 300, out);   //=> 0 (Status.ok)
+ * out.rho;                              //=> 996.556935... (kg/m³)
+ * out.phase;                            //=> 0 (FLUID_PHASE.liquid)
+ * stateFromPT(ctx, 101325, 200, out);   //=> 1 (Status.outOfRange: below the triple point)
  * ```
  */
 export function stateFromPT(ctx: FluidContext, p: number, T: number, out: FluidState): StatusCode {
@@ -178,6 +182,13 @@ function mix(ctx: FluidContext, x: number, out: FluidState): StatusCode {
 /**
  * The two-phase mixture of quality x at T (K): saturation by temperature, then the lever rule.
  * @returns `Status.ok` (the state is computed; cp, cv, w and jouleThomson are NaN there, not defined), or an error status
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTX(ctx, 373.15, 0.5, out);   //=> 0 (Status.ok)
+ * out.p;                                //=> 101417.99665... (Pa)
+ * out.cp;                               //=> NaN (not defined in the two-phase state)
+ * ```
  */
 export function stateFromTX(ctx: FluidContext, T: number, x: number, out: FluidState): StatusCode {
   if (!Number.isFinite(T) || !Number.isFinite(x)) return Status.invalidInput;
@@ -187,7 +198,15 @@ export function stateFromTX(ctx: FluidContext, T: number, x: number, out: FluidS
   return mix(ctx, x, out);
 }
 
-/** The two-phase mixture of quality x at p (Pa). Returns as {@link stateFromTX}. */
+/**
+ * The two-phase mixture of quality x at p (Pa). Returns as {@link stateFromTX}.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPX(ctx, 1e6, 1, out);   //=> 0 (Status.ok)
+ * out.T;                           //=> 453.02800788... (K, saturated vapour at 1 MPa)
+ * ```
+ */
 export function stateFromPX(ctx: FluidContext, p: number, x: number, out: FluidState): StatusCode {
   if (!Number.isFinite(p) || !Number.isFinite(x)) return Status.invalidInput;
   if (!(x >= 0 && x <= 1)) return Status.outOfRange;
@@ -199,6 +218,13 @@ export function stateFromPX(ctx: FluidContext, p: number, x: number, out: FluidS
 /**
  * The state at (T [K], ρ [kg/m³]): single-phase from the equation directly, or a two-phase
  * mixture when T < T_c and ρ'' < ρ < ρ'.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTRho(ctx, 647, 358, out);   //=> 0 (Status.ok)
+ * out.p;                               //=> 22038475.5706... (IAPWS-95 Table 7: 0.220384756e2 MPa)
+ * stateFromTRho(ctx, 400, 10, out);    //=> 0; out.x = 0.13567821..., out.phase = 2 (two-phase)
+ * ```
  */
 export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: FluidState): StatusCode {
   const m = ctx.model;
@@ -216,7 +242,15 @@ export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: Fl
   return st;
 }
 
-/** The state at (T [K], v [m³/kg]): {@link stateFromTRho} at ρ = 1/v. */
+/**
+ * The state at (T [K], v [m³/kg]): {@link stateFromTRho} at ρ = 1/v.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTV(ctx, 300, 1e-3, out);   //=> 0 (Status.ok)
+ * out.p;                              //=> 7833001.35... (Pa: compressed liquid)
+ * ```
+ */
 export function stateFromTV(ctx: FluidContext, T: number, v: number, out: FluidState): StatusCode {
   if (!Number.isFinite(v) || !(v > 0)) return Status.invalidInput;
   return stateFromTRho(ctx, T, 1 / v, out);
@@ -301,7 +335,8 @@ function solveIsobar(ctx: FluidContext, p: number, target: number, by: number, l
 /**
  * Newton's method in (T, ρ) on p(T, ρ) = p and h(T, ρ) = target (or s), from (T0, ρ0), with the
  * step scaled to keep T within 25 % and ρ within a factor 2 of the last point. Writes the state into
- * `out` and returns `Status.ok` when the step falls below 1e-10 (relative) with (∂p/∂ρ)_T > 0 at a
+ * `out` and returns `Status.ok` when the step falls below 1e-7 (relative; the error after it is of
+ * order 1e-14, quadratic convergence) with (∂p/∂ρ)_T > 0 at a
  * temperature in range; `Status.noConvergence` otherwise (the caller then takes the bracketed path).
  */
 function newtonPY(ctx: FluidContext, p: number, target: number, by: number, T0: number, rho0: number, out: FluidState): StatusCode {
@@ -331,13 +366,29 @@ function newtonPY(ctx: FluidContext, p: number, target: number, by: number, T0: 
     dR *= lambda;
     T += dT;
     rho += dR;
-    if (lambda === 1 && i >= 1 && Math.abs(dT) <= 1e-10 * T && Math.abs(dR) <= 1e-10 * rho) {
+    if (lambda === 1 && i >= 1 && Math.abs(dT) <= 1e-7 * T && Math.abs(dR) <= 1e-7 * rho) {
       if (!(T >= m.Tmin && T <= m.Tmax && rho <= m.rhoMax)) return Status.noConvergence;
       if (propertiesAt(ctx, T, rho, out) !== Status.ok || !(out.dpdrho > 0)) return Status.noConvergence;
       return Status.ok;
     }
   }
   return Status.noConvergence;
+}
+
+/**
+ * The state at (p, T) into ctx.start, and from it the isobaric step towards `target`: T0 and ρ0 of a
+ * Newton start in ctx.start.T and ctx.start.rho (ΔT = Δy/(∂y/∂T)_p, Δρ = −(∂p/∂T)_ρ/(∂p/∂ρ)_T ΔT).
+ * False when there is no state at (p, T).
+ */
+function isobaricStart(ctx: FluidContext, p: number, T: number, target: number, by: number, lo: number, hi: number): boolean {
+  const st = ctx.start;
+  if (densityPT(ctx, p, T, 0) !== Status.ok || propertiesAt(ctx, T, ctx.work.rho, st) !== Status.ok) return false;
+  const T0 = Math.min(Math.max(T + (target - valueOf(st, by)) / slopeOf(st, by), lo), hi);
+  let rho0 = st.rho - (st.dpdT / st.dpdrho) * (T0 - T);
+  if (!(rho0 > 0.5 * st.rho && rho0 < 2 * st.rho)) rho0 = st.rho;
+  st.T = T0;
+  st.rho = rho0;
+  return true;
 }
 
 /** The 2-D Newton from a start on one side of the dome (or above it); the phase is checked after. */
@@ -379,19 +430,21 @@ function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: 
     let rho0 = sat.rho - (sat.dpdT / sat.dpdrho) * (T0 - sat.T);
     if (!(rho0 > 0.5 * sat.rho && rho0 < 2 * sat.rho)) rho0 = target < yl ? sat.rho : Math.min(sat.rho, p / (m.R * T0));
     const side = target < yl ? FLUID_PHASE.liquid : FLUID_PHASE.vapor;
-    if (tryNewtonPY(ctx, p, target, by, T0, rho0, side, Ts, out)) return Status.ok;
+    if (side === FLUID_PHASE.liquid && T0 < Ts - 0.25 * (Ts - m.Tmin)) {
+      // far below saturation: the liquid at the lowest temperature is the nearer start
+      if (isobaricStart(ctx, p, m.Tmin, target, by, m.Tmin, Ts) && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, side, Ts, out)) return Status.ok;
+    } else if (tryNewtonPY(ctx, p, target, by, T0, rho0, side, Ts, out)) return Status.ok;
     if (target < yl) return solveIsobar(ctx, p, target, by, m.Tmin, Ts, false, true, Ts + (target - yl) / slopeOf(ctx.liquid, by), out);
     return solveIsobar(ctx, p, target, by, Ts, m.Tmax, true, false, Ts + (target - yv) / slopeOf(ctx.vapor, by), out);
   }
   if (p >= m.pc) {
     // above the critical pressure: one isobaric step from the state at T_c (away from the critical
     // point itself, where the start is poor and the bracketed path is used)
-    if (p > 1.05 * m.pc && densityPT(ctx, p, m.Tc, 0) === Status.ok && propertiesAt(ctx, m.Tc, ctx.work.rho, ctx.vapor) === Status.ok) {
-      const c = ctx.vapor;
-      const T0 = Math.min(Math.max(m.Tc + (target - valueOf(c, by)) / slopeOf(c, by), m.Tmin), m.Tmax);
-      let rho0 = c.rho - (c.dpdT / c.dpdrho) * (T0 - m.Tc);
-      if (!(rho0 > 0.5 * c.rho && rho0 < 2 * c.rho)) rho0 = c.rho;
-      if (tryNewtonPY(ctx, p, target, by, T0, rho0, FLUID_PHASE.supercritical, m.Tc, out)) return Status.ok;
+    if (p > 1.05 * m.pc && isobaricStart(ctx, p, m.Tc, target, by, m.Tmin, m.Tmax)) {
+      // below T_c (a liquid-like target) the state at the lowest temperature is the nearer start
+      const below = ctx.start.T < m.Tc;
+      if (!below && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, FLUID_PHASE.supercritical, m.Tc, out)) return Status.ok;
+      if (below && isobaricStart(ctx, p, m.Tmin, target, by, m.Tmin, m.Tc) && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, FLUID_PHASE.supercritical, m.Tc, out)) return Status.ok;
     }
     return solveIsobar(ctx, p, target, by, m.Tmin, m.Tmax, false, false, m.Tc, out);
   }
@@ -399,7 +452,15 @@ function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: 
   return solveIsobar(ctx, p, target, by, m.Tmin, m.Tmax, false, false, m.Tmin + 50, out);
 }
 
-/** The state at (p [Pa], h [J/kg]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN. */
+/**
+ * The state at (p [Pa], h [J/kg]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPH(ctx, 1e6, 3e6, out);      //=> 0; out.T = 549.16849785... K, out.phase = 1 (vapour)
+ * stateFromPH(ctx, 101325, 1.5e6, out);  //=> 0; out.x = 0.47904093..., out.cp = NaN
+ * ```
+ */
 export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidState): StatusCode {
   const st = flashPY(ctx, p, h, BY_H, out);
   // solved to rounding in p: report the pressure asked for
@@ -407,7 +468,14 @@ export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidS
   return st;
 }
 
-/** The state at (p [Pa], s [J/(kg·K)]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN. */
+/**
+ * The state at (p [Pa], s [J/(kg·K)]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPS(ctx, 1e5, 7000, out);   //=> 0; out.T = 372.75592889... K, out.x = 0.94074577...
+ * ```
+ */
 export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidState): StatusCode {
   const st = flashPY(ctx, p, s, BY_S, out);
   if (st === Status.ok) out.p = p;
@@ -417,6 +485,11 @@ export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidS
 /**
  * The state at (h [J/kg], s [J/(kg·K)]): Newton steps in ln p on h(p, s) = h, with (∂h/∂p)_s = v,
  * each step a (p, s) flash, inside a bracket from 1e-4 of the triple-point pressure to p_max.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromHS(ctx, 3e6, 7000, out);   //=> 0; out.p = 1075561.49511... Pa, out.T = 550.23690782... K
+ * ```
  */
 export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidState): StatusCode {
   const m = ctx.model;

@@ -143,6 +143,8 @@ export class FluidContext {
   readonly liquid = new FluidState();
   readonly vapor = new FluidState();
   readonly work = new FluidState();
+  /** Starting state of a flash (scratch). */
+  readonly start = new FluidState();
   /** Saturation solve results: δ', δ'' and the pressure (scratch). */
   satDL = NaN;
   satDV = NaN;
@@ -193,6 +195,49 @@ function ancillarySum(m: FluidModel, n: Float64Array, t: Float64Array, k: Int32A
 export function ancillaryPressure(m: FluidModel, T: number): number {
   return m.pc * Math.exp((m.Tc / T) * ancillarySum(m, m.psN, m.psT, m.psK, 1 - T / m.Tc));
 }
+/**
+ * T (K) at which the ancillary vapour pressure is e^lnp, by Newton's method on
+ * ln p = ln p_c + (T_c/T) S(ϑ), S = Σ nϑ^t, d ln p/dT = −(T_c/T²) S − S'(ϑ)/T, S' = Σ n t ϑ^(t−1),
+ * kept inside (T_t, T_c); to 1e-9 (a starting value for the saturation solve).
+ */
+export function ancillaryTemperature(m: FluidModel, lnp: number): number {
+  const lt = Math.log(m.pt);
+  const lc = Math.log(m.pc);
+  // start on the line ln p = a − b/T through the triple and critical points
+  let T = 1 / (1 / m.Tt + ((lnp - lt) / (lc - lt)) * (1 / m.Tc - 1 / m.Tt));
+  if (!(T > m.Tt * 0.999 && T < m.Tc)) T = 0.5 * (m.Tt + m.Tc);
+  const n = m.psN;
+  const t = m.psT;
+  for (let i = 0; i < 30; i++) {
+    const theta = 1 - T / m.Tc;
+    let S = 0;
+    let dS = 0;
+    if (m.ancillaryRoot === 0) {
+      for (let j = 0; j < n.length; j++) {
+        const x = n[j]! * Math.pow(theta, t[j]!);
+        S += x;
+        dS += t[j]! * x;
+      }
+    } else {
+      const r = ancillaryBase(m, theta);
+      for (let j = 0; j < n.length; j++) {
+        const x = n[j]! * integerPower(r, m.psK[j]!);
+        S += x;
+        dS += t[j]! * x;
+      }
+    }
+    dS /= theta;
+    const f = lc + (m.Tc / T) * S - lnp;
+    const df = -(m.Tc / (T * T)) * S - dS / T;
+    let next = T - f / df;
+    if (!(next > m.Tt * 0.999)) next = 0.5 * (T + m.Tt * 0.999);
+    if (!(next < m.Tc)) next = 0.5 * (T + m.Tc);
+    if (Math.abs(next - T) <= 1e-9 * T) return next;
+    T = next;
+  }
+  return T;
+}
+
 /** Ancillary saturated liquid density (kg/m³) at T < Tc. */
 export function ancillaryLiquidDensity(m: FluidModel, T: number): number {
   return m.rhoc * (1 + ancillarySum(m, m.rlN, m.rlT, m.rlK, 1 - T / m.Tc));
@@ -221,6 +266,14 @@ export function pressureSlope(ctx: FluidContext, T: number, rho: number): number
  * Every property at (T [K], ρ [kg/m³]) from the equation of state, into `out` (phase left as is).
  * @returns `Status.ok`, `Status.invalidInput` for non-positive or non-finite input, or
  *   `Status.undefinedProperty` where cp, cv, w or μ_JT are not finite (exactly at the critical point)
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * propertiesAt(ctx, 500, 838.025, out);   //=> 0 (Status.ok)
+ * out.p;    //=> 10000385.80092... (IAPWS-95 Table 7: 0.100003858e2 MPa)
+ * out.w;    //=> 1271.28440914... (Table 7: 0.127128441e4 m/s)
+ * propertiesAt(ctx, 500, -1, out);        //=> 3 (Status.invalidInput)
+ * ```
  */
 export function propertiesAt(ctx: FluidContext, T: number, rho: number, out: FluidState): StatusCode {
   if (!(T > 0 && rho > 0 && T < Infinity && rho < Infinity)) return Status.invalidInput;

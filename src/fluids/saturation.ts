@@ -12,7 +12,7 @@
  * @module
  */
 import { Status, type StatusCode } from '../core/status.js';
-import { ancillaryLiquidDensity, ancillaryPressure, ancillaryVaporDensity, FLUID_PHASE, propertiesAt, type FluidContext, type FluidModel, type FluidState } from './model.js';
+import { ancillaryLiquidDensity, ancillaryPressure, ancillaryTemperature, ancillaryVaporDensity, FLUID_PHASE, propertiesAt, type FluidContext, type FluidState } from './model.js';
 
 /**
  * Solves the equilibrium at T from reduced densities dL, dV into ctx.satDL, ctx.satDV, ctx.satP.
@@ -58,8 +58,9 @@ export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: numb
       stepV *= 0.5;
     }
     const stall = Math.abs(stepL) <= 4e-16 * dL && Math.abs(stepV) <= 4e-16 * dV;
-    if (i >= 1 && Math.abs(stepL) <= 1e-10 * dL && Math.abs(stepV) <= 1e-10 * dV) {
-      // quadratic convergence: the error after this step is of order (1e-10)², below rounding; take
+    if (i >= 1 && Math.abs(stepL) <= 1e-7 * dL && Math.abs(stepV) <= 1e-7 * dV) {
+      // quadratic convergence: the error after this step is of order (1e-7)² (times a constant of
+      // order one), at the rounding level of the densities; take
       // it without another evaluation (J at the new point to first order, J_δ·step, is exact here)
       ctx.satDL = dL + stepL;
       ctx.satDV = dV + stepV;
@@ -111,8 +112,11 @@ function critical(ctx: FluidContext, liquid: FluidState, vapor: FluidState): Sta
  *   `Status.undefinedProperty` at T = T_c exactly (cp, cv, w diverge there)
  * @example
  * ```ts
- * const ctx = new FluidContext(waterModel()), l = new FluidState(), v = new FluidState();
- * saturationAtT(ctx, 450, l, v);   //=> 0; l.p = 932203.564 Pa (IAPWS-95 Table 8)
+ * const ctx = new FluidContext(fluidModel('water')!), l = new FluidState(), v = new FluidState();
+ * saturationAtT(ctx, 450, l, v);   //=> 0 (Status.ok)
+ * l.p;                             //=> 932203.56362... (IAPWS-95 Table 8: 0.932203564 MPa)
+ * v.rho;                           //=> 4.81200360... (Table 8: 0.481200360e1 kg/m³)
+ * saturationAtT(ctx, 700, l, v);   //=> 1 (Status.outOfRange: above T_c)
  * ```
  */
 export function saturationAtT(ctx: FluidContext, T: number, liquid: FluidState, vapor: FluidState): StatusCode {
@@ -123,27 +127,6 @@ export function saturationAtT(ctx: FluidContext, T: number, liquid: FluidState, 
   const s = solveSaturationDensities(ctx, T, ancillaryLiquidDensity(m, T) / m.rhor, ancillaryVaporDensity(m, T) / m.rhor);
   if (s !== Status.ok) return s;
   return finish(ctx, T, liquid, vapor);
-}
-
-/** T (K) where the ancillary vapour pressure is e^lnp: Newton steps on ln p_anc(T), kept in [T_t, T_c). */
-function ancillaryTemperature(m: FluidModel, lnp: number): number {
-  // ln p_anc = ln pc + (Tc/T) Σ nϑ^t: start from the Clausius-Clapeyron line through the triple and critical points
-  const lt = Math.log(m.pt);
-  const lc = Math.log(m.pc);
-  let T = 1 / (1 / m.Tt + ((lnp - lt) / (lc - lt)) * (1 / m.Tc - 1 / m.Tt));
-  if (!(T > m.Tt && T < m.Tc)) T = 0.5 * (m.Tt + m.Tc);
-  for (let i = 0; i < 30; i++) {
-    const h = 1e-6 * T;
-    const Th = Math.min(T + h, m.Tc);
-    const f = Math.log(ancillaryPressure(m, T)) - lnp;
-    const df = (Math.log(ancillaryPressure(m, Th)) - Math.log(ancillaryPressure(m, T - h))) / (Th - (T - h));
-    let next = T - f / df;
-    if (!(next > m.Tt * 0.999)) next = 0.5 * (T + m.Tt);
-    if (!(next < m.Tc)) next = 0.5 * (T + m.Tc);
-    if (Math.abs(next - T) < 1e-9 * T) return next;
-    T = next;
-  }
-  return T;
 }
 
 /**
@@ -195,7 +178,8 @@ function saturationNewton3(ctx: FluidContext, p: number, T0: number): StatusCode
     const nV = dV + sV;
     const nT = tau + sT;
     if (!(nV > 0 && nL > nV && nT > tauMin && nT < tauMax)) return Status.noConvergence;
-    const small = Math.abs(sL) <= 1e-10 * dL && Math.abs(sV) <= 1e-10 * dV && Math.abs(sT) <= 1e-11 * tau;
+    // quadratic convergence: after steps below 1e-7 the error is of order 1e-14
+    const small = Math.abs(sL) <= 1e-7 * dL && Math.abs(sV) <= 1e-7 * dV && Math.abs(sT) <= 1e-8 * tau;
     dL = nL;
     dV = nV;
     tau = nT;
@@ -213,6 +197,13 @@ function saturationNewton3(ctx: FluidContext, p: number, T0: number): StatusCode
 /**
  * Saturated liquid and vapour at p (Pa), from the triple-point to the critical pressure.
  * @returns as {@link saturationAtT}
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), l = new FluidState(), v = new FluidState();
+ * saturationAtP(ctx, 101325, l, v);   //=> 0 (Status.ok)
+ * l.T;                                //=> 373.12429584... (373.124 K, common practice)
+ * v.h - l.h;                          //=> 2256471.59... (J/kg)
+ * ```
  */
 export function saturationAtP(ctx: FluidContext, p: number, liquid: FluidState, vapor: FluidState): StatusCode {
   const m = ctx.model;

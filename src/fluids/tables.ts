@@ -83,7 +83,7 @@ const MAX_ROWS = 10000;
  * const t = saturationTable('water', { by: 'T', from: '0.01 °C', to: '370 °C', step: '10 K' });
  * t.lookup('p', '100 °C').value.in('kPa');      //=> 101.4229... (a row: as fluid('water').saturation gives it)
  * t.data.interpolationError?.hfg?.linear?.maxRelative;   //=> 0.039 (at 365.005 °C, next to the critical point)
- * saturationTable('water', { by: 'p', from: '1 psia', to: '3000 psia', step: '50 psia', units: 'US' }).lookup('T', '14.7 psia').value.in('°F');   //=> 211.95... (between rows)
+ * saturationTable('water', { by: 'p', from: '5 psia', to: '3000 psia', step: '5 psia', units: 'US' }).lookup('T', '14.7 psia').value.in('°F');   //=> 211.798... (between rows 10 and 15 psia; the saturation call gives 211.9676 °F)
  * ```
  */
 export function saturationTable<I extends QuantityLike<'temperature'> | QuantityLike<'pressure'> | QuantityLike<'temperatureDifference'> | string>(
