@@ -62,3 +62,16 @@ describe('water bundle', () => {
     expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
   });
 });
+
+describe('fluids bundle', () => {
+  it('heatstate/fluids with one fluid (IAPWS-95 water): at most 30 kB gzipped, without zod, the table layer, IF97 or decimal.js', async () => {
+    const js = await bundle(`import { fluid } from 'heatstate/fluids'; const w = fluid('water'); console.log(w.state({ T: '300 K', p: '1 bar' }), w.saturation({ T: '400 K' }), w.deltaH({ T: '300 K', p: '1 bar' }, { p: '1 bar', x: 1 }));`);
+    expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
+    expect(js).not.toMatch(/ZodError/);
+    expect(js).not.toMatch(/interpolationError|monotone-cubic/);
+    // IF97 region 1 (Table 2, n1) must not appear; nor the IAPWS-95 coefficient arrays of the data file (kernels carry them)
+    expect(js).not.toMatch(/0\.14632971213167/);
+    expect(js).not.toMatch(/Table 2, i = 8\.\.51/);
+    expect(gzipSync(js).length / 1024).toBeLessThan(30);
+  });
+});

@@ -5,7 +5,26 @@
  *
  * @module
  */
-import water from '../../data/fluids/water.json';
+// named imports of the top-level keys the library reads: a bundler leaves out the coefficient
+// arrays (`residual`, `ideal`), which live in the generated kernels
+import {
+  aliases as waterAliases,
+  ancillary as waterAncillary,
+  basis as waterBasis,
+  critical as waterCritical,
+  equation as waterEquation,
+  formula as waterFormula,
+  gasConstant as waterGasConstant,
+  loadable as waterLoadable,
+  molarMass as waterMolarMass,
+  name as waterName,
+  range as waterRange,
+  reducing as waterReducing,
+  source as waterSource,
+  triple as waterTriple,
+  uncertainty as waterUncertainty,
+  verification as waterVerification,
+} from '../../data/fluids/water.json';
 import type { FluidDefinition } from './definition.js';
 import { waterIdeal, waterResidual } from './kernels.generated.js';
 import { FluidModel, type IdealKernel, type ResidualKernel } from './model.js';
@@ -17,7 +36,29 @@ interface Entry {
 }
 
 const ENTRIES: Readonly<Record<string, Entry>> = {
-  water: { definition: () => water as unknown as FluidDefinition, residual: waterResidual, ideal: waterIdeal },
+  water: {
+    definition: () =>
+      ({
+        name: waterName,
+        formula: waterFormula,
+        aliases: waterAliases,
+        equation: waterEquation,
+        source: waterSource,
+        basis: waterBasis,
+        verification: waterVerification,
+        uncertainty: waterUncertainty,
+        loadable: waterLoadable,
+        molarMass: waterMolarMass,
+        gasConstant: waterGasConstant,
+        reducing: waterReducing,
+        critical: waterCritical,
+        triple: waterTriple,
+        range: waterRange,
+        ancillary: waterAncillary,
+      }) as unknown as FluidDefinition,
+    residual: waterResidual,
+    ideal: waterIdeal,
+  },
 };
 
 /** The catalogue's fluid names. */
