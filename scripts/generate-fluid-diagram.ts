@@ -122,7 +122,7 @@ function waterPH(): string {
   for (const s of [2, 3, 4, 5, 6, 7, 8, 9]) {
     const run: [number, number][] = [];
     for (const p of PRESSURES) if (stateFromPS(ctx, p, s * 1e3, a) === Status.ok) run.push([kJ(a.h), MPa(p)]);
-    series.push({ points: [run], label: `s = ${s}`, color: '#2471a3', width: 1, dash: '5 3', labelAt: [0, Math.min(run.length - 1, 100)] });
+    series.push({ points: [run], label: `s = ${s}`, color: '#2471a3', width: 1, dash: '5 3', labelAt: [0, Math.min(run.length - 1, 30)] });
   }
   return chart(
     'Water (IAPWS-95): p–h diagram',
