@@ -44,7 +44,7 @@ export const KERNEL_SOURCES = {
   },
   fluids: {
     directory: 'data/fluids',
-    files: ['water'],
+    files: ['water', 'nitrogen'],
   },
 } as const;
 

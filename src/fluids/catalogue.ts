@@ -5,61 +5,16 @@
  *
  * @module
  */
-// named imports of the top-level keys the library reads: a bundler leaves out the coefficient
-// arrays (`residual`, `ideal`), which live in the generated kernels
-import {
-  aliases as waterAliases,
-  ancillary as waterAncillary,
-  basis as waterBasis,
-  critical as waterCritical,
-  equation as waterEquation,
-  formula as waterFormula,
-  gasConstant as waterGasConstant,
-  loadable as waterLoadable,
-  molarMass as waterMolarMass,
-  name as waterName,
-  range as waterRange,
-  reducing as waterReducing,
-  source as waterSource,
-  triple as waterTriple,
-  uncertainty as waterUncertainty,
-  verification as waterVerification,
-} from '../../data/fluids/water.json';
 import type { FluidDefinition } from './definition.js';
-import { waterIdeal, waterResidual } from './kernels.generated.js';
-import { FluidModel, type IdealKernel, type ResidualKernel } from './model.js';
+import type { CatalogueEntry } from './entries/entry.js';
+import { nitrogen } from './entries/nitrogen.js';
+import { water } from './entries/water.js';
+import { FluidModel } from './model.js';
 
-interface Entry {
-  readonly definition: () => FluidDefinition;
-  readonly residual: ResidualKernel;
-  readonly ideal: IdealKernel;
-}
-
-const ENTRIES: Readonly<Record<string, Entry>> = {
-  water: {
-    definition: () =>
-      ({
-        name: waterName,
-        formula: waterFormula,
-        aliases: waterAliases,
-        equation: waterEquation,
-        source: waterSource,
-        basis: waterBasis,
-        verification: waterVerification,
-        uncertainty: waterUncertainty,
-        loadable: waterLoadable,
-        molarMass: waterMolarMass,
-        gasConstant: waterGasConstant,
-        reducing: waterReducing,
-        critical: waterCritical,
-        triple: waterTriple,
-        range: waterRange,
-        ancillary: waterAncillary,
-      }) as unknown as FluidDefinition,
-    residual: waterResidual,
-    ideal: waterIdeal,
-  },
-};
+// an entry left out of a build (a bundle with one fluid) is undefined and skipped
+const ENTRIES: Readonly<Record<string, CatalogueEntry>> = Object.fromEntries(
+  Object.entries({ water, nitrogen } as Record<string, CatalogueEntry | undefined>).filter((e): e is [string, CatalogueEntry] => e[1] !== undefined),
+);
 
 /** The catalogue's fluid names. */
 export const FLUID_NAMES: readonly string[] = Object.keys(ENTRIES);

@@ -237,7 +237,8 @@ export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: Fl
   }
   const st = propertiesAt(ctx, T, rho, out);
   if (st === Status.invalidInput) return st;
-  if (out.p > m.pMax) return Status.outOfRange;
+  // above the pressure limit (beyond the rounding of a state solved at the limit itself)
+  if (out.p > m.pMax * (1 + 1e-12)) return Status.outOfRange;
   out.phase = T >= m.Tc ? (out.p >= m.pc ? FLUID_PHASE.supercritical : FLUID_PHASE.vapor) : rho >= m.rhoc ? FLUID_PHASE.liquid : FLUID_PHASE.vapor;
   return st;
 }
@@ -505,11 +506,12 @@ export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidS
     const st = stateFromPS(ctx, p, s, out);
     if (st !== Status.ok) {
       if (st !== Status.outOfRange) return st;
-      // s not reachable at this pressure (below the triple point only vapour entropies are; at
-      // high pressure only the lower ones): narrow the bracket from that side
+      // s not reachable at this pressure: above the entropy at T_max a lower pressure is needed,
+      // else (below the entropy at T_min) a higher one; narrow the bracket from that side
       if (hi - lo < 1e-12 * Math.abs(hi)) return Status.outOfRange;
-      if (p < m.pt) lo = y;
-      else hi = y;
+      const top = stateFromPT(ctx, p, m.Tmax, out);
+      if (top === Status.ok && s > out.s) hi = y;
+      else lo = y;
       y = 0.5 * (lo + hi);
       continue;
     }

@@ -500,7 +500,7 @@ export function fluid(name: string): Fluid {
  * The names of the catalogue's fluids (the ones whose equations passed their checks).
  * @example
  * ```ts
- * fluidNames();   //=> ['water']
+ * fluidNames();   //=> ['water', 'nitrogen']
  * ```
  */
 export function fluidNames(): readonly string[] {

@@ -57,6 +57,8 @@ export class FluidModel {
    * equations), so that ϑ^t is a short product instead of Math.pow; q = 0 when there is none.
    */
   readonly ancillaryRoot: number;
+  /** True when the liquid-density ancillary is ln(ρ'/ρc) = Σ n ϑ^t (else ρ'/ρc = 1 + Σ n ϑ^t). */
+  readonly liquidLogarithmic: boolean;
   readonly psK: Int32Array;
   readonly rlK: Int32Array;
   readonly rvK: Int32Array;
@@ -94,6 +96,7 @@ export class FluidModel {
     let q = 0;
     for (let c = 1; c <= 24 && q === 0; c++) if (all.every((t) => t > 0 && Math.abs(t * c - Math.round(t * c)) < 1e-9)) q = c;
     this.ancillaryRoot = q;
+    this.liquidLogarithmic = a.liquidDensity.logarithmic === true;
     const ks = (t: readonly number[]) => Int32Array.from(t, (x) => (q === 0 ? 0 : Math.round(x * q)));
     this.psK = ks(a.vaporPressure.t);
     this.rlK = ks(a.liquidDensity.t);
@@ -240,7 +243,8 @@ export function ancillaryTemperature(m: FluidModel, lnp: number): number {
 
 /** Ancillary saturated liquid density (kg/m³) at T < Tc. */
 export function ancillaryLiquidDensity(m: FluidModel, T: number): number {
-  return m.rhoc * (1 + ancillarySum(m, m.rlN, m.rlT, m.rlK, 1 - T / m.Tc));
+  const s = ancillarySum(m, m.rlN, m.rlT, m.rlK, 1 - T / m.Tc);
+  return m.rhoc * (m.liquidLogarithmic ? Math.exp(s) : 1 + s);
 }
 /** Ancillary saturated vapour density (kg/m³) at T < Tc. */
 export function ancillaryVaporDensity(m: FluidModel, T: number): number {

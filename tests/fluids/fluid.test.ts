@@ -26,7 +26,7 @@ describe('fluid(name)', () => {
     expect(fluid('water')).toBe(fluid('R-718'));
     expect(fluid('H2O')).toBe(fluid('r718'));
     expect(fluid('water').equation).toBe('IAPWS-95');
-    expect(fluidNames()).toEqual(['water']);
+    expect(fluidNames()).toEqual(['water', 'nitrogen']);
   });
 
   it('refuses an unknown or unshipped name with UnknownNameError and the closest names', () => {
