@@ -1,6 +1,7 @@
 /**
- * `heatstate/fluids`: real fluids from reference equations of state in the Helmholtz energy, starting
- * with water by IAPWS-95. The facade is {@link fluid}; the SI core (model, context, properties at
+ * `heatstate/fluids`: real fluids from reference equations of state in the Helmholtz energy: water by
+ * IAPWS-95 and nitrogen by Span et al. (2000); fluidBatch over typed arrays; saturationTable through
+ * the typed table layer. The facade is {@link fluid}; the SI core (model, context, properties at
  * (T, ρ), saturation, flashes) is the low-level entry `heatstate/fluids/core`.
  *
  * Results are engineering estimates: for pressure equipment, refrigerating systems and steam, defer
