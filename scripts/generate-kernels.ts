@@ -44,7 +44,7 @@ export const KERNEL_SOURCES = {
   },
   fluids: {
     directory: 'data/fluids',
-    files: ['water'],
+    files: ['water', 'nitrogen'],
   },
 } as const;
 
@@ -417,6 +417,27 @@ function residualFunction(fn: string, doc: string, f: FluidCoefficients): string
     body.push('const tm1 = t - 1;');
     body.push('const q = dm1 * dm1;');
   }
+  // q^e for the exponents of the non-analytic terms: from cube and square roots of q when e is a
+  // multiple of 1/6 (IAPWS-95: 1/(2β) − 1 = 2/3, a − 1 = 5/2, 1/β − 1 = 7/3), else Math.pow
+  const qRoots = new Map<number, string>();
+  const qPower = (e: number): string => {
+    const k = Math.round(e * 6);
+    if (Math.abs(e * 6 - k) > 1e-9 || k < 0) return `Math.pow(q, ${e})`;
+    const whole = Math.floor(k / 6);
+    const rest = k - 6 * whole;
+    const parts: string[] = [];
+    if (whole > 0) parts.push(whole === 1 ? 'q' : Array.from({ length: whole }, () => 'q').join(' * '));
+    if (rest !== 0) {
+      const root = rest % 3 === 0 ? 'qh' : rest % 2 === 0 ? 'qc' : 'qs';
+      if (root === 'qh') qRoots.set(2, 'const qh = Math.sqrt(q);');
+      else if (root === 'qc') qRoots.set(3, 'const qc = Math.cbrt(q);');
+      else qRoots.set(6, 'const qs = Math.cbrt(Math.sqrt(q));');
+      const n = root === 'qh' ? rest / 3 : root === 'qc' ? rest / 2 : rest;
+      parts.push(Array.from({ length: n }, () => root).join(' * '));
+    }
+    return parts.length === 0 ? '1' : parts.join(' * ');
+  };
+  const naBody: string[] = [];
   N?.n.forEach((n, j) => {
     const a = N.a[j]!;
     const b = N.b[j]!;
@@ -426,29 +447,38 @@ function residualFunction(fn: string, doc: string, f: FluidCoefficients): string
     const Aa = N.A[j]!;
     const be = N.beta[j]!;
     const e = 1 / (2 * be);
-    body.push(`// non-analytic term ${j}: n = ${n}, a = ${a}, b = ${b}, B = ${B}, C = ${C}, D = ${Dd}, A = ${Aa}, β = ${be}`);
-    body.push(`const qe${j} = Math.pow(q, ${e - 1});`);
-    body.push(`const qa${j} = Math.pow(q, ${a - 1});`);
+    const push = (line: string) => naBody.push(line);
+    push(`// non-analytic term ${j}: n = ${n}, a = ${a}, b = ${b}, B = ${B}, C = ${C}, D = ${Dd}, A = ${Aa}, β = ${be}`);
+    push(`let Db${j} = 0, Bd${j} = 0, Bdd${j} = 0, Bt${j} = 0, Btt${j} = 0, Bdt${j} = 0, ps${j} = 0, psd${j} = 0, psdd${j} = 0, pst${j} = 0, pstt${j} = 0, psdt${j} = 0;`);
+    // ψ = exp(−C(δ−1)² − D(τ−1)²) below e^−200 makes the term vanish against every other term (the
+    // largest factors, Δᵇ and 4D², stay below 1e6 in the range): skip it there
+    push(`const pe${j} = ${C} * q + ${Dd} * tm1 * tm1;`);
+    push(`if (pe${j} < 200) {`);
+    const body: string[] = [];
+    body.push(`const qe${j} = ${qPower(e - 1)};`);
+    body.push(`const qa${j} = ${qPower(a - 1)};`);
     body.push(`const th${j} = 1 - t + ${Aa} * q * qe${j};`);
     body.push(`const D${j} = th${j} * th${j} + ${B} * q * qa${j};`);
     body.push(`const G${j} = ${(2 * Aa) / be} * th${j} * qe${j} + ${2 * B * a} * qa${j};`);
     body.push(`const Dd${j} = dm1 * G${j};`);
-    body.push(`const Ddd${j} = G${j} + ${4 * B * a * (a - 1)} * qa${j} + ${2 * (Aa / be) ** 2} * Math.pow(q, ${1 / be - 1}) + ${(4 * Aa / be) * (e - 1)} * th${j} * qe${j};`);
-    body.push(`const Db${j} = Math.pow(D${j}, ${b});`);
+    body.push(`const Ddd${j} = G${j} + ${4 * B * a * (a - 1)} * qa${j} + ${2 * (Aa / be) ** 2} * ${qPower(1 / be - 1)} + ${(4 * Aa / be) * (e - 1)} * th${j} * qe${j};`);
+    body.push(`Db${j} = Math.pow(D${j}, ${b});`);
     // Δ = 0 only at δ = τ = 1, where the first-derivative limits are 0 and the second derivatives diverge
     body.push(`const Db1${j} = D${j} > 0 ? Db${j} / D${j} : 0;`);
     body.push(`const Db2${j} = Db1${j} / D${j};`);
-    body.push(`const Bd${j} = ${b} * Db1${j} * Dd${j};`);
-    body.push(`const Bdd${j} = ${b} * (Db1${j} * Ddd${j} + ${b - 1} * Db2${j} * Dd${j} * Dd${j});`);
-    body.push(`const Bt${j} = ${-2 * b} * th${j} * Db1${j};`);
-    body.push(`const Btt${j} = ${2 * b} * Db1${j} + ${4 * b * (b - 1)} * th${j} * th${j} * Db2${j};`);
-    body.push(`const Bdt${j} = ${(-Aa * b * 2) / be} * Db1${j} * dm1 * qe${j} + ${-2 * b * (b - 1)} * th${j} * Db2${j} * Dd${j};`);
-    body.push(`const ps${j} = Math.exp(${-C} * q - ${Dd} * tm1 * tm1);`);
-    body.push(`const psd${j} = ${-2 * C} * dm1 * ps${j};`);
-    body.push(`const psdd${j} = (${2 * C} * q - 1) * ${2 * C} * ps${j};`);
-    body.push(`const pst${j} = ${-2 * Dd} * tm1 * ps${j};`);
-    body.push(`const pstt${j} = (${2 * Dd} * tm1 * tm1 - 1) * ${2 * Dd} * ps${j};`);
-    body.push(`const psdt${j} = ${4 * C * Dd} * dm1 * tm1 * ps${j};`);
+    body.push(`Bd${j} = ${b} * Db1${j} * Dd${j};`);
+    body.push(`Bdd${j} = ${b} * (Db1${j} * Ddd${j} + ${b - 1} * Db2${j} * Dd${j} * Dd${j});`);
+    body.push(`Bt${j} = ${-2 * b} * th${j} * Db1${j};`);
+    body.push(`Btt${j} = ${2 * b} * Db1${j} + ${4 * b * (b - 1)} * th${j} * th${j} * Db2${j};`);
+    body.push(`Bdt${j} = ${(-Aa * b * 2) / be} * Db1${j} * dm1 * qe${j} + ${-2 * b * (b - 1)} * th${j} * Db2${j} * Dd${j};`);
+    body.push(`ps${j} = Math.exp(-pe${j});`);
+    body.push(`psd${j} = ${-2 * C} * dm1 * ps${j};`);
+    body.push(`psdd${j} = (${2 * C} * q - 1) * ${2 * C} * ps${j};`);
+    body.push(`pst${j} = ${-2 * Dd} * tm1 * ps${j};`);
+    body.push(`pstt${j} = (${2 * Dd} * tm1 * tm1 - 1) * ${2 * Dd} * ps${j};`);
+    body.push(`psdt${j} = ${4 * C * Dd} * dm1 * tm1 * ps${j};`);
+    for (const l of body) push(`  ${l}`);
+    push('}');
     const k = num(n);
     gA.push(`${k} * Db${j} * d * ps${j}`);
     gD.push(`${k} * (Db${j} * (ps${j} + d * psd${j}) + Bd${j} * d * ps${j})`);
@@ -457,6 +487,11 @@ function residualFunction(fn: string, doc: string, f: FluidCoefficients): string
     gTT.push(`${k} * d * (Btt${j} * ps${j} + 2 * Bt${j} * pst${j} + Db${j} * pstt${j})`);
     gDT.push(`${k} * (Db${j} * (pst${j} + d * psdt${j}) + d * Bd${j} * pst${j} + Bt${j} * (ps${j} + d * psd${j}) + Bdt${j} * d * ps${j})`);
   });
+  if (naBody.length > 0) {
+    // the roots of q are needed only where some term is not skipped; they are cheap next to exp
+    for (const line of [...qRoots.keys()].sort().map((k) => qRoots.get(k)!)) body.push(line);
+    body.push(...naBody);
+  }
   const lines: string[] = [];
   lines.push(`/** ${doc} */`);
   lines.push(`export function ${fn}(delta: number, tau: number, out: Float64Array): void {`);

@@ -85,3 +85,42 @@ describe('water bundle', () => {
     expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
   });
 });
+
+describe('fluids bundle', () => {
+  const use = `import { fluid } from 'heatstate/fluids'; const w = fluid('water'); console.log(w.state({ T: '300 K', p: '1 bar' }), w.saturation({ T: '400 K' }), w.deltaH({ T: '300 K', p: '1 bar' }, { p: '1 bar', x: 1 }));`;
+  it('heatstate/fluids with one fluid (IAPWS-95 water, the other catalogue entries left out): at most 30 kB gzipped, without zod, the table layer, IF97 or decimal.js', async () => {
+    // a build with one fluid: every catalogue entry but water's is replaced by an absent one
+    const result = await build({
+      stdin: { contents: use, resolveDir: root, loader: 'ts' },
+      bundle: true,
+      minify: true,
+      format: 'esm',
+      platform: 'neutral',
+      write: false,
+      alias: Object.fromEntries(readManifest().entries.map((e) => [specifier(e), `./${e.source}`])),
+      plugins: [
+        {
+          name: 'one-fluid',
+          setup(b) {
+            b.onResolve({ filter: /\/entries\/[\w-]+\.js$/ }, (args) => (/\/(water|entry)\.js$/.test(args.path) ? undefined : { path: args.path, namespace: 'absent-fluid' }));
+            b.onLoad({ filter: /.*/, namespace: 'absent-fluid' }, (args) => ({ contents: `export const ${args.path.replace(/^.*\/|\.js$/g, '')} = undefined;`, loader: 'js' }));
+          },
+        },
+      ],
+    });
+    const js = result.outputFiles[0]!.text;
+    expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
+    expect(js).not.toMatch(/ZodError/);
+    expect(js).not.toMatch(/interpolationError|monotone-cubic/);
+    // IF97 region 1 (Table 2, n1) must not appear; nor the IAPWS-95 coefficient arrays of the data file (kernels carry them); nor nitrogen
+    expect(js).not.toMatch(/0\.14632971213167/);
+    expect(js).not.toMatch(/Table 2, i = 8\.\.51/);
+    expect(js).not.toMatch(/Span et al\. 2000|\.924803575275/);
+    expect(gzipSync(js).length / 1024).toBeLessThan(30);
+  });
+  it('heatstate/fluids with its whole catalogue (water and nitrogen): at most 34 kB gzipped', async () => {
+    const js = await bundle(use);
+    expect(js).toMatch(/\.924803575275/);
+    expect(gzipSync(js).length / 1024).toBeLessThan(34);
+  });
+});

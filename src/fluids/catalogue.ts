@@ -5,20 +5,16 @@
  *
  * @module
  */
-import water from '../../data/fluids/water.json';
 import type { FluidDefinition } from './definition.js';
-import { waterIdeal, waterResidual } from './kernels.generated.js';
-import { FluidModel, type IdealKernel, type ResidualKernel } from './model.js';
+import type { CatalogueEntry } from './entries/entry.js';
+import { nitrogen } from './entries/nitrogen.js';
+import { water } from './entries/water.js';
+import { FluidModel } from './model.js';
 
-interface Entry {
-  readonly definition: () => FluidDefinition;
-  readonly residual: ResidualKernel;
-  readonly ideal: IdealKernel;
-}
-
-const ENTRIES: Readonly<Record<string, Entry>> = {
-  water: { definition: () => water as unknown as FluidDefinition, residual: waterResidual, ideal: waterIdeal },
-};
+// an entry left out of a build (a bundle with one fluid) is undefined and skipped
+const ENTRIES: Readonly<Record<string, CatalogueEntry>> = Object.fromEntries(
+  Object.entries({ water, nitrogen } as Record<string, CatalogueEntry | undefined>).filter((e): e is [string, CatalogueEntry] => e[1] !== undefined),
+);
 
 /** The catalogue's fluid names. */
 export const FLUID_NAMES: readonly string[] = Object.keys(ENTRIES);
@@ -30,7 +26,15 @@ export function fluidDefinition(name: string): FluidDefinition | undefined {
 
 const compiled = new Map<string, FluidModel>();
 
-/** The compiled model of a catalogue fluid (built on first use, then shared: it is immutable). */
+/**
+ * The compiled model of a catalogue fluid (built on first use, then shared: it is immutable), or
+ * undefined for a name that is not in the catalogue (catalogue names only; aliases are the facade's).
+ * @example
+ * ```ts
+ * fluidModel('water')!.Tc;   //=> 647.096
+ * fluidModel('nope');        //=> undefined
+ * ```
+ */
 export function fluidModel(name: string): FluidModel | undefined {
   let m = compiled.get(name);
   if (m === undefined) {

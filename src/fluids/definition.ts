@@ -17,6 +17,8 @@ export interface FluidSource {
 /** Terms Σ nᵢ ϑ^tᵢ of an ancillary equation, ϑ = 1 − T/T_c. */
 export interface AncillaryTerms {
   readonly form: string;
+  /** The saturated liquid density in the form ln(ρ'/ρc) = Σ n ϑ^t instead of ρ'/ρc = 1 + Σ n ϑ^t. */
+  readonly logarithmic?: boolean;
   readonly n: readonly number[];
   readonly t: readonly number[];
 }
@@ -28,11 +30,12 @@ export interface FluidDefinition {
   readonly aliases: readonly string[];
   readonly equation: string;
   readonly source: FluidSource;
-  readonly basis: 'published' | 'from memory' | 'computed';
-  readonly verification: string;
-  readonly uncertainty: string;
+  /** Provenance and checks (in the data file; not read at run time). */
+  readonly basis?: 'published' | 'from memory' | 'computed';
+  readonly verification?: string;
+  readonly uncertainty?: string;
   /** Only fluids whose coefficients reproduce their source's verification values are loadable. */
-  readonly loadable: boolean;
+  readonly loadable?: boolean;
   readonly finding?: string;
   readonly molarMass: { readonly value: number; readonly unit: 'kg/mol'; readonly source: string };
   /** The specific gas constant the equation uses (the source's molar R over its M). */

@@ -18,9 +18,17 @@ import { Status, type StatusCode } from '../core/status.js';
 import { ancillaryLiquidDensity, ancillaryPressure, ancillaryVaporDensity, FLUID_PHASE, propertiesAt, type FluidContext, type FluidState } from './model.js';
 import { saturationAtP, saturationAtT, solveSaturationDensities } from './saturation.js';
 
+/** {@link solveDensity}: the lower end given is not below the root (p(T, lo) ≥ p). */
+const LOW_END_ABOVE = -1;
+/** {@link solveDensity}: the upper end given is not above the root (p(T, hi) < p). */
+const HIGH_END_BELOW = -2;
+
 /**
- * Density (kg/m³) with p(T, ρ) = p on [lo, hi], where p(T, lo) < p is known; p(T, hi) > p is
- * checked only if the iteration needs the upper end. NaN when there is no root (or no convergence).
+ * Density (kg/m³) with p(T, ρ) = p on [lo, hi], where p(T, lo) < p is expected (checked when the
+ * iteration starts at lo: {@link LOW_END_ABOVE} when it is not); p(T, hi) > p is checked only if the
+ * iteration needs the upper end ({@link HIGH_END_BELOW} when it is not). NaN when there is no
+ * convergence. A Newton step below 1e-8·ρ is taken as the answer (the error after it is of order
+ * 1e-16·ρ times a constant of order one: quadratic convergence).
  */
 function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: number, guess: number): number {
   const m = ctx.model;
@@ -31,7 +39,7 @@ function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: n
   let a = lo;
   let b = hi;
   let hiChecked = false;
-  let x = guess > a && guess < b ? guess : a > 0 ? Math.sqrt(a * b) : Math.min(p / RT, 0.5 * b);
+  let x = guess >= a && guess < b ? guess : a > 0 ? Math.sqrt(a * b) : Math.min(p / RT, 0.5 * b);
   for (let i = 0; i < 100; i++) {
     const delta = x * ir;
     m.residual(delta, tau, ar);
@@ -39,18 +47,19 @@ function solveDensity(ctx: FluidContext, p: number, T: number, lo: number, hi: n
     const df = RT * (1 + 2 * delta * ar[1]! + delta * delta * ar[2]!);
     if (f < 0) a = x;
     else {
+      if (x === lo && lo > 0) return LOW_END_ABOVE;
       b = x;
       hiChecked = true;
     }
-    // converged: a step below 1e-13 (Newton's next would be at rounding), or f at its rounding level
+    // converged: f at its rounding level
     if (Math.abs(f) <= 4e-16 * x * Math.abs(df)) return x;
     let next = df > 0 ? x - f / df : NaN;
-    if (Math.abs(next - x) <= 1e-13 * x) return next;
+    if (Math.abs(next - x) <= 1e-8 * x && next > a && next < b) return next;
     if (!(next > a && next < b)) {
       if (!hiChecked) {
         // the upper end is needed: check that it brackets the root
         m.residual(b * ir, tau, ar);
-        if (!(b * RT * (1 + b * ir * ar[1]!) - p >= 0)) return NaN;
+        if (!(b * RT * (1 + b * ir * ar[1]!) - p >= 0)) return HIGH_END_BELOW;
         hiChecked = true;
       }
       next = a > 0 && b > 4 * a ? Math.sqrt(a * b) : 0.5 * (a + b);
@@ -84,46 +93,35 @@ function densityPT(ctx: FluidContext, p: number, T: number, guess: number): Stat
   }
   const ps = ancillaryPressure(m, T);
   const margin = m.pressureMargin;
-  let liquid: boolean;
-  let lo = 0;
-  let hi = m.rhoMax;
-  let exact = false;
-  if (p > ps * (1 + margin)) {
-    liquid = true;
-    lo = ancillaryLiquidDensity(m, T);
-    if (!(pressureBelow(ctx, T, lo, p))) exact = true;
-  } else if (p < ps * (1 - margin)) {
-    liquid = false;
-    hi = ancillaryVaporDensity(m, T);
-    if (pressureBelow(ctx, T, hi, p)) exact = true;
-  } else {
-    liquid = true;
-    exact = true;
-  }
-  if (exact) {
-    const s = solveSaturationDensities(ctx, T, ancillaryLiquidDensity(m, T) / m.rhor, ancillaryVaporDensity(m, T) / m.rhor);
-    if (s !== Status.ok) return s;
-    liquid = p >= ctx.satP;
-    if (p === ctx.satP) {
-      w.rho = ctx.satDL * m.rhor;
-      w.phase = FLUID_PHASE.liquid;
+  if (p > ps * (1 + margin) || p < ps * (1 - margin)) {
+    // clearly liquid (from the ancillary ρ' up) or clearly vapour (from p/(RT) below the ancillary ρ'')
+    const liquid = p > ps;
+    const lo = liquid ? ancillaryLiquidDensity(m, T) : 0;
+    const hi = liquid ? m.rhoMax : ancillaryVaporDensity(m, T);
+    const rho = solveDensity(ctx, p, T, lo, hi, liquid ? lo : guess > 0 && guess < hi ? guess : Math.min(p / (m.R * T), hi * 0.9999));
+    if (rho > 0) {
+      w.rho = rho;
+      w.phase = label(ctx, p, T, liquid);
       return Status.ok;
     }
-    lo = liquid ? ctx.satDL * m.rhor : 0;
-    hi = liquid ? m.rhoMax : ctx.satDV * m.rhor;
+    if (rho !== LOW_END_ABOVE && rho !== HIGH_END_BELOW) return Status.outOfRange;
+    // the ancillary density does not bracket the root: decide by the saturation solve
   }
+  const s = solveSaturationDensities(ctx, T, ancillaryLiquidDensity(m, T) / m.rhor, ancillaryVaporDensity(m, T) / m.rhor);
+  if (s !== Status.ok) return s;
+  const liquid = p >= ctx.satP;
+  if (p === ctx.satP) {
+    w.rho = ctx.satDL * m.rhor;
+    w.phase = FLUID_PHASE.liquid;
+    return Status.ok;
+  }
+  const lo = liquid ? ctx.satDL * m.rhor : 0;
+  const hi = liquid ? m.rhoMax : ctx.satDV * m.rhor;
   const rho = solveDensity(ctx, p, T, lo, hi, guess > lo && guess < hi ? guess : liquid ? lo * 1.0001 : Math.min(p / (m.R * T), hi * 0.9999));
   if (!(rho > 0)) return Status.outOfRange;
   w.rho = rho;
   w.phase = label(ctx, p, T, liquid);
   return Status.ok;
-}
-
-function pressureBelow(ctx: FluidContext, T: number, rho: number, p: number): boolean {
-  const m = ctx.model;
-  const delta = rho / m.rhor;
-  m.residual(delta, m.Tr / T, ctx.ar);
-  return rho * m.R * T * (1 + delta * ctx.ar[1]!) < p;
 }
 
 function checkPT(ctx: FluidContext, p: number, T: number): StatusCode {
@@ -138,7 +136,11 @@ function checkPT(ctx: FluidContext, p: number, T: number): StatusCode {
  * @returns `Status.ok`; `Status.outOfRange` outside the fluid's range; `Status.invalidInput`
  * @example
  * ```ts
- * stateFromPT(ctx, 101325, 300, out);   //=> 0; out.rho = 996.5 kg/m³, out.phase = FLUID_PHASE.liquid
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPT(ctx, 101325, 300, out);   //=> 0 (Status.ok)
+ * out.rho;                              //=> 996.556935... (kg/m³)
+ * out.phase;                            //=> 0 (FLUID_PHASE.liquid)
+ * stateFromPT(ctx, 101325, 200, out);   //=> 1 (Status.outOfRange: below the triple point)
  * ```
  */
 export function stateFromPT(ctx: FluidContext, p: number, T: number, out: FluidState): StatusCode {
@@ -149,6 +151,8 @@ export function stateFromPT(ctx: FluidContext, p: number, T: number, out: FluidS
   const phase = ctx.work.phase;
   const st = propertiesAt(ctx, T, ctx.work.rho, out);
   out.phase = phase;
+  // the density solves p(T, ρ) = p to rounding: report the pressure asked for
+  out.p = p;
   return st;
 }
 
@@ -172,12 +176,19 @@ function mix(ctx: FluidContext, x: number, out: FluidState): StatusCode {
   out.dpdT = (v.s - l.s) / (v.v - l.v);
   out.x = x;
   out.phase = FLUID_PHASE.twoPhase;
-  return Status.undefinedProperty;
+  return Status.ok;
 }
 
 /**
  * The two-phase mixture of quality x at T (K): saturation by temperature, then the lever rule.
- * @returns `Status.undefinedProperty` (the state is computed; cp, cv, w are not defined), or an error status
+ * @returns `Status.ok` (the state is computed; cp, cv, w and jouleThomson are NaN there, not defined), or an error status
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTX(ctx, 373.15, 0.5, out);   //=> 0 (Status.ok)
+ * out.p;                                //=> 101417.99665... (Pa)
+ * out.cp;                               //=> NaN (not defined in the two-phase state)
+ * ```
  */
 export function stateFromTX(ctx: FluidContext, T: number, x: number, out: FluidState): StatusCode {
   if (!Number.isFinite(T) || !Number.isFinite(x)) return Status.invalidInput;
@@ -187,7 +198,15 @@ export function stateFromTX(ctx: FluidContext, T: number, x: number, out: FluidS
   return mix(ctx, x, out);
 }
 
-/** The two-phase mixture of quality x at p (Pa). Returns as {@link stateFromTX}. */
+/**
+ * The two-phase mixture of quality x at p (Pa). Returns as {@link stateFromTX}.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPX(ctx, 1e6, 1, out);   //=> 0 (Status.ok)
+ * out.T;                           //=> 453.02800788... (K, saturated vapour at 1 MPa)
+ * ```
+ */
 export function stateFromPX(ctx: FluidContext, p: number, x: number, out: FluidState): StatusCode {
   if (!Number.isFinite(p) || !Number.isFinite(x)) return Status.invalidInput;
   if (!(x >= 0 && x <= 1)) return Status.outOfRange;
@@ -199,6 +218,13 @@ export function stateFromPX(ctx: FluidContext, p: number, x: number, out: FluidS
 /**
  * The state at (T [K], ρ [kg/m³]): single-phase from the equation directly, or a two-phase
  * mixture when T < T_c and ρ'' < ρ < ρ'.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTRho(ctx, 647, 358, out);   //=> 0 (Status.ok)
+ * out.p;                               //=> 22038475.5706... (IAPWS-95 Table 7: 0.220384756e2 MPa)
+ * stateFromTRho(ctx, 400, 10, out);    //=> 0; out.x = 0.13567821..., out.phase = 2 (two-phase)
+ * ```
  */
 export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: FluidState): StatusCode {
   const m = ctx.model;
@@ -211,12 +237,21 @@ export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: Fl
   }
   const st = propertiesAt(ctx, T, rho, out);
   if (st === Status.invalidInput) return st;
-  if (out.p > m.pMax) return Status.outOfRange;
+  // above the pressure limit (beyond the rounding of a state solved at the limit itself)
+  if (out.p > m.pMax * (1 + 1e-12)) return Status.outOfRange;
   out.phase = T >= m.Tc ? (out.p >= m.pc ? FLUID_PHASE.supercritical : FLUID_PHASE.vapor) : rho >= m.rhoc ? FLUID_PHASE.liquid : FLUID_PHASE.vapor;
   return st;
 }
 
-/** The state at (T [K], v [m³/kg]): {@link stateFromTRho} at ρ = 1/v. */
+/**
+ * The state at (T [K], v [m³/kg]): {@link stateFromTRho} at ρ = 1/v.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromTV(ctx, 300, 1e-3, out);   //=> 0 (Status.ok)
+ * out.p;                              //=> 7833001.35... (Pa: compressed liquid)
+ * ```
+ */
 export function stateFromTV(ctx: FluidContext, T: number, v: number, out: FluidState): StatusCode {
   if (!Number.isFinite(v) || !(v > 0)) return Status.invalidInput;
   return stateFromTRho(ctx, T, 1 / v, out);
@@ -298,6 +333,85 @@ function solveIsobar(ctx: FluidContext, p: number, target: number, by: number, l
   return Status.noConvergence;
 }
 
+/**
+ * Newton's method in (T, ρ) on p(T, ρ) = p and h(T, ρ) = target (or s), from (T0, ρ0), with the
+ * step scaled to keep T within 25 % and ρ within a factor 2 of the last point. Writes the state into
+ * `out` and returns `Status.ok` when the step falls below 1e-7 (relative; the error after it is of
+ * order 1e-14, quadratic convergence) with (∂p/∂ρ)_T > 0 at a
+ * temperature in range; `Status.noConvergence` otherwise (the caller then takes the bracketed path).
+ */
+function newtonPY(ctx: FluidContext, p: number, target: number, by: number, T0: number, rho0: number, out: FluidState): StatusCode {
+  const m = ctx.model;
+  let T = T0;
+  let rho = rho0;
+  for (let i = 0; i < 16; i++) {
+    if (!(T > 0 && rho > 0)) return Status.noConvergence;
+    const st = propertiesAt(ctx, T, rho, out);
+    if (st !== Status.ok) return Status.noConvergence;
+    const f1 = out.p - p;
+    const f2 = valueOf(out, by) - target;
+    const pT = out.dpdT;
+    const pR = out.dpdrho;
+    // (∂h/∂T)_ρ = cv + (∂p/∂T)_ρ/ρ, (∂h/∂ρ)_T = ((∂p/∂ρ)_T − T(∂p/∂T)_ρ/ρ)/ρ; (∂s/∂T)_ρ = cv/T, (∂s/∂ρ)_T = −(∂p/∂T)_ρ/ρ²
+    const yT = by === BY_H ? out.cv + pT / rho : out.cv / T;
+    const yR = by === BY_H ? (pR - (T * pT) / rho) / rho : -pT / (rho * rho);
+    const det = pT * yR - pR * yT;
+    if (!(det !== 0 && Number.isFinite(det))) return Status.noConvergence;
+    let dT = -(f1 * yR - pR * f2) / det;
+    let dR = -(pT * f2 - f1 * yT) / det;
+    let lambda = 1;
+    if (Math.abs(dT) > 0.25 * T) lambda = (0.25 * T) / Math.abs(dT);
+    if (rho + lambda * dR < 0.5 * rho) lambda = (0.5 * rho) / -dR;
+    if (rho + lambda * dR > 2 * rho) lambda = rho / dR;
+    dT *= lambda;
+    dR *= lambda;
+    T += dT;
+    rho += dR;
+    if (lambda === 1 && i >= 1 && Math.abs(dT) <= 1e-7 * T && Math.abs(dR) <= 1e-7 * rho) {
+      if (!(T >= m.Tmin && T <= m.Tmax && rho <= m.rhoMax)) return Status.noConvergence;
+      if (propertiesAt(ctx, T, rho, out) !== Status.ok || !(out.dpdrho > 0)) return Status.noConvergence;
+      return Status.ok;
+    }
+  }
+  return Status.noConvergence;
+}
+
+/**
+ * The state at (p, T) into ctx.start, and from it the isobaric step towards `target`: T0 and ρ0 of a
+ * Newton start in ctx.start.T and ctx.start.rho (ΔT = Δy/(∂y/∂T)_p, Δρ = −(∂p/∂T)_ρ/(∂p/∂ρ)_T ΔT).
+ * False when there is no state at (p, T).
+ */
+function isobaricStart(ctx: FluidContext, p: number, T: number, target: number, by: number, lo: number, hi: number): boolean {
+  const st = ctx.start;
+  if (densityPT(ctx, p, T, 0) !== Status.ok || propertiesAt(ctx, T, ctx.work.rho, st) !== Status.ok) return false;
+  const T0 = Math.min(Math.max(T + (target - valueOf(st, by)) / slopeOf(st, by), lo), hi);
+  let rho0 = st.rho - (st.dpdT / st.dpdrho) * (T0 - T);
+  if (!(rho0 > 0.5 * st.rho && rho0 < 2 * st.rho)) rho0 = st.rho;
+  st.T = T0;
+  st.rho = rho0;
+  return true;
+}
+
+/** The 2-D Newton from a start on one side of the dome (or above it); the phase is checked after. */
+function tryNewtonPY(ctx: FluidContext, p: number, target: number, by: number, T0: number, rho0: number, side: number, Ts: number, out: FluidState): boolean {
+  const m = ctx.model;
+  if (newtonPY(ctx, p, target, by, T0, rho0, out) !== Status.ok) return false;
+  const T = out.T;
+  if (side === FLUID_PHASE.liquid) {
+    // below the saturation temperature, on the liquid side of ρc
+    if (!(T <= Ts && out.rho > m.rhoc)) return false;
+    out.phase = FLUID_PHASE.liquid;
+  } else if (side === FLUID_PHASE.vapor) {
+    if (!(T >= Ts && out.rho < m.rhoc)) return false;
+    out.phase = FLUID_PHASE.vapor;
+  } else {
+    // at or above the critical pressure: one phase; below T_c it is liquid
+    out.phase = T >= m.Tc ? FLUID_PHASE.supercritical : FLUID_PHASE.liquid;
+  }
+  out.x = NaN;
+  return true;
+}
+
 function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: FluidState): StatusCode {
   const m = ctx.model;
   if (!Number.isFinite(p) || !Number.isFinite(target)) return Status.invalidInput;
@@ -309,26 +423,74 @@ function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: 
     const yv = valueOf(ctx.vapor, by);
     const Ts = ctx.liquid.T;
     if (target >= yl && target <= yv) return mix(ctx, (target - yl) / (yv - yl), out);
+    // start from the saturated phase on the target's side, one isobaric step away:
+    // ΔT = Δy/(∂y/∂T)_p, Δρ = (∂ρ/∂T)_p ΔT = −(∂p/∂T)_ρ/(∂p/∂ρ)_T ΔT
+    const sat = target < yl ? ctx.liquid : ctx.vapor;
+    const dT = (target - (target < yl ? yl : yv)) / slopeOf(sat, by);
+    const T0 = Math.min(Math.max(sat.T + dT, m.Tmin), m.Tmax);
+    let rho0 = sat.rho - (sat.dpdT / sat.dpdrho) * (T0 - sat.T);
+    if (!(rho0 > 0.5 * sat.rho && rho0 < 2 * sat.rho)) rho0 = target < yl ? sat.rho : Math.min(sat.rho, p / (m.R * T0));
+    const side = target < yl ? FLUID_PHASE.liquid : FLUID_PHASE.vapor;
+    if (side === FLUID_PHASE.liquid && T0 < Ts - 0.25 * (Ts - m.Tmin)) {
+      // far below saturation: the liquid at the lowest temperature is the nearer start
+      if (isobaricStart(ctx, p, m.Tmin, target, by, m.Tmin, Ts) && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, side, Ts, out)) return Status.ok;
+    } else if (tryNewtonPY(ctx, p, target, by, T0, rho0, side, Ts, out)) return Status.ok;
     if (target < yl) return solveIsobar(ctx, p, target, by, m.Tmin, Ts, false, true, Ts + (target - yl) / slopeOf(ctx.liquid, by), out);
     return solveIsobar(ctx, p, target, by, Ts, m.Tmax, true, false, Ts + (target - yv) / slopeOf(ctx.vapor, by), out);
   }
-  // above the critical pressure (or below the triple point: vapour only)
-  return solveIsobar(ctx, p, target, by, m.Tmin, m.Tmax, false, false, p < m.pt ? m.Tmin + 50 : m.Tc, out);
+  if (p >= m.pc) {
+    // above the critical pressure: one isobaric step from the state at T_c (away from the critical
+    // point itself, where the start is poor and the bracketed path is used)
+    if (p > 1.05 * m.pc && isobaricStart(ctx, p, m.Tc, target, by, m.Tmin, m.Tmax)) {
+      // below T_c (a liquid-like target) the state at the lowest temperature is the nearer start
+      const below = ctx.start.T < m.Tc;
+      if (!below && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, FLUID_PHASE.supercritical, m.Tc, out)) return Status.ok;
+      if (below && isobaricStart(ctx, p, m.Tmin, target, by, m.Tmin, m.Tc) && tryNewtonPY(ctx, p, target, by, ctx.start.T, ctx.start.rho, FLUID_PHASE.supercritical, m.Tc, out)) return Status.ok;
+    }
+    return solveIsobar(ctx, p, target, by, m.Tmin, m.Tmax, false, false, m.Tc, out);
+  }
+  // below the triple-point pressure: vapour only
+  return solveIsobar(ctx, p, target, by, m.Tmin, m.Tmax, false, false, m.Tmin + 50, out);
 }
 
-/** The state at (p [Pa], h [J/kg]). Two-phase states return `Status.undefinedProperty` with x set. */
+/**
+ * The state at (p [Pa], h [J/kg]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPH(ctx, 1e6, 3e6, out);      //=> 0; out.T = 549.16849785... K, out.phase = 1 (vapour)
+ * stateFromPH(ctx, 101325, 1.5e6, out);  //=> 0; out.x = 0.47904093..., out.cp = NaN
+ * ```
+ */
 export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidState): StatusCode {
-  return flashPY(ctx, p, h, BY_H, out);
+  const st = flashPY(ctx, p, h, BY_H, out);
+  // solved to rounding in p: report the pressure asked for
+  if (st === Status.ok) out.p = p;
+  return st;
 }
 
-/** The state at (p [Pa], s [J/(kg·K)]). Two-phase states return `Status.undefinedProperty` with x set. */
+/**
+ * The state at (p [Pa], s [J/(kg·K)]). Two-phase states return `Status.ok` with x set and cp, cv, w NaN.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromPS(ctx, 1e5, 7000, out);   //=> 0; out.T = 372.75592889... K, out.x = 0.94074577...
+ * ```
+ */
 export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidState): StatusCode {
-  return flashPY(ctx, p, s, BY_S, out);
+  const st = flashPY(ctx, p, s, BY_S, out);
+  if (st === Status.ok) out.p = p;
+  return st;
 }
 
 /**
  * The state at (h [J/kg], s [J/(kg·K)]): Newton steps in ln p on h(p, s) = h, with (∂h/∂p)_s = v,
  * each step a (p, s) flash, inside a bracket from 1e-4 of the triple-point pressure to p_max.
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * stateFromHS(ctx, 3e6, 7000, out);   //=> 0; out.p = 1075561.49511... Pa, out.T = 550.23690782... K
+ * ```
  */
 export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidState): StatusCode {
   const m = ctx.model;
@@ -342,13 +504,14 @@ export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidS
   for (let i = 0; i < 100; i++) {
     const p = Math.exp(y);
     const st = stateFromPS(ctx, p, s, out);
-    if (st !== Status.ok && st !== Status.undefinedProperty) {
+    if (st !== Status.ok) {
       if (st !== Status.outOfRange) return st;
-      // s not reachable at this pressure (below the triple point only vapour entropies are; at
-      // high pressure only the lower ones): narrow the bracket from that side
+      // s not reachable at this pressure: above the entropy at T_max a lower pressure is needed,
+      // else (below the entropy at T_min) a higher one; narrow the bracket from that side
       if (hi - lo < 1e-12 * Math.abs(hi)) return Status.outOfRange;
-      if (p < m.pt) lo = y;
-      else hi = y;
+      const top = stateFromPT(ctx, p, m.Tmax, out);
+      if (top === Status.ok && s > out.s) hi = y;
+      else lo = y;
       y = 0.5 * (lo + hi);
       continue;
     }

@@ -52,6 +52,16 @@ export class FluidModel {
   readonly rlT: Float64Array;
   readonly rvN: Float64Array;
   readonly rvT: Float64Array;
+  /**
+   * The ancillaries' exponents as multiples k/q of one root ϑ^(1/q) (q ≤ 24, shared by the three
+   * equations), so that ϑ^t is a short product instead of Math.pow; q = 0 when there is none.
+   */
+  readonly ancillaryRoot: number;
+  /** True when the liquid-density ancillary is ln(ρ'/ρc) = Σ n ϑ^t (else ρ'/ρc = 1 + Σ n ϑ^t). */
+  readonly liquidLogarithmic: boolean;
+  readonly psK: Int32Array;
+  readonly rlK: Int32Array;
+  readonly rvK: Int32Array;
   readonly pressureMargin: number;
 
   constructor(
@@ -82,6 +92,15 @@ export class FluidModel {
     this.rvN = Float64Array.from(a.vaporDensity.n);
     this.rvT = Float64Array.from(a.vaporDensity.t);
     this.pressureMargin = a.pressureMargin;
+    const all = [...a.vaporPressure.t, ...a.liquidDensity.t, ...a.vaporDensity.t];
+    let q = 0;
+    for (let c = 1; c <= 24 && q === 0; c++) if (all.every((t) => t > 0 && Math.abs(t * c - Math.round(t * c)) < 1e-9)) q = c;
+    this.ancillaryRoot = q;
+    this.liquidLogarithmic = a.liquidDensity.logarithmic === true;
+    const ks = (t: readonly number[]) => Int32Array.from(t, (x) => (q === 0 ? 0 : Math.round(x * q)));
+    this.psK = ks(a.vaporPressure.t);
+    this.rlK = ks(a.liquidDensity.t);
+    this.rvK = ks(a.vaporDensity.t);
   }
 }
 
@@ -127,32 +146,109 @@ export class FluidContext {
   readonly liquid = new FluidState();
   readonly vapor = new FluidState();
   readonly work = new FluidState();
+  /** Starting state of a flash (scratch). */
+  readonly start = new FluidState();
   /** Saturation solve results: δ', δ'' and the pressure (scratch). */
   satDL = NaN;
   satDV = NaN;
   satP = NaN;
+  /** Saturation temperature of the last saturation solve by pressure (scratch). */
+  satT = NaN;
 
   constructor(readonly model: FluidModel) {}
 }
 
-/** ϑ = 1 − T/Tc; Σ n ϑ^t of an ancillary. */
-function ancillarySum(n: Float64Array, t: Float64Array, theta: number): number {
+/** x^k for an integer k ≥ 0 by binary powering. */
+function integerPower(x: number, k: number): number {
+  let r = 1;
+  let b = x;
+  let e = k;
+  while (e > 0) {
+    if ((e & 1) === 1) r *= b;
+    b *= b;
+    e >>= 1;
+  }
+  return r;
+}
+
+/** ϑ^(1/q) of the model's ancillary root (q = 1, 2, 3, 4, 6 by roots; otherwise Math.pow once). */
+function ancillaryBase(m: FluidModel, theta: number): number {
+  const q = m.ancillaryRoot;
+  if (q === 1) return theta;
+  if (q === 2) return Math.sqrt(theta);
+  if (q === 3) return Math.cbrt(theta);
+  if (q === 4) return Math.sqrt(Math.sqrt(theta));
+  if (q === 6) return Math.cbrt(Math.sqrt(theta));
+  return Math.pow(theta, 1 / q);
+}
+
+/** ϑ = 1 − T/Tc; Σ n ϑ^t of an ancillary (powers of one root when the model has one). */
+function ancillarySum(m: FluidModel, n: Float64Array, t: Float64Array, k: Int32Array, theta: number): number {
   let s = 0;
-  for (let i = 0; i < n.length; i++) s += n[i]! * Math.pow(theta, t[i]!);
+  if (m.ancillaryRoot === 0) {
+    for (let i = 0; i < n.length; i++) s += n[i]! * Math.pow(theta, t[i]!);
+    return s;
+  }
+  const r = ancillaryBase(m, theta);
+  for (let i = 0; i < n.length; i++) s += n[i]! * integerPower(r, k[i]!);
   return s;
 }
 
 /** Ancillary vapour pressure (Pa) at T < Tc: a starting value. */
 export function ancillaryPressure(m: FluidModel, T: number): number {
-  return m.pc * Math.exp((m.Tc / T) * ancillarySum(m.psN, m.psT, 1 - T / m.Tc));
+  return m.pc * Math.exp((m.Tc / T) * ancillarySum(m, m.psN, m.psT, m.psK, 1 - T / m.Tc));
 }
+/**
+ * T (K) at which the ancillary vapour pressure is e^lnp, by Newton's method on
+ * ln p = ln p_c + (T_c/T) S(ϑ), S = Σ nϑ^t, d ln p/dT = −(T_c/T²) S − S'(ϑ)/T, S' = Σ n t ϑ^(t−1),
+ * kept inside (T_t, T_c); to 1e-9 (a starting value for the saturation solve).
+ */
+export function ancillaryTemperature(m: FluidModel, lnp: number): number {
+  const lt = Math.log(m.pt);
+  const lc = Math.log(m.pc);
+  // start on the line ln p = a − b/T through the triple and critical points
+  let T = 1 / (1 / m.Tt + ((lnp - lt) / (lc - lt)) * (1 / m.Tc - 1 / m.Tt));
+  if (!(T > m.Tt * 0.999 && T < m.Tc)) T = 0.5 * (m.Tt + m.Tc);
+  const n = m.psN;
+  const t = m.psT;
+  for (let i = 0; i < 30; i++) {
+    const theta = 1 - T / m.Tc;
+    let S = 0;
+    let dS = 0;
+    if (m.ancillaryRoot === 0) {
+      for (let j = 0; j < n.length; j++) {
+        const x = n[j]! * Math.pow(theta, t[j]!);
+        S += x;
+        dS += t[j]! * x;
+      }
+    } else {
+      const r = ancillaryBase(m, theta);
+      for (let j = 0; j < n.length; j++) {
+        const x = n[j]! * integerPower(r, m.psK[j]!);
+        S += x;
+        dS += t[j]! * x;
+      }
+    }
+    dS /= theta;
+    const f = lc + (m.Tc / T) * S - lnp;
+    const df = -(m.Tc / (T * T)) * S - dS / T;
+    let next = T - f / df;
+    if (!(next > m.Tt * 0.999)) next = 0.5 * (T + m.Tt * 0.999);
+    if (!(next < m.Tc)) next = 0.5 * (T + m.Tc);
+    if (Math.abs(next - T) <= 1e-9 * T) return next;
+    T = next;
+  }
+  return T;
+}
+
 /** Ancillary saturated liquid density (kg/m³) at T < Tc. */
 export function ancillaryLiquidDensity(m: FluidModel, T: number): number {
-  return m.rhoc * (1 + ancillarySum(m.rlN, m.rlT, 1 - T / m.Tc));
+  const s = ancillarySum(m, m.rlN, m.rlT, m.rlK, 1 - T / m.Tc);
+  return m.rhoc * (m.liquidLogarithmic ? Math.exp(s) : 1 + s);
 }
 /** Ancillary saturated vapour density (kg/m³) at T < Tc. */
 export function ancillaryVaporDensity(m: FluidModel, T: number): number {
-  return m.rhoc * Math.exp(ancillarySum(m.rvN, m.rvT, 1 - T / m.Tc));
+  return m.rhoc * Math.exp(ancillarySum(m, m.rvN, m.rvT, m.rvK, 1 - T / m.Tc));
 }
 
 /** Pressure (Pa) at (T, ρ), with (∂p/∂ρ)_T into ctx.ar-derived scratch: returns p; `pressureSlope` reads the slope. */
@@ -174,6 +270,14 @@ export function pressureSlope(ctx: FluidContext, T: number, rho: number): number
  * Every property at (T [K], ρ [kg/m³]) from the equation of state, into `out` (phase left as is).
  * @returns `Status.ok`, `Status.invalidInput` for non-positive or non-finite input, or
  *   `Status.undefinedProperty` where cp, cv, w or μ_JT are not finite (exactly at the critical point)
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
+ * propertiesAt(ctx, 500, 838.025, out);   //=> 0 (Status.ok)
+ * out.p;    //=> 10000385.80092... (IAPWS-95 Table 7: 0.100003858e2 MPa)
+ * out.w;    //=> 1271.28440914... (Table 7: 0.127128441e4 m/s)
+ * propertiesAt(ctx, 500, -1, out);        //=> 3 (Status.invalidInput)
+ * ```
  */
 export function propertiesAt(ctx: FluidContext, T: number, rho: number, out: FluidState): StatusCode {
   if (!(T > 0 && rho > 0 && T < Infinity && rho < Infinity)) return Status.invalidInput;

@@ -12,7 +12,7 @@
  * @module
  */
 import { Status, type StatusCode } from '../core/status.js';
-import { ancillaryLiquidDensity, ancillaryPressure, ancillaryVaporDensity, FLUID_PHASE, propertiesAt, type FluidContext, type FluidState } from './model.js';
+import { ancillaryLiquidDensity, ancillaryPressure, ancillaryTemperature, ancillaryVaporDensity, FLUID_PHASE, propertiesAt, type FluidContext, type FluidState } from './model.js';
 
 /**
  * Solves the equilibrium at T from reduced densities dL, dV into ctx.satDL, ctx.satDV, ctx.satP.
@@ -58,6 +58,15 @@ export function solveSaturationDensities(ctx: FluidContext, T: number, dL0: numb
       stepV *= 0.5;
     }
     const stall = Math.abs(stepL) <= 4e-16 * dL && Math.abs(stepV) <= 4e-16 * dV;
+    if (i >= 1 && Math.abs(stepL) <= 1e-7 * dL && Math.abs(stepV) <= 1e-7 * dV) {
+      // quadratic convergence: the error after this step is of order (1e-7)² (times a constant of
+      // order one), at the rounding level of the densities; take
+      // it without another evaluation (J at the new point to first order, J_δ·step, is exact here)
+      ctx.satDL = dL + stepL;
+      ctx.satDV = dV + stepV;
+      ctx.satP = (JV + JdV * stepV) * m.rhor * m.R * T;
+      return Status.ok;
+    }
     dL += stepL;
     dV += stepV;
     if (stall && i > 2) {
@@ -103,8 +112,11 @@ function critical(ctx: FluidContext, liquid: FluidState, vapor: FluidState): Sta
  *   `Status.undefinedProperty` at T = T_c exactly (cp, cv, w diverge there)
  * @example
  * ```ts
- * const ctx = new FluidContext(waterModel()), l = new FluidState(), v = new FluidState();
- * saturationAtT(ctx, 450, l, v);   //=> 0; l.p = 932203.564 Pa (IAPWS-95 Table 8)
+ * const ctx = new FluidContext(fluidModel('water')!), l = new FluidState(), v = new FluidState();
+ * saturationAtT(ctx, 450, l, v);   //=> 0 (Status.ok)
+ * l.p;                             //=> 932203.56362... (IAPWS-95 Table 8: 0.932203564 MPa)
+ * v.rho;                           //=> 4.81200360... (Table 8: 0.481200360e1 kg/m³)
+ * saturationAtT(ctx, 700, l, v);   //=> 1 (Status.outOfRange: above T_c)
  * ```
  */
 export function saturationAtT(ctx: FluidContext, T: number, liquid: FluidState, vapor: FluidState): StatusCode {
@@ -118,8 +130,80 @@ export function saturationAtT(ctx: FluidContext, T: number, liquid: FluidState, 
 }
 
 /**
+ * Saturation at p by Newton's method on (δ', δ'', τ) together: J(δ', τ) = J(δ'', τ) = p/(ρᵣRT) and
+ * K(δ', τ) = K(δ'', τ), from the ancillary densities at the ancillary temperature T0. Writes
+ * ctx.satDL, ctx.satDV, ctx.satP and ctx.satT; `Status.noConvergence` sends the caller to the
+ * bracketed solve.
+ */
+function saturationNewton3(ctx: FluidContext, p: number, T0: number): StatusCode {
+  const m = ctx.model;
+  const ar = ctx.ar;
+  let tau = m.Tr / T0;
+  let dL = ancillaryLiquidDensity(m, T0) / m.rhor;
+  let dV = ancillaryVaporDensity(m, T0) / m.rhor;
+  // P̂(τ) = p/(ρᵣ R T) = c·τ
+  const c = p / (m.rhor * m.R * m.Tr);
+  const tauMin = m.Tr / m.Tc;
+  const tauMax = m.Tr / (m.Tt * 0.999);
+  for (let i = 0; i < 12; i++) {
+    m.residual(dL, tau, ar);
+    const JL = dL * (1 + dL * ar[1]!);
+    const KL = dL * ar[1]! + ar[0]! + Math.log(dL);
+    const JdL = 1 + 2 * dL * ar[1]! + dL * dL * ar[2]!;
+    const KdL = 2 * ar[1]! + dL * ar[2]! + 1 / dL;
+    const JtL = dL * dL * ar[5]!;
+    const KtL = dL * ar[5]! + ar[3]!;
+    m.residual(dV, tau, ar);
+    const JV = dV * (1 + dV * ar[1]!);
+    const KV = dV * ar[1]! + ar[0]! + Math.log(dV);
+    const JdV = 1 + 2 * dV * ar[1]! + dV * dV * ar[2]!;
+    const KdV = 2 * ar[1]! + dV * ar[2]! + 1 / dV;
+    const JtV = dV * dV * ar[5]!;
+    const KtV = dV * ar[5]! + ar[3]!;
+    const P = c * tau;
+    // F = (JL − P, JV − P, KV − KL); Jacobian rows over (δ', δ'', τ)
+    const f1 = JL - P;
+    const f2 = JV - P;
+    const f3 = KV - KL;
+    const a11 = JdL, a12 = 0, a13 = JtL - c;
+    const a21 = 0, a22 = JdV, a23 = JtV - c;
+    const a31 = -KdL, a32 = KdV, a33 = KtV - KtL;
+    const det = a11 * (a22 * a33 - a23 * a32) - a12 * (a21 * a33 - a23 * a31) + a13 * (a21 * a32 - a22 * a31);
+    if (!(Number.isFinite(det) && det !== 0)) return Status.noConvergence;
+    // Cramer's rule for the step −F
+    const sL = -(f1 * (a22 * a33 - a23 * a32) - a12 * (f2 * a33 - a23 * f3) + a13 * (f2 * a32 - a22 * f3)) / det;
+    const sV = -(a11 * (f2 * a33 - a23 * f3) - f1 * (a21 * a33 - a23 * a31) + a13 * (a21 * f3 - f2 * a31)) / det;
+    const sT = -(a11 * (a22 * f3 - f2 * a32) - a12 * (a21 * f3 - f2 * a31) + f1 * (a21 * a32 - a22 * a31)) / det;
+    const nL = dL + sL;
+    const nV = dV + sV;
+    const nT = tau + sT;
+    if (!(nV > 0 && nL > nV && nT > tauMin && nT < tauMax)) return Status.noConvergence;
+    // quadratic convergence: after steps below 1e-7 the error is of order 1e-14
+    const small = Math.abs(sL) <= 1e-7 * dL && Math.abs(sV) <= 1e-7 * dV && Math.abs(sT) <= 1e-8 * tau;
+    dL = nL;
+    dV = nV;
+    tau = nT;
+    if (small && i >= 1) {
+      ctx.satDL = dL;
+      ctx.satDV = dV;
+      ctx.satT = m.Tr / tau;
+      ctx.satP = p;
+      return Status.ok;
+    }
+  }
+  return Status.noConvergence;
+}
+
+/**
  * Saturated liquid and vapour at p (Pa), from the triple-point to the critical pressure.
  * @returns as {@link saturationAtT}
+ * @example
+ * ```ts
+ * const ctx = new FluidContext(fluidModel('water')!), l = new FluidState(), v = new FluidState();
+ * saturationAtP(ctx, 101325, l, v);   //=> 0 (Status.ok)
+ * l.T;                                //=> 373.12429584... (373.124 K, common practice)
+ * v.h - l.h;                          //=> 2256471.59... (J/kg)
+ * ```
  */
 export function saturationAtP(ctx: FluidContext, p: number, liquid: FluidState, vapor: FluidState): StatusCode {
   const m = ctx.model;
@@ -128,7 +212,12 @@ export function saturationAtP(ctx: FluidContext, p: number, liquid: FluidState, 
   if (p === m.pc) return critical(ctx, liquid, vapor);
   const lnp = Math.log(p);
   // starting value: invert the ancillary by Newton's method on ln p in T
-  let T = m.Tt + (m.Tc - m.Tt) * 0.5;
+  let T = ancillaryTemperature(m, lnp);
+  if (p < 0.98 * m.pc) {
+    const fast = saturationNewton3(ctx, p, T);
+    if (fast === Status.ok) return finish(ctx, ctx.satT, liquid, vapor);
+  }
+  T = m.Tt + (m.Tc - m.Tt) * 0.5;
   for (let i = 0; i < 30; i++) {
     const f = Math.log(ancillaryPressure(m, T)) - lnp;
     const h = 1e-6 * T;
