@@ -223,7 +223,9 @@ export function stateFromPX(ctx: FluidContext, p: number, x: number, out: FluidS
  * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
  * stateFromTRho(ctx, 647, 358, out);   //=> 0 (Status.ok)
  * out.p;                               //=> 22038475.5706... (IAPWS-95 Table 7: 0.220384756e2 MPa)
- * stateFromTRho(ctx, 400, 10, out);    //=> 0; out.x = 0.13567821..., out.phase = 2 (two-phase)
+ * stateFromTRho(ctx, 400, 10, out);    //=> 0
+ * out.x;       //=> 0.13567821...
+ * out.phase;   //=> 2 (two-phase)
  * ```
  */
 export function stateFromTRho(ctx: FluidContext, T: number, rho: number, out: FluidState): StatusCode {
@@ -409,6 +411,10 @@ function tryNewtonPY(ctx: FluidContext, p: number, target: number, by: number, T
     out.phase = T >= m.Tc ? FLUID_PHASE.supercritical : FLUID_PHASE.liquid;
   }
   out.x = NaN;
+  // the equation can have further roots of p(T, ρ) = p far from the stable one (a very compressed
+  // state at the same p): keep the answer only if it is the (p, T) state itself
+  const rho = out.rho;
+  if (densityPT(ctx, p, T, rho) !== Status.ok || !(Math.abs(ctx.work.rho - rho) <= 1e-6 * rho)) return false;
   return true;
 }
 
@@ -458,8 +464,12 @@ function flashPY(ctx: FluidContext, p: number, target: number, by: number, out: 
  * @example
  * ```ts
  * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
- * stateFromPH(ctx, 1e6, 3e6, out);      //=> 0; out.T = 549.16849785... K, out.phase = 1 (vapour)
- * stateFromPH(ctx, 101325, 1.5e6, out);  //=> 0; out.x = 0.47904093..., out.cp = NaN
+ * stateFromPH(ctx, 1e6, 3e6, out);      //=> 0
+ * out.T;       //=> 549.16849785... (K)
+ * out.phase;   //=> 1 (vapour)
+ * stateFromPH(ctx, 101325, 1.5e6, out);  //=> 0
+ * out.x;    //=> 0.47904093...
+ * out.cp;   //=> NaN (not defined in the two-phase dome)
  * ```
  */
 export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidState): StatusCode {
@@ -474,7 +484,9 @@ export function stateFromPH(ctx: FluidContext, p: number, h: number, out: FluidS
  * @example
  * ```ts
  * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
- * stateFromPS(ctx, 1e5, 7000, out);   //=> 0; out.T = 372.75592889... K, out.x = 0.94074577...
+ * stateFromPS(ctx, 1e5, 7000, out);   //=> 0
+ * out.T;   //=> 372.75592889... (K)
+ * out.x;   //=> 0.94074577...
  * ```
  */
 export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidState): StatusCode {
@@ -489,7 +501,9 @@ export function stateFromPS(ctx: FluidContext, p: number, s: number, out: FluidS
  * @example
  * ```ts
  * const ctx = new FluidContext(fluidModel('water')!), out = new FluidState();
- * stateFromHS(ctx, 3e6, 7000, out);   //=> 0; out.p = 1075561.49511... Pa, out.T = 550.23690782... K
+ * stateFromHS(ctx, 3e6, 7000, out);   //=> 0
+ * out.p;   //=> 1075561.49511... (Pa)
+ * out.T;   //=> 550.23690782... (K)
  * ```
  */
 export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidState): StatusCode {

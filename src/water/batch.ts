@@ -258,7 +258,7 @@ function model(): BatchModel<WaterState, WaterBatchProperty> {
  * const p = Float64Array.of(1e6, 1e6, NaN, -5);
  * const T = Float64Array.of(300, 500, 400, 400);
  * const r = waterBatch({ p, T }, ['h', 'rho']);
- * r.h[0];        //=> 112.56e3 (J/kg)
+ * r.h[0];        //=> 113.4923e3 (J/kg)
  * r.status;      //=> Uint8Array [0, 0, 3, 1]
  * ```
  */

@@ -31,7 +31,8 @@ const PROBE_PRESSURES = [P_MAX, 1e6, P_SAT_MIN, 1e3, P_SEARCH_MIN];
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromHS(3000e3, 6.8e3, out);   //=> 0 (Status.ok); out.p ≈ 1.69e6 Pa
+ * stateFromHS(3000e3, 6.8e3, out);   //=> 0 (Status.ok)
+ * out.p;   //=> 1.6883e6 (Pa)
  * ```
  */
 export function stateFromHS(h: number, s: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {

@@ -21,7 +21,9 @@ import { PHASE, type WaterState } from './water-state.js';
  * @example
  * ```ts
  * const out = new WaterState();
- * stateFromPT(10e6, 773.15, out);   //=> 0; out.h = 3375058 J/kg, out.region = 2
+ * stateFromPT(10e6, 773.15, out);   //=> 0
+ * out.h;        //=> 3375058.44 (J/kg; IF97 Table 15 at 10 MPa, 773.15 K via (p, T))
+ * out.region;   //=> 2
  * stateFromPT(10e6, 3000, out);     //=> 1 (Status.outOfRange)
  * ```
  */
@@ -80,7 +82,7 @@ export class DensityResult {
  * ```ts
  * const r = new DensityResult();
  * region3Density(25.5837018e6, 650, 0, r);   //=> 0
- * r.rho;                                      //=> 500 (kg/m³)
+ * r.rho;                                      //=> 500.0000 (kg/m³)
  * ```
  */
 export function region3Density(p: number, T: number, branch: 0 | 1 | 2, out: DensityResult, ctx: SolverContext = defaultContext()): StatusCode {

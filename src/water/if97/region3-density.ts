@@ -104,7 +104,7 @@ function found(rho: number, ctx: SolverContext): StatusCode {
  * ```ts
  * const ctx = new SolverContext();
  * region3DensityAt(25.5837018e6, 650, 0, ctx);   //=> 0
- * ctx.rho;                                        //=> 500 (kg/m³; IF97 Table 33)
+ * ctx.rho;                                        //=> 500.0000 (kg/m³; IF97 Table 33)
  * ```
  */
 export function region3DensityAt(p: number, T: number, branch: 0 | 1 | 2, ctx: SolverContext): StatusCode {

@@ -25,7 +25,7 @@ const yp = new Float64Array(DEGREE + 1);
  * Starting pressure in Pa for (h [J/kg], s [J/(kg·K)]) in region 3b.
  * @example
  * ```ts
- * region3bStartPressureHS(2500e3, 5.0e3);   //=> 27.97e6 (Pa); the (h, s) flash converges to 27.976 MPa there
+ * region3bStartPressureHS(2500e3, 5.0e3);   //=> 27.97e6 (Pa; the (h, s) flash converges to 27.976 MPa there)
  * ```
  */
 export function region3bStartPressureHS(h: number, s: number): number {
