@@ -370,7 +370,8 @@ function newtonPY(ctx: FluidContext, p: number, target: number, by: number, T0: 
     T += dT;
     rho += dR;
     if (lambda === 1 && i >= 1 && Math.abs(dT) <= 1e-7 * T && Math.abs(dR) <= 1e-7 * rho) {
-      if (!(T >= m.Tmin && T <= m.Tmax && rho <= m.rhoMax)) return Status.noConvergence;
+      // the range ends, with rounding room (an (h, s) search at T_max probes pressures just past it)
+      if (!(T >= m.Tmin * (1 - 1e-12) && T <= m.Tmax * (1 + 1e-12) && rho <= m.rhoMax)) return Status.noConvergence;
       if (propertiesAt(ctx, T, rho, out) !== Status.ok || !(out.dpdrho > 0)) return Status.noConvergence;
       return Status.ok;
     }

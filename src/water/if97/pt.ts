@@ -22,7 +22,7 @@ import { PHASE, type WaterState } from './water-state.js';
  * ```ts
  * const out = new WaterState();
  * stateFromPT(10e6, 773.15, out);   //=> 0
- * out.h;        //=> 3375058.44 (J/kg; IF97 Table 15 at 10 MPa, 773.15 K via (p, T))
+ * out.h;        //=> 3375058.44 (J/kg)
  * out.region;   //=> 2
  * stateFromPT(10e6, 3000, out);     //=> 1 (Status.outOfRange)
  * ```
