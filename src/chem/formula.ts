@@ -42,7 +42,7 @@ export function knownElements(): string[] {
 /**
  * Counts the atoms of each element in a formula.
  * @throws {@link FormulaError} with the position of the first problem (also for brackets nested more
- *   than {@link FORMULA_MAX_DEPTH} deep, a formula longer than {@link FORMULA_MAX_LENGTH} characters,
+ *   than `FORMULA_MAX_DEPTH` deep, a formula longer than `FORMULA_MAX_LENGTH` characters,
  *   and counts too large for double precision)
  * @throws {@link InvalidInputError} when `formula` is not a string
  * @example

@@ -439,12 +439,24 @@ export function waterDeltaH<const P1 extends WaterPair, const P2 extends WaterPa
   return resultQuantity(stateOrNamed(state2, 'state2').h.si - stateOrNamed(state1, 'state1').h.si, 'specificEnergy', 'deltaH');
 }
 
-/** Δu = u(state2) − u(state1) between two states given by any {@link WaterPair}. */
+/**
+ * Δu = u(state2) − u(state1) between two states given by any {@link WaterPair}.
+ * @example
+ * ```ts
+ * water.deltaU({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/kg');   //=> -834.286
+ * ```
+ */
 export function waterDeltaU<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEnergy'> {
   return resultQuantity(stateOrNamed(state2, 'state2').u.si - stateOrNamed(state1, 'state1').u.si, 'specificEnergy', 'deltaU');
 }
 
-/** Δs = s(state2) − s(state1) between two states given by any {@link WaterPair}. */
+/**
+ * Δs = s(state2) − s(state1) between two states given by any {@link WaterPair}.
+ * @example
+ * ```ts
+ * water.deltaS({ p: '10 MPa', T: '500 °C' }, { p: '10 kPa', x: 0.9 }).in('kJ/(kg·K)');   //=> 0.799603
+ * ```
+ */
 export function waterDeltaS<const P1 extends WaterPair, const P2 extends WaterPair>(state1: CheckedWaterPair<P1>, state2: CheckedWaterPair<P2>): Quantity<'specificEntropy'> {
   return resultQuantity(stateOrNamed(state2, 'state2').s.si - stateOrNamed(state1, 'state1').s.si, 'specificEntropy', 'deltaS');
 }

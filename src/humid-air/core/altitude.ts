@@ -30,7 +30,14 @@ export function standardAtmospherePressure(Z: number): number {
   return P0 * (1 - K * Z) ** N;
 }
 
-/** The status of {@link standardAtmospherePressure} for Z: invalidInput (not finite), outOfRange, or ok. */
+/**
+ * The status of {@link standardAtmospherePressure} for Z: invalidInput (not finite), outOfRange, or ok.
+ * @example
+ * ```ts
+ * altitudePressureStatus(1000);    //=> 0 (Status.ok)
+ * altitudePressureStatus(20000);   //=> 1 (Status.outOfRange: above 11 000 m)
+ * ```
+ */
 export function altitudePressureStatus(Z: number): StatusCode {
   if (!Number.isFinite(Z)) return Status.invalidInput;
   return Z >= ALTITUDE_MIN && Z <= ALTITUDE_MAX ? Status.ok : Status.outOfRange;

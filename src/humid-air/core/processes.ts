@@ -182,6 +182,13 @@ export function sensibleToTemperature(inlet: HumidAirState, mda: number, T2: num
 /**
  * Sensible heating (Q > 0) or cooling (Q < 0) of a stream by a heat flow Q (W): h2 = h1 + Q/ṁa at
  * constant W.
+ * @example
+ * ```ts
+ * const inlet = new HumidAirState(), out = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 303.15, 0.5, 101325, true, inlet);   // 30 °C, 50 %
+ * sensibleByHeat(inlet, 2, 10e3, true, out, loads);   //=> 0
+ * out.T;   //=> 308.0008 (K: 10 kW into 2 kg/s of air)
+ * ```
  */
 export function sensibleByHeat(inlet: HumidAirState, mda: number, Q: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
@@ -201,6 +208,14 @@ export function sensibleByHeat(inlet: HumidAirState, mda: number, Q: number, wet
  * temperature) and bypass factor BF (0 ≤ BF < 1): the leaving air is the fraction BF of entering air
  * mixed with 1 − BF of air saturated at ADP (W and h linear). Condensate leaves at `Tcondensate`
  * (K; liquid, 273.15 K … 373.15 K) with its IF97 region 1 enthalpy.
+ * @example
+ * ```ts
+ * const inlet = new HumidAirState(), out = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 303.15, 0.5, 101325, true, inlet);   // 30 °C, 50 %
+ * coolingCoilBypass(inlet, 2, 283.15, 0.15, 283.15, true, out, loads);   //=> 0
+ * out.T;         //=> 286.1764 (K)
+ * loads.total;   //=> -59379.7 (W: heat removed)
+ * ```
  */
 export function coolingCoilBypass(inlet: HumidAirState, mda: number, ADP: number, BF: number, Tcondensate: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
@@ -222,6 +237,14 @@ export function coolingCoilBypass(inlet: HumidAirState, mda: number, ADP: number
  * Cooling with dehumidification to a leaving dry-bulb T2 (K) and relative humidity RH2; the
  * condensate leaves at `Tcondensate` (K). Refused when the leaving air would hold more water than
  * the entering air (PROCESS_REASON.wouldHumidify) or be warmer.
+ * @example
+ * ```ts
+ * const inlet = new HumidAirState(), out = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 303.15, 0.5, 101325, true, inlet);   // 30 °C, 50 %
+ * coolingCoilToState(inlet, 2, 288.15, 0.9, 288.15, true, out, loads);   //=> 0
+ * out.W;         //=> 0.009568025 (kg/kg)
+ * loads.total;   //=> -49860.7 (W)
+ * ```
  */
 export function coolingCoilToState(inlet: HumidAirState, mda: number, T2: number, RH2: number, Tcondensate: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
@@ -273,6 +296,13 @@ function humidifyAlongLine(inlet: HumidAirState, hw: number, target: number, val
  * Steam humidification to a target W (kg/kg) or RH, with steam at (pSteam, TSteam) (Pa, K; vapour,
  * IF97 region 2: TSteam ≥ T_sat(pSteam), ≤ 1073.15 K, pSteam ≤ 10 MPa). Adiabatic:
  * h2 = h1 + (W2 − W1)·h_steam; heat = 0.
+ * @example
+ * ```ts
+ * const inlet = new HumidAirState(), out = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 303.15, 0.5, 101325, true, inlet);   // 30 °C, 50 %
+ * steamHumidifierSI(inlet, 2, TARGET.RH, 0.7, 200e3, 423.15, true, out, loads);   //=> 0
+ * out.W;   //=> 0.02048373 (kg/kg)
+ * ```
  */
 export function steamHumidifier(inlet: HumidAirState, mda: number, target: number, value: number, pSteam: number, TSteam: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);
@@ -292,6 +322,13 @@ export function steamHumidifier(inlet: HumidAirState, mda: number, target: numbe
  * Adiabatic (evaporative) humidification with liquid water at Twater (K, 273.15 … 373.15; IF97
  * region 1 enthalpy) to a target W, RH or leaving dry-bulb T. The air cools along
  * h2 = h1 + (W2 − W1)·hw, close to its wet-bulb line; heat = 0.
+ * @example
+ * ```ts
+ * const inlet = new HumidAirState(), out = new HumidAirState(), loads = new ProcessLoads();
+ * humidAirStateSI(PAIR.T_RH, 303.15, 0.5, 101325, true, inlet);   // 30 °C, 50 %
+ * evaporativeHumidifierSI(inlet, 2, TARGET.RH, 0.7, 293.15, true, out, loads);   //=> 0
+ * out.T;   //=> 299.2927 (K: cooled by evaporation)
+ * ```
  */
 export function evaporativeHumidifier(inlet: HumidAirState, mda: number, target: number, value: number, Twater: number, wetBulb: boolean, out: HumidAirState, loads: ProcessLoads): StatusCode {
   if (badFlow(mda)) return fail(loads, Status.invalidInput, PROCESS_REASON.flow);

@@ -30,7 +30,7 @@ export const RESIDUAL = {
   humidifierRH: 3,
 } as const;
 
-/** W at dry-bulb T and relative humidity RH, or {@link NO_SATURATION} when RH·p_ws ≥ p. */
+/** W at dry-bulb T and relative humidity RH, or `NO_SATURATION` when RH·p_ws ≥ p. */
 export function humidityRatioAtRH(p: number, T: number, RH: number): number {
   const pw = RH * waterSaturationPressure(T);
   return pw < p ? humidityRatioFromVaporPressure(p, pw) : NO_SATURATION;

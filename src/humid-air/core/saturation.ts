@@ -132,7 +132,7 @@ function frostPoint(pw: number): number {
 /**
  * The temperature at which pure water's saturation pressure is `pw` (the dew point, or the frost
  * point below 0 °C, of that partial pressure), in K: over liquid from IF97 Eq. 31 (exact inverse
- * of Eq. 30), over ice by {@link frostPoint}. Partial pressures between the ice branch's top
+ * of Eq. 30), over ice by `frostPoint`. Partial pressures between the ice branch's top
  * (611.154 Pa at 273.15 K) and the liquid branch's bottom (611.213 Pa) return 273.15 K.
  * Returns −1 when the answer lies outside [Tlo, Thi], for pw ≤ 0, or when Newton fails.
  * @example

@@ -454,7 +454,13 @@ function belowRH(p: number, RH: number): number {
   return T * (1 - 1e-12);
 }
 
-/** The humidity ratio of saturated air at (p, T), kg/kg, or −1 when it does not exist. */
+/**
+ * The humidity ratio of saturated air at (p, T), kg/kg, or −1 when it does not exist.
+ * @example
+ * ```ts
+ * saturationHumidityRatioAt(101325, 303.15);   //=> 0.02720697 (kg/kg)
+ * ```
+ */
 export function saturationHumidityRatioAt(p: number, T: number): number {
   const W = humidityRatioAtRH(p, T, 1);
   return W === NO_SATURATION ? -1 : W;

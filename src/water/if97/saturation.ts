@@ -98,6 +98,11 @@ export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterPr
  * Eq. 30 plus a linear share of its miss at the critical point (Eq. 30 gives p_s(T_c) = p_c +
  * 0.32 mPa, within its stated accuracy), so that the line ends exactly at (T_c, p_c) and T_s(p_c) = T_c.
  * The correction is at most 0.32 mPa (1.5e-11 relative).
+ * @example
+ * ```ts
+ * saturationLinePressure(373.15);   //=> 101417.978 (Pa; Eq. 30 alone away from T_c)
+ * saturationLinePressure(647.096);  //=> 22064000 (Pa: p_c exactly)
+ * ```
  */
 export function saturationLinePressure(T: number): number {
   const ps = saturationPressure(T);
