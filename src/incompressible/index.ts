@@ -10,8 +10,8 @@ import { compileDefinition, type IncompressibleDefinition } from './schema.js';
 import { substanceFacade, type IncompressibleSubstance } from './substance.js';
 
 export { incompressibleNames, incompressibleCatalogue } from './catalogue.js';
-export { incompressibleDefinitionSchema, sourceSchema, compileDefinition } from './schema.js';
-export type { IncompressibleDefinition } from './schema.js';
+export { compileDefinition } from './schema.js';
+export type { IncompressibleDefinition, DefinitionSource } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
@@ -36,7 +36,7 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * outside the range throw rather than extrapolate.
  *
  * @param nameOrDefinition a catalogue name (`"water"`, `"copper"`, `"engine oil"`) or a definition
- *   validated by {@link incompressibleDefinitionSchema}
+ *   (checked field by field; a bad one throws {@link DefinitionError} naming it)
  * @throws {@link UnknownNameError} unknown name, with the closest names
  * @throws {@link DefinitionError} invalid definition, naming each bad field
  * @example

@@ -78,8 +78,52 @@ export const incompressibleDefinitionSchema = z.strictObject({
   finding: z.optional(z.string()),
 });
 
-/** A substance definition, as accepted by `incompressible()`. */
-export type IncompressibleDefinition = z.input<typeof incompressibleDefinitionSchema>;
+/** A quantity in a definition: unit text or a Quantity. */
+type QuantityField = string | Quantity;
+
+/** Where a definition's numbers come from. */
+export interface DefinitionSource {
+  readonly title: string;
+  readonly authors?: string;
+  readonly year?: number;
+  readonly table?: string;
+}
+
+/**
+ * A substance definition, as accepted by `incompressible()`. A plain type (the zod schema that
+ * checks it is internal; `Same` below proves the two agree), so the published types do not depend on zod.
+ */
+export interface IncompressibleDefinition {
+  readonly name: string;
+  readonly aliases?: readonly string[];
+  readonly state: 'liquid' | 'solid';
+  /** Constant c as a quantity (`"4.18 kJ/(kg·K)"`), a polynomial in T, or a table c(T). */
+  readonly c:
+    | QuantityField
+    | { readonly polynomial: readonly number[]; readonly unit: string; readonly temperatureUnit: string }
+    | { readonly table: { readonly T: readonly number[]; readonly c: readonly number[] }; readonly unit: string; readonly temperatureUnit: string };
+  /** Molar mass, when c is given per mole. */
+  readonly molarMass?: QuantityField;
+  /** Constant ρ as a quantity (`"997 kg/m³"`) or a table ρ(T). */
+  readonly density: QuantityField | { readonly table: { readonly T: readonly number[]; readonly rho: readonly number[] }; readonly unit: string; readonly temperatureUnit: string };
+  /** Valid temperatures; `supercooledMin` is the lowest supercooled-liquid temperature, used on request. */
+  readonly T: { readonly min: QuantityField; readonly max: QuantityField; readonly supercooledMin?: QuantityField };
+  readonly source?: DefinitionSource;
+  readonly basis?: 'published' | 'computed' | 'from memory' | 'common practice' | 'measured' | 'user';
+  /** Starts with `fit deviation: `, `source: ` or `estimate: `. */
+  readonly uncertainty?: string;
+  readonly note?: string;
+  /** Appended to out-of-range errors. */
+  readonly rangeNote?: string;
+  /** Something found while checking the data that a user should know. */
+  readonly finding?: string;
+}
+
+type Mutable<T> = T extends Quantity ? T : T extends readonly (infer E)[] ? Mutable<E>[] : T extends object ? { -readonly [K in keyof T]: Mutable<T[K]> } : T;
+type Same<A, B> = [Mutable<A>] extends [B] ? ([B] extends [Mutable<A>] ? true : false) : false;
+// compile-time proof that the plain type and the schema accept the same definitions
+// eslint-disable-next-line @typescript-eslint/no-unused-vars
+const DEFINITION_TYPES_MATCH: Same<IncompressibleDefinition, z.input<typeof incompressibleDefinitionSchema>> = true;
 
 /**
  * Validates a definition (shape with zod, then units, ranges and monotonicity) and compiles it.

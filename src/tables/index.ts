@@ -16,6 +16,5 @@ export type { StatusCode } from '../core/status.js';
 export type { InterpolationMethod, InverseResult, LookupOptions, LookupResult } from './validate.js';
 export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';
 export type { CsvOptions } from './load.js';
-export { tableSchema, gridSchema, columnSchema, axisSchema, tableSourceSchema } from './schema.js';
-export type { TableData, GridData } from './schema.js';
+export type { TableData, GridData, TableSource, InterpolationErrors } from './schema.js';
 export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';

@@ -37,7 +37,7 @@ function readText(value: unknown, parameter: string): string | undefined {
 }
 
 /**
- * A one-dimensional table from JSON text or an already-parsed object (see `tableSchema`).
+ * A one-dimensional table from JSON text or an already-parsed object (the shape of {@link TableData}).
  * @throws {@link InvalidInputError} when `json` is neither text nor an object
  * @throws {@link DefinitionError} naming the row and column of each problem
  * @example
@@ -52,7 +52,7 @@ export function tableFromJSON(json: string | object): PropertyTable {
 }
 
 /**
- * A grid table from JSON text or an already-parsed object (see `gridSchema`).
+ * A grid table from JSON text or an already-parsed object (the shape of {@link GridData}).
  * @throws {@link InvalidInputError} when `json` is neither text nor an object
  * @throws {@link DefinitionError} naming the axis, row and cell of each problem
  * @example

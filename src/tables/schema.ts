@@ -56,7 +56,42 @@ export const gridSchema = z.strictObject({
   interpolationError: z.optional(interpolationErrorSchema),
 });
 
-/** A one-dimensional table as stored. */
-export type TableData = z.input<typeof tableSchema>;
-/** A grid table as stored. */
-export type GridData = z.input<typeof gridSchema>;
+/** Where a table's numbers come from: a citation object or free text. */
+export type TableSource = string | { readonly title: string; readonly authors?: string; readonly year?: number; readonly table?: string; readonly generator?: string };
+
+/** The measured interpolation error of each column, by method (written by the table generator). */
+export type InterpolationErrors = { readonly [column: string]: { readonly [method: string]: { readonly maxRelative: number; readonly maxAbsolute: number; readonly unit: string; readonly at: string } } };
+
+/**
+ * A one-dimensional table as stored: rows keyed by one strictly monotone column. A plain type (the
+ * zod schema is internal; `Same` below proves the two agree), so the published types do not
+ * depend on zod.
+ */
+export interface TableData {
+  readonly kind?: 'table';
+  readonly name: string;
+  readonly source: TableSource;
+  /** The key column's name. */
+  readonly key: string;
+  readonly columns: { readonly [name: string]: { readonly unit: string; readonly values: readonly (number | null)[] } };
+  readonly notes?: string;
+  readonly interpolationError?: InterpolationErrors;
+}
+
+/** A grid table as stored: values[iy][ix], `null` where the grid has no state. */
+export interface GridData {
+  readonly kind: 'grid';
+  readonly name: string;
+  readonly source: TableSource;
+  readonly x: { readonly name: string; readonly unit: string; readonly values: readonly number[] };
+  readonly y: { readonly name: string; readonly unit: string; readonly values: readonly number[] };
+  readonly columns: { readonly [name: string]: { readonly unit: string; readonly values: readonly (readonly (number | null)[])[] } };
+  readonly notes?: string;
+  readonly interpolationError?: InterpolationErrors;
+}
+
+/** Compile-time proof that a plain type and a schema's input type accept the same values. */
+type Mutable<T> = T extends readonly (infer E)[] ? Mutable<E>[] : T extends object ? { -readonly [K in keyof T]: Mutable<T[K]> } : T;
+type Same<A, B> = [Mutable<A>] extends [B] ? ([B] extends [Mutable<A>] ? true : false) : false;
+// eslint-disable-next-line @typescript-eslint/no-unused-vars
+const TABLE_TYPES_MATCH: [Same<TableData, z.input<typeof tableSchema>>, Same<GridData, z.input<typeof gridSchema>>] = [true, true];

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DefinitionError, InvalidInputError, OutOfRangeError, UnknownNameError } from '../../src/errors.js';
-import { densityAt, incompressible, incompressibleCatalogue, incompressibleDefinitionSchema, incompressibleNames } from '../../src/incompressible/index.js';
+import { densityAt, incompressible, incompressibleCatalogue, incompressibleNames } from '../../src/incompressible/index.js';
+import { incompressibleDefinitionSchema } from '../../src/incompressible/schema.js';
 import { lookupIncompressible } from '../../src/incompressible/catalogue.js';
 import { normaliseName } from '../../src/lookup.js';
 import { quantity } from '../../src/units/index.js';
