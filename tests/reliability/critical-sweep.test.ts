@@ -26,7 +26,7 @@ import { saturationPressure } from '../../src/water/if97/region4.js';
 import { saturationAtP, saturationAtT } from '../../src/water/if97/saturation.js';
 import { PHASE, WaterState } from '../../src/water/if97/water-state.js';
 import { water } from '../../src/water/index.js';
-import { closeRel, Random } from './helpers.js';
+import { Failures, Random, closeRel } from './helpers.js';
 
 const TOL = 1e-9;
 const ctx = new SolverContext();
@@ -34,18 +34,6 @@ const liquid = new WaterProperties();
 const vapor = new WaterProperties();
 const a = new WaterState();
 const b = new WaterState();
-
-class Failures {
-  readonly list: string[] = [];
-  count = 0;
-  add(what: string): void {
-    this.count++;
-    if (this.list.length < 12) this.list.push(what);
-  }
-  expectNone(label: string): void {
-    expect(this.count, `${label}: ${this.count} failures, first ones:\n${this.list.join('\n')}`).toBe(0);
-  }
-}
 
 /** Relative distances below the critical point: exactly 0, a run of ulps, then log-uniform 1e-16 … 1e-3. */
 function distances(r: Random, n: number): number[] {

@@ -108,3 +108,16 @@ export class Random {
 export function closeRel(a: number, b: number, rel: number, floor = 0): boolean {
   return Math.abs(a - b) <= rel * Math.max(Math.abs(a), Math.abs(b), floor);
 }
+
+/** Failures of a sweep: counted, the first dozen kept for the message. */
+export class Failures {
+  readonly list: string[] = [];
+  count = 0;
+  add(what: string): void {
+    this.count++;
+    if (this.list.length < 12) this.list.push(what);
+  }
+  expectNone(label: string): void {
+    expect(this.count, `${label}: ${this.count} failures, first ones:\n${this.list.join('\n')}`).toBe(0);
+  }
+}

@@ -14,21 +14,9 @@ import { HumidAirState, humidAirState, PAIR } from '../../src/humid-air/core/sta
 import { dryAir, idealGas, speciesNames, type IdealGas } from '../../src/ideal-gas/index.js';
 import { incompressible, incompressibleNames } from '../../src/incompressible/index.js';
 import { Quantity } from '../../src/units/quantity.js';
-import { closeRel, Random } from './helpers.js';
+import { Failures, Random, closeRel } from './helpers.js';
 
 const TOL = 1e-9;
-
-class Failures {
-  readonly list: string[] = [];
-  count = 0;
-  add(what: string): void {
-    this.count++;
-    if (this.list.length < 12) this.list.push(what);
-  }
-  expectNone(label: string): void {
-    expect(this.count, `${label}: ${this.count} failures, first ones:\n${this.list.join('\n')}`).toBe(0);
-  }
-}
 
 const K = (T: number) => Quantity.fromSI(T, 'temperature');
 const Pa = (p: number) => Quantity.fromSI(p, 'pressure');

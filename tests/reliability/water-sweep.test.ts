@@ -23,7 +23,7 @@ import { P_SAT_MIN, saturationAtP, saturationAtT } from '../../src/water/if97/sa
 import { stateFromTV } from '../../src/water/if97/tv.js';
 import { PHASE, WaterState } from '../../src/water/if97/water-state.js';
 import { water } from '../../src/water/index.js';
-import { closeRel, Random } from './helpers.js';
+import { Failures, Random, closeRel } from './helpers.js';
 
 const FIELDS = ['T', 'p', 'rho', 'v', 'u', 'h', 's', 'cp', 'cv', 'w'] as const;
 const TWO_PHASE_FIELDS = ['T', 'p', 'rho', 'v', 'u', 'h', 's', 'x'] as const;
@@ -34,18 +34,6 @@ const H_FLOOR = 1e4;
 const S_FLOOR = 10;
 
 /** Failures collected per check, reported together with the first few states. */
-class Failures {
-  readonly list: string[] = [];
-  count = 0;
-  add(what: string): void {
-    this.count++;
-    if (this.list.length < 12) this.list.push(what);
-  }
-  expectNone(label: string): void {
-    expect(this.count, `${label}: ${this.count} failures, first ones:\n${this.list.join('\n')}`).toBe(0);
-  }
-}
-
 function finite(st: WaterProperties, fields: readonly string[]): string | undefined {
   for (const f of fields) if (!Number.isFinite((st as unknown as Record<string, number>)[f])) return `${f} = ${(st as unknown as Record<string, number>)[f]}`;
   return undefined;
