@@ -8,107 +8,26 @@ import { DimensionError, HeatstateError, InvalidInputError, OutOfRangeError, Res
 import { productDimension, quotientDimension, siUnitOfVector, vectorOf, type AnyDimension, type ProductOf, type QuotientOf, type ScalarDimension } from './arithmetic.js';
 import { checkFinite, checkOptions, checkString, describeValue } from './check.js';
 import { DIMENSIONS, isDimension, SI_UNIT, type Dimension, type DimensionVector } from './dimensions.js';
-import { previewText, UNIT_TEXT_MAX_LENGTH, type ParseCounter } from './expression.js';
+import { previewText } from './expression.js';
+import { build, readQuantity } from './construct.js';
+import { splitQuantityText } from './text.js';
+
+export { QUANTITY_TEXT_MAX_LENGTH, splitQuantityText } from './text.js';
 import { asDimension, DEFAULT_AMBIENT_PA, fromSI, resolveExpression, resolveUnit, toSI, type ResolvedUnit } from './registry.js';
 import type { DimensionOfUnit, KnownUnit, TargetUnitOf, UnitOf } from './spellings.js';
 
 export type { AnyDimension, DerivedDimension, ProductOf, QuotientOf, ScalarDimension } from './arithmetic.js';
 
-/** Options for units that need more than a factor. */
-export interface QuantityOptions {
-  /**
-   * Ambient (barometric) pressure for gauge units (`psig`, `barg`, `kPag`).
-   * Default: the standard atmosphere, 101 325 Pa (14.696 psia).
-   */
-  readonly ambient?: QuantityLike<'pressure'>;
-}
+import type { QuantityOf, TargetOf, QuantityOptions, QuantityText, QuantityLike, QuantityInput, UnitInput, DimensionOfText, Tolerance, ScaleFactor, ProductAllowed, QuotientAllowed, MinusOperand, MinusResult, Operand, CompareOperand } from './quantity-types.js';
+export type { QuantityOf, QuantityOptions, QuantityText, QuantityLike, QuantityInput, UnitInput, DimensionOfText, Tolerance } from './quantity-types.js';
 
-/**
- * Unit text a value of dimension `D` may be written as, checked by the compiler:
- * `"300 K"`, `"14.7 psig"`, `"2.5 kJ/(kg·K)"`.
- */
-export type QuantityText<D extends Dimension> = `${number} ${UnitOf<D>}`;
-
-/**
- * A `Quantity` of dimension `D`, or unit text of that dimension. Accepted wherever heatstate takes an input.
- *
- * Literal text is checked by the compiler (`'500 psia'` is not a `QuantityLike<'temperature'>`).
- * A plain `string` (text known only at run time) is not part of this type: no non-generic type can
- * accept `string` and still refuse a wrong literal, since every literal is a `string`. Functions
- * that take run-time text as well are generic over the input and use {@link QuantityInput}.
- */
-export type QuantityLike<D extends Dimension> = Quantity<D> | QuantityText<D>;
-
-/**
- * The input check for a generic parameter `I`: a `Quantity<D>`, literal text of dimension `D`,
- * or a plain `string` (checked at run time). A literal of another dimension is a compile error.
- *
- * ```ts
- * function boilingMargin<I extends QuantityLike<'temperature'> | string>(T: QuantityInput<'temperature', I>) { ... }
- * boilingMargin('300 K');          // compiles
- * boilingMargin(textFromAForm);    // a string: compiles, checked at run time
- * boilingMargin('500 psia');       // compile error
- * ```
- */
-export type QuantityInput<D extends Dimension, I> = I & InputCheck<D, I>;
-
-type InputCheck<D extends Dimension, I> = I extends Quantity<Dimension> | DerivedQuantity
-  ? unknown
-  : string extends I
-    ? unknown
-    : I extends QuantityText<D>
-      ? unknown
-      : QuantityText<D>;
-
-/**
- * The unit check for a generic unit parameter `U`: any run-time `string`, an unlisted literal
- * spelling (checked at run time), or a listed spelling of dimension `D`. A listed spelling of
- * another dimension (`'K'` for a pressure) is a compile error.
- */
-export type UnitInput<D extends AnyDimension, U> = U & UnitCheck<D, U>;
-
-type UnitCheck<D extends AnyDimension, U> = string extends U
-  ? unknown
-  : D extends Dimension
-    ? U extends KnownUnit
-      ? U extends TargetUnitOf<D>
-        ? unknown
-        : TargetUnitOf<D>
-      : unknown
-    : unknown;
-
-/** The dimension that unit text such as `"500 psia"` has, as far as the compiler can tell. */
-export type DimensionOfText<T extends string> = T extends `${string} ${infer U}`
-  ? U extends KnownUnit
-    ? DimensionOfUnit<U>
-    : Dimension
-  : Dimension;
-
-/** How {@link Quantity.eq} and {@link Quantity.compare} treat two values as equal. */
-export interface Tolerance<D extends AnyDimension> {
-  /** Relative tolerance, of the larger magnitude in SI (for temperatures: in kelvins). */
-  readonly rel?: number;
-  /** Absolute tolerance: a quantity of the same dimension (a temperature difference for temperatures). */
-  readonly abs?: D extends 'temperature' ? QuantityLike<'temperatureDifference'> : D extends Dimension ? QuantityLike<D> : DerivedQuantity;
-}
-
-type IsTemperature<D> = [D] extends ['temperature'] ? true : false;
-type IsScalar<D> = [D] extends [ScalarDimension] ? true : false;
-/** Scaling an absolute temperature by a plain number depends on the scale: refused. */
-type ScaleFactor<D> = IsTemperature<D> extends true ? never : number;
-type ProductAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : IsScalar<D> extends true ? (IsTemperature<O> extends true ? never : unknown) : unknown;
-type QuotientAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : unknown;
-type MinusOperand<D extends AnyDimension> = D extends 'temperature' ? 'temperature' | 'temperatureDifference' : D;
-type MinusResult<D extends AnyDimension, O extends AnyDimension> = D extends 'temperature' ? (O extends 'temperature' ? 'temperatureDifference' : 'temperature') : D;
-/** A quantity operand whose dimension `O` is inferred from its `dimension` field alone. */
-type Operand<O extends AnyDimension> = { readonly dimension: O } & BaseQuantity<NoInfer<O>>;
-type CompareOperand<D extends AnyDimension> = D extends Dimension ? QuantityLike<D> : DerivedQuantity;
-
-function describe(dimension: AnyDimension): string {
+/** @internal A dimension's name in words, for messages. */
+export function describe(dimension: AnyDimension): string {
   return dimension === 'derived' ? 'derived quantity' : dimension.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
 }
 
-function ambientPa(options: QuantityOptions | undefined, fallback: number): number {
+/** @internal The ambient pressure of the options, or `fallback`. */
+export function ambientPa(options: QuantityOptions | undefined, fallback: number): number {
   checkOptions(options, 'options');
   if (options?.ambient === undefined) return fallback;
   return readQuantity(options.ambient, 'pressure', 'ambient');
@@ -553,17 +472,6 @@ export class Quantity<out D extends Dimension = Dimension> extends BaseQuantity<
  */
 export class DerivedQuantity extends BaseQuantity<'derived'> {}
 
-/**
- * The quantity class of a dimension: `Quantity<D>` for a named one, {@link DerivedQuantity} for
- * `'derived'`, and `BaseQuantity<AnyDimension>` where the compiler cannot tell (a product off the
- * table): that one converts, takes part in arithmetic and narrows with `.as(...)`.
- */
-export type QuantityOf<D extends AnyDimension> = [D] extends [Dimension] ? NamedQuantity<D> : [D] extends ['derived'] ? DerivedQuantity : BaseQuantity<D>;
-
-type NamedQuantity<D> = D extends Dimension ? Quantity<D> : never;
-
-type TargetOf<D extends AnyDimension> = D extends Dimension ? TargetUnitOf<D> : never;
-
 function make<D extends AnyDimension>(dimension: D, si: number, value: number, unit: string, ambient: number, extrapolated: boolean, vector: DimensionVector | undefined): QuantityOf<D> {
   return (dimension === 'derived'
     ? new DerivedQuantity('derived', si, value, unit, ambient, extrapolated, vector)
@@ -585,215 +493,4 @@ function fromProduct(dimension: AnyDimension, vector: DimensionVector, si: numbe
   return make(dimension, si, si, unit, DEFAULT_AMBIENT_PA, extrapolated, vector) as unknown as BaseQuantity<AnyDimension>;
 }
 
-function build(value: number, unit: string, options: QuantityOptions | undefined, forced?: Dimension, parameter = 'unit'): Quantity {
-  if (!Number.isFinite(value)) {
-    throw new InvalidInputError('input.not-finite', 'value', `a quantity needs a finite number; got ${value} ${previewText(unit)}`);
-  }
-  let resolved = resolveUnit(unit);
-  if (forced !== undefined) resolved = asDimension(resolved, forced, parameter);
-  const amb = ambientPa(options, DEFAULT_AMBIENT_PA);
-  const si = toSI(value, resolved, amb);
-  if (!Number.isFinite(si)) {
-    throw new InvalidInputError('input.not-finite', 'value', `${value} ${unit} overflows double precision in SI (${SI_UNIT[resolved.dimension]})`);
-  }
-  if (si === 0 && value !== 0 && resolved.kind !== 'temperature' && resolved.kind !== 'gauge') {
-    throw new InvalidInputError('input.invalid', 'value', `${value} ${unit} underflows to 0 in SI (${SI_UNIT[resolved.dimension]}); no measurement is that small`);
-  }
-  if (resolved.dimension === 'temperature' && si < 0) {
-    throw new OutOfRangeError(
-      { quantity: 'T', value: si, min: 0, max: Infinity, unit: 'K', scope: 'absolute temperature' },
-      `${value} ${unit} is below absolute zero (${si.toPrecision(6)} K); if you meant a temperature difference, write it as "Δ${unit}" or use temperatureDifference()`,
-    );
-  }
-  if (resolved.kind === 'gauge' && si < 0) {
-    throw new OutOfRangeError(
-      { quantity: 'p', value: si, min: 0, max: Infinity, unit: 'Pa', scope: 'absolute pressure' },
-      `${value} ${unit} is below vacuum (absolute ${si.toPrecision(6)} Pa with ambient ${amb} Pa)`,
-    );
-  }
-  return new Quantity(resolved.dimension, si, value, unit, amb);
-}
-
-/** The longest quantity text read: a number (up to 64 characters) and a unit. */
-export const QUANTITY_TEXT_MAX_LENGTH = UNIT_TEXT_MAX_LENGTH + 64;
-
-function isSpace(code: number): boolean {
-  return code === 32 || (code >= 9 && code <= 13) || code === 0xa0 || code === 0x202f || code === 0x2009;
-}
-
-function isDigitCode(code: number): boolean {
-  return code >= 48 && code <= 57;
-}
-
-/**
- * Splits `"500 psia"` into number and unit, or throws {@link UnitError} (`unit.syntax`).
- * The number is decimal (`12`, `-0.5`, `.5`, `1.2e5`); hexadecimal, octal and binary forms
- * (`0x10`), `Infinity` and `NaN` are refused. One left-to-right pass: linear in the length.
- * @internal exported for tests
- */
-export function splitQuantityText(text: string, counter?: ParseCounter): [number, string] {
-  if (text.length > QUANTITY_TEXT_MAX_LENGTH) {
-    throw new UnitError('unit.syntax', previewText(text), `quantity text "${previewText(text)}" is longer than ${QUANTITY_TEXT_MAX_LENGTH} characters`);
-  }
-  const fail = (why: string): never => {
-    throw new UnitError('unit.syntax', text, `cannot read "${previewText(text)}" as a quantity: ${why}; write a number followed by a unit, like "500 psia" or "300 °F"`);
-  };
-  const n = text.length;
-  let i = 0;
-  const step = (): void => {
-    i++;
-    if (counter) counter.steps++;
-  };
-  while (i < n && isSpace(text.charCodeAt(i))) step();
-  const start = i;
-  if (text[i] === '+' || text[i] === '-') step();
-  if (text[i] === '0' && /[xXbBoO]/.test(text[i + 1] ?? '')) fail('hexadecimal, octal and binary numbers are not accepted');
-  let digits = 0;
-  while (i < n && isDigitCode(text.charCodeAt(i))) {
-    step();
-    digits++;
-  }
-  if (text[i] === '.') {
-    step();
-    while (i < n && isDigitCode(text.charCodeAt(i))) {
-      step();
-      digits++;
-    }
-  }
-  if (digits === 0) fail('no number');
-  if (text[i] === 'e' || text[i] === 'E') {
-    let j = i + 1;
-    if (text[j] === '+' || text[j] === '-') j++;
-    if (isDigitCode(text.charCodeAt(j))) {
-      while (i < j) step();
-      while (i < n && isDigitCode(text.charCodeAt(i))) step();
-    }
-  }
-  const numberText = text.slice(start, i);
-  if (numberText.length > 64) fail('a number of more than 64 characters');
-  const unit = text.slice(i).trim();
-  if (counter) counter.steps += n - i;
-  const value = Number(numberText);
-  if (value === 0 && /[1-9]/.test(numberText.split(/[eE]/)[0]!)) {
-    throw new InvalidInputError('input.invalid', 'value', `${numberText} underflows to 0 in double precision; no measurement is that small`);
-  }
-  return [value, unit === '' ? '1' : unit];
-}
-
-/**
- * Makes a quantity from a number and a unit, or from text such as `"500 psia"`.
- *
- * Units: SI with prefixes, US customary, and bar, atm, mmHg, inHg, inH2O, kgf/cm², kcal, kWh, therm,
- * MMBtu, TR; compound units as written in data sheets (`kJ/(kg·K)`, `kJ/kg/K`, `Btu/(lbm·°R)`,
- * `ft³/lbm`). Factors are the exact NIST SP 811 definitions. `°F`, `°C` alone are absolute
- * temperatures; prefix `Δ` for a difference (`Δ°F`). Gauge units (`psig`, `barg`, `kPag`,
- * `kgf/cm²g`) add the ambient pressure (default 101 325 Pa; set `options.ambient`).
- * `ton` is refused as ambiguous: write `TR` (refrigeration), `t` (metric) or `ton_short`.
- *
- * Unit text known only at run time (a `string`) is accepted and checked at run time; the result's
- * dimension is then unknown to the compiler until narrowed with `.as(...)`.
- *
- * @throws {@link UnitError} unknown unit (with suggestions) or unreadable text
- * @throws {@link InvalidInputError} NaN, infinite or overflowing value; arguments of the wrong type
- * @throws {@link OutOfRangeError} a temperature below absolute zero, a gauge pressure below vacuum
- *
- * @example
- * ```ts
- * quantity(500, 'psia').in('MPa');      //=> 3.4473786465841805
- * quantity('300 °F').in('K');           //=> 422.03888888888895
- * quantity('2.5 kJ/kg/K').in('Btu/(lbm·°R)'); //=> 0.5971147415687398
- * quantity('-500 °F');                  // throws OutOfRangeError: below absolute zero
- * quantity(1, 'C');                     // throws UnitError: unknown unit "C"; did you mean "°C" or "degC"?
- * ```
- */
-export function quantity<U extends KnownUnit>(value: number, unit: U, options?: QuantityOptions): Quantity<DimensionOfUnit<U>>;
-export function quantity<T extends string>(text: T, options?: QuantityOptions): Quantity<DimensionOfText<T>>;
-export function quantity(value: number, unit: string, options?: QuantityOptions): Quantity;
-export function quantity(a: number | string, b?: string | QuantityOptions, c?: QuantityOptions): Quantity {
-  if (typeof a === 'string') {
-    checkOptions(b, 'options');
-    const [value, unit] = splitQuantityText(a);
-    return build(value, unit, b as QuantityOptions | undefined);
-  }
-  if (typeof a !== 'number') {
-    throw new InvalidInputError('input.invalid', 'value', `quantity() needs a number and a unit, or text such as "500 psia"; got ${describeValue(a)}`);
-  }
-  checkString(b, 'unit', `a unit (a string such as "kPa") after the number ${a}`);
-  checkOptions(c, 'options');
-  return build(a, b, c);
-}
-
-type DifferenceUnit = UnitOf<'temperature'> | UnitOf<'temperatureDifference'>;
-/** A literal must be a temperature or difference spelling; a run-time string is checked at run time. */
-type DifferenceUnitCheck<U> = string extends U ? unknown : U extends DifferenceUnit ? unknown : DifferenceUnit;
-
-/**
- * A temperature difference (a rise or a drop), in K, °C, °F or °R degrees.
- * A difference of 50 °F is 27.78 K; compare `quantity(50, '°F')`, the temperature 283.15 K.
- *
- * @example
- * ```ts
- * temperatureDifference(50, '°F').in('K');   //=> 27.77777777777778
- * temperatureDifference(10, 'K').in('Δ°F');  //=> 18
- * ```
- */
-export function temperatureDifference<U extends DifferenceUnit | (string & {})>(value: number, unit: U & DifferenceUnitCheck<U>): Quantity<'temperatureDifference'> {
-  checkFinite(value, 'value');
-  checkString(unit, 'unit');
-  return build(value, unit, undefined, 'temperatureDifference') as Quantity<'temperatureDifference'>;
-}
-
-/**
- * Reads an input of an expected dimension and returns its SI value: the single entry point of
- * every facade function. Accepts a `Quantity` or unit text (literal text is checked by the
- * compiler; a run-time `string` is checked here). Text in a unit shared by dimensions of one
- * shape reads as the expected one (`"6.5 kJ/(kg·K)"` as a specificEntropy). A bare number is
- * refused, since its unit would be a guess.
- *
- * @param input the caller's value
- * @param dimension what it must be
- * @param parameter its name in the caller's API, for messages (`T`, `p`, `T1`)
- * @throws {@link DimensionError} wrong dimension; {@link InvalidInputError} NaN, infinity, bare number
- * @example
- * ```ts
- * readQuantity('14.7 psig', 'pressure', 'p');   //=> 202677.9322095749 (Pa)
- * // @ts-expect-error: unit text of a temperature where a pressure belongs does not compile
- * readQuantity('300 K', 'pressure', 'p');      // throws DimensionError: p must be a pressure
- * ```
- */
-export function readQuantity<D extends Dimension, I extends QuantityLike<D> | string = QuantityLike<D>>(input: QuantityInput<D, I>, dimension: D, parameter: string): number {
-  if (typeof parameter !== 'string') throw new InvalidInputError('input.invalid', 'parameter', `readQuantity: parameter must be the input's name (a string); got ${describeValue(parameter)}`);
-  if (!isDimension(dimension)) throw new InvalidInputError('input.invalid', 'dimension', `readQuantity: dimension must be one of ${Object.keys(DIMENSIONS).join(', ')}; got ${describeValue(dimension)}`);
-  let q: Quantity;
-  const given = input as unknown;
-  if (given instanceof Quantity) {
-    q = given;
-  } else if (typeof given === 'string') {
-    const [value, unit] = splitQuantityText(given);
-    const u = resolveUnit(unit);
-    let fits = true;
-    try {
-      asDimension(u, dimension, parameter);
-    } catch (e) {
-      if (!(e instanceof HeatstateError)) throw e;
-      fits = false;
-    }
-    if (!fits) {
-      throw new DimensionError(dimension, u.dimension, `${parameter} must be a ${describe(dimension)}; got ${previewText(given.trim())} (a ${describe(u.dimension)})`, parameter);
-    }
-    q = build(value, unit, undefined, dimension, parameter);
-  } else if (typeof given === 'number') {
-    throw new InvalidInputError('input.invalid', parameter, `${parameter} = ${given} has no unit; pass a quantity or text such as "${exampleOf(dimension)}"`);
-  } else {
-    throw new InvalidInputError('input.invalid', parameter, `${parameter} must be a quantity or unit text such as "${exampleOf(dimension)}"; got ${describeValue(given)}`);
-  }
-  if (q.dimension !== dimension) {
-    throw new DimensionError(dimension, q.dimension, `${parameter} must be a ${describe(dimension)}; got ${q.toString()} (a ${describe(q.dimension)})`, parameter);
-  }
-  if (!Number.isFinite(q.si)) throw new InvalidInputError('input.not-finite', parameter, `${parameter} must be finite; got ${q.toString()}`);
-  return q.si;
-}
-
-function exampleOf(dimension: Dimension): string {
-  return `1 ${SI_UNIT[dimension]}`;
-}
+export { quantity, temperatureDifference, readQuantity } from './construct.js';
