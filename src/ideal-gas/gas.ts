@@ -13,6 +13,7 @@ import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, ty
 import { Quantity, readQuantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import { IdealGasSolver } from './solve.js';
+import { applyOptions, fromDefinition, type Built } from './definition.js';
 import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
@@ -189,13 +190,6 @@ export interface IdealGas<B extends Basis = 'mass'> {
   readonly bounds: Bounds;
 }
 
-interface Built {
-  readonly name: string;
-  readonly formula: string | undefined;
-  readonly source: string;
-  readonly core: IdealGasModel;
-  readonly model: 'polynomial' | 'constant-cp';
-}
 
 const GAS_PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['h', 'p'], ['s', 'p']];
 const ENERGY_PAIRS: readonly (readonly string[])[] = [['T'], ...GAS_PAIRS];
@@ -317,78 +311,6 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     },
   };
   return gas;
-}
-
-function fromDefinition(def: IdealGasDefinition): Built {
-  const issues: DefinitionIssue[] = [];
-  const guard = <T>(path: (string | number)[], f: () => T): T | undefined => {
-    try {
-      return f();
-    } catch (e) {
-      issues.push({ path, message: e instanceof HeatstateError ? e.message : String(e) });
-      return undefined;
-    }
-  };
-  if (typeof def !== 'object' || def === null) throw new DefinitionError('ideal-gas definition', [{ path: [], message: 'expected an object' }]);
-  if (typeof def.name !== 'string' || def.name === '') issues.push({ path: ['name'], message: 'a name is required' });
-  let M: number | undefined;
-  if (def.M !== undefined) M = guard(['M'], () => readQuantity(def.M, 'molarMass', 'M'));
-  else issues.push({ path: ['M'], message: "a molar mass M is required (from a formula: M: molarMass('C8H18'))" });
-  if (M !== undefined && !(M > 0)) issues.push({ path: ['M'], message: 'molar mass must be positive' });
-
-  let core: IdealGasModel | undefined;
-  let model: Built['model'] = 'polynomial';
-  if ('nasa' in def && def.nasa !== undefined) {
-    const { T, low, high } = def.nasa;
-    if (!T || !(T.min > 0 && T.min < T.mid && T.mid <= T.max)) issues.push({ path: ['nasa', 'T'], message: 'need 0 < T.min < T.mid ≤ T.max (K)' });
-    for (const [key, arr] of [['low', low], ['high', high]] as const) {
-      if (!Array.isArray(arr) || (arr.length !== 7 && arr.length !== 9)) issues.push({ path: ['nasa', key], message: 'need 9 constants (a1..a7, b1, b2) or 7 coefficients (older form)' });
-      else arr.forEach((a, i) => Number.isFinite(a) || issues.push({ path: ['nasa', key, i], message: `constant ${i + 1} must be a finite number` }));
-    }
-    if (issues.length === 0 && low.length !== high.length) issues.push({ path: ['nasa'], message: 'low and high must use the same form (both 9 or both 7 numbers)' });
-    if (issues.length === 0) {
-      const nine = (a: readonly number[]) => (a.length === 7 ? fromSevenCoefficients(a) : a);
-      const m = new NasaPolynomialModel(M!, T.min, T.mid, T.max, nine(low), nine(high));
-      for (let i = 0; i <= 50; i++) {
-        const t = T.min + ((T.max - T.min) * i) / 50;
-        if (!(m.cpR(t) > 1)) {
-          issues.push({ path: ['nasa'], message: `cp°/R must exceed 1 (so that cv > 0); it is ${m.cpR(t)} at ${t} K` });
-          break;
-        }
-      }
-      core = m;
-    }
-  } else if ('cp' in def && def.cp !== undefined) {
-    model = 'constant-cp';
-    const cp = guard(['cp'], () => readQuantity(def.cp, 'specificHeat', 'cp'));
-    const Tmin = def.T ? guard(['T', 'min'], () => readQuantity(def.T!.min, 'temperature', 'T.min')) : Number.MIN_VALUE;
-    const Tmax = def.T ? guard(['T', 'max'], () => readQuantity(def.T!.max, 'temperature', 'T.max')) : Infinity;
-    if (cp !== undefined && M !== undefined && !(cp * M > MOLAR_GAS_CONSTANT)) issues.push({ path: ['cp'], message: `cp must exceed R = ${MOLAR_GAS_CONSTANT / M} J/(kg·K) so that cv > 0` });
-    if (Tmin !== undefined && Tmax !== undefined && !(Tmin < Tmax)) issues.push({ path: ['T'], message: 'T.min must be below T.max' });
-    if (issues.length === 0) core = new ConstantCpModel(M!, (cp! * M!) / MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K, 0, 0, Tmin!, Tmax!);
-  } else {
-    issues.push({ path: [], message: 'give either nasa polynomial constants or a constant cp' });
-  }
-  if (issues.length > 0 || !core) throw new DefinitionError(`ideal-gas definition${typeof def.name === 'string' ? ` "${def.name}"` : ''}`, issues);
-  return { name: def.name, formula: def.formula, source: def.source ?? 'user definition', core, model };
-}
-
-function applyOptions(built: Built, options: IdealGasOptions | undefined): Built {
-  if (options?.cp !== undefined) {
-    const cp = readQuantity(options.cp, 'specificHeat', 'cp');
-    const core = built.core;
-    if (!(cp > core.R)) throw new OutOfRangeError({ quantity: 'cp', value: cp, min: core.R, max: Infinity, unit: 'J/(kg·K)', scope: `${built.name} (cp must exceed R)` });
-    const T0 = REFERENCE_TEMPERATURE_K;
-    return { ...built, model: 'constant-cp', core: new ConstantCpModel(core.M, cp / core.R, T0, core.hRT(T0) * T0, core.sR(T0), core.Tmin, core.Tmax) };
-  }
-  if (options?.model === 'constant-cp') {
-    const T0 = options.referenceT === undefined ? REFERENCE_TEMPERATURE_K : readQuantity(options.referenceT, 'temperature', 'referenceT');
-    if (T0 < built.core.Tmin || T0 > built.core.Tmax) {
-      throw new OutOfRangeError({ quantity: 'referenceT', value: T0, min: built.core.Tmin, max: built.core.Tmax, unit: 'K', scope: `the data for ${built.name}` });
-    }
-    return { ...built, model: 'constant-cp', core: constantCpFrom(built.core, T0) };
-  }
-  return built;
 }
 
 /**
