@@ -8,14 +8,14 @@
 import { MOLAR_GAS_CONSTANT, REFERENCE_TEMPERATURE_K } from '../chem/constants.js';
 import { DefinitionError, HeatstateError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
 import { readQuantity } from '../units/quantity.js';
-import type { IdealGasDefinition, IdealGasOptions } from './gas.js';
+import type { GasSource, IdealGasDefinition, IdealGasOptions } from './gas.js';
 import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, NasaPolynomialModel, type IdealGasModel } from './model.js';
 
 /** A gas before the facade wraps it: its name, formula, source and SI core. */
 export interface Built {
   readonly name: string;
   readonly formula: string | undefined;
-  readonly source: string;
+  readonly source: GasSource;
   readonly core: IdealGasModel;
   readonly model: 'polynomial' | 'constant-cp';
 }
@@ -72,7 +72,8 @@ export function fromDefinition(def: IdealGasDefinition): Built {
     issues.push({ path: [], message: 'give either nasa polynomial constants or a constant cp' });
   }
   if (issues.length > 0 || !core) throw new DefinitionError(`ideal-gas definition${typeof def.name === 'string' ? ` "${def.name}"` : ''}`, issues);
-  return { name: def.name, formula: def.formula, source: def.source ?? 'user definition', core, model };
+  const summary = def.source ?? 'user definition';
+  return { name: def.name, formula: def.formula, source: { title: summary, basis: 'user', uncertainty: 'estimate: not stated (a user definition)', summary }, core, model };
 }
 
 /** The gas with the model options applied (a constant cp, frozen or given). */

@@ -47,6 +47,20 @@ export interface IdealGasOptions<B extends Basis = Basis> {
   readonly extrapolate?: boolean;
 }
 
+/** Where a gas's data come from. */
+export interface GasSource {
+  readonly title: string;
+  readonly authors?: string;
+  readonly year?: number;
+  /** Table, equation or record within the source. */
+  readonly table?: string;
+  readonly basis: 'published' | 'computed' | 'from memory' | 'user';
+  /** Starts with `fit deviation:`, `source:` or `estimate:`. */
+  readonly uncertainty: string;
+  /** The source in one line (with any note on the data). */
+  readonly summary: string;
+}
+
 /** A state of an ideal gas: temperature and absolute pressure. */
 export interface GasState {
   readonly T: QuantityLike<'temperature'>;
@@ -143,14 +157,17 @@ export interface IdealGas<B extends Basis = 'mass'> {
   readonly basis: B;
   /** `'polynomial'` or `'constant-cp'`. */
   readonly model: 'polynomial' | 'constant-cp';
-  /** Where the data come from. */
-  readonly source: string;
+  /**
+   * Where the data come from: title, authors, year, table, basis (`published`, `computed`,
+   * `from memory`, `user`) and stated uncertainty, with a one-line `summary`.
+   */
+  readonly source: GasSource;
   /** Molar mass. */
   readonly M: Quantity<'molarMass'>;
   /** Gas constant: R̄/M on a mass basis, R̄ on a molar basis. */
   readonly R: Quantity<HeatCapacityDimension<B>>;
   /** Valid range: the data's temperatures; any positive pressure (the ideal-gas model itself has no pressure limit, but see the docs on when a gas stops being ideal). */
-  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> }; readonly p: { readonly min: Quantity<'pressure'>; readonly max: undefined } };
+  readonly range: { readonly T: { readonly min: Quantity<'temperature'>; readonly max: Quantity<'temperature'> | undefined }; readonly p: { readonly min: Quantity<'pressure'>; readonly max: undefined } };
   /** The plain-number SI core, for hot loops and batch use. */
   readonly core: IdealGasModel;
   /** Whether temperatures outside the data are computed (and flagged) rather than refused. */
@@ -255,7 +272,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     source: built.source,
     M: Quantity.fromSI(core.M, 'molarMass', 'g/mol'),
     R: Quantity.fromSI(scale, hc),
-    range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Quantity.fromSI(core.Tmax, 'temperature') }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
+    range: { T: { min: Quantity.fromSI(core.Tmin, 'temperature'), max: Number.isFinite(core.Tmax) ? Quantity.fromSI(core.Tmax, 'temperature') : undefined }, p: { min: Quantity.fromSI(Number.MIN_VALUE, 'pressure'), max: undefined } },
     core,
     extrapolate,
     solver,
@@ -345,7 +362,7 @@ export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?
   let built: Built;
   if (typeof nameOrDefinition === 'string') {
     const { record, model } = speciesModel(nameOrDefinition);
-    built = { name: record.id, formula: record.formula, source: `${record.source}${record.note ? `; ${record.note}` : ''}`, core: model, model: 'polynomial' };
+    built = { name: record.id, formula: record.formula, source: { ...record.provenance, summary: `${record.source}${record.note ? `; ${record.note}` : ''}` }, core: model, model: 'polynomial' };
   } else {
     built = fromDefinition(nameOrDefinition);
   }
@@ -448,7 +465,9 @@ export function mixture(composition: Composition, options?: MixtureOptions): Ide
   const parts = names.map((n) => speciesModel(n).model);
   const core = mixNasa(parts, y) ?? new MixtureModel(parts, y);
   const name = options?.name ?? names.map((n, i) => `${n} ${Number((y[i]! * 100).toPrecision(4))}%`).join(', ');
-  const built: Built = { name, formula: undefined, source: `ideal mixture of ${names.map((n) => speciesModel(n).record.id).join(', ')}`, core, model: 'polynomial' };
+  const ids = names.map((n) => speciesModel(n).record.id);
+  const summary = `ideal mixture of ${ids.join(', ')}`;
+  const built: Built = { name, formula: undefined, source: { title: summary, basis: 'computed', uncertainty: 'estimate: that of its components (ideal mixing adds none)', summary }, core, model: 'polynomial' };
   return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true);
 }
 

@@ -5,7 +5,7 @@
  * @packageDocumentation
  */
 export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
-export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, GasInputDimensions, Basis, HeatCapacityDimension, EnergyDimension, EntropyDimension } from './gas.js';
+export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, GasInputDimensions, GasSource, Basis, HeatCapacityDimension, EnergyDimension, EntropyDimension } from './gas.js';
 export { idealGasBatch, IDEAL_GAS_BATCH_STATUS } from './batch.js';
 export type { IdealGasBatchProperty } from './batch.js';
 export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation } from './processes.js';

@@ -323,7 +323,7 @@ function rowValue(g: GridCore, c: GridColumn, j: number, i: number, x: number, m
  * Value at (x, y) in cell (i, j) (internal; NaN where a needed cell is missing). A point on a grid
  * line uses that line alone, so it needs no cell on the far side of it.
  */
-/** @internal */
+/** (Shared with core-bounds.ts.) */
 export function cellValue(g: GridCore, c: GridColumn, i: number, j: number, x: number, y: number, method: number): number {
   const y0 = g.ys[j]!;
   const y1 = g.ys[j + 1]!;
@@ -336,7 +336,7 @@ function gridMethodOk(method: number): boolean {
   return method === Method.linear || method === Method.monotoneCubic;
 }
 
-/** @internal */
+/** (Shared with core-bounds.ts.) */
 export function inside(values: Float64Array, v: number): boolean {
   return v >= values[0]! && v <= values[values.length - 1]!;
 }

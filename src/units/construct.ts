@@ -13,7 +13,7 @@ import { asDimension, DEFAULT_AMBIENT_PA, resolveUnit, toSI } from './registry.j
 import type { DimensionOfUnit, KnownUnit, UnitOf } from './spellings.js';
 import { splitQuantityText } from './text.js';
 
-/** @internal A quantity from a number and a unit (the checks every path shares). */
+/** A quantity from a number and a unit (the checks every path shares). */
 export function build(value: number, unit: string, options: QuantityOptions | undefined, forced?: Dimension, parameter = 'unit'): Quantity {
   if (!Number.isFinite(value)) {
     throw new InvalidInputError('input.not-finite', 'value', `a quantity needs a finite number; got ${value} ${previewText(unit)}`);

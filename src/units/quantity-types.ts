@@ -47,7 +47,6 @@ export type QuantityLike<D extends Dimension> = Quantity<D> | QuantityText<D>;
  */
 export type QuantityInput<D extends Dimension, I> = I & InputCheck<D, I>;
 
-/** @internal */
 export type InputCheck<D extends Dimension, I> = I extends Quantity<Dimension> | DerivedQuantity
   ? unknown
   : string extends I
@@ -63,7 +62,6 @@ export type InputCheck<D extends Dimension, I> = I extends Quantity<Dimension> |
  */
 export type UnitInput<D extends AnyDimension, U> = U & UnitCheck<D, U>;
 
-/** @internal */
 export type UnitCheck<D extends AnyDimension, U> = string extends U
   ? unknown
   : D extends Dimension
@@ -89,25 +87,16 @@ export interface Tolerance<D extends AnyDimension> {
   readonly abs?: D extends 'temperature' ? QuantityLike<'temperatureDifference'> : D extends Dimension ? QuantityLike<D> : DerivedQuantity;
 }
 
-/** @internal */
 export type IsTemperature<D> = [D] extends ['temperature'] ? true : false;
-/** @internal */
 export type IsScalar<D> = [D] extends [ScalarDimension] ? true : false;
 /** Scaling an absolute temperature by a plain number depends on the scale: refused. */
-/** @internal */
 export type ScaleFactor<D> = IsTemperature<D> extends true ? never : number;
-/** @internal */
 export type ProductAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : IsScalar<D> extends true ? (IsTemperature<O> extends true ? never : unknown) : unknown;
-/** @internal */
 export type QuotientAllowed<D, O> = IsTemperature<D> extends true ? (IsScalar<O> extends true ? never : unknown) : unknown;
-/** @internal */
 export type MinusOperand<D extends AnyDimension> = D extends 'temperature' ? 'temperature' | 'temperatureDifference' : D;
-/** @internal */
 export type MinusResult<D extends AnyDimension, O extends AnyDimension> = D extends 'temperature' ? (O extends 'temperature' ? 'temperatureDifference' : 'temperature') : D;
 /** A quantity operand whose dimension `O` is inferred from its `dimension` field alone. */
-/** @internal */
 export type Operand<O extends AnyDimension> = { readonly dimension: O } & BaseQuantity<NoInfer<O>>;
-/** @internal */
 export type CompareOperand<D extends AnyDimension> = D extends Dimension ? QuantityLike<D> : DerivedQuantity;
 
 /**
@@ -117,8 +106,6 @@ export type CompareOperand<D extends AnyDimension> = D extends Dimension ? Quant
  */
 export type QuantityOf<D extends AnyDimension> = [D] extends [Dimension] ? NamedQuantity<D> : [D] extends ['derived'] ? DerivedQuantity : BaseQuantity<D>;
 
-/** @internal */
 export type NamedQuantity<D> = D extends Dimension ? Quantity<D> : never;
 
-/** @internal */
 export type TargetOf<D extends AnyDimension> = D extends Dimension ? TargetUnitOf<D> : never;

@@ -21,12 +21,12 @@ export type { AnyDimension, DerivedDimension, ProductOf, QuotientOf, ScalarDimen
 import type { QuantityOf, TargetOf, QuantityOptions, QuantityText, QuantityLike, QuantityInput, UnitInput, DimensionOfText, Tolerance, ScaleFactor, ProductAllowed, QuotientAllowed, MinusOperand, MinusResult, Operand, CompareOperand } from './quantity-types.js';
 export type { QuantityOf, QuantityOptions, QuantityText, QuantityLike, QuantityInput, UnitInput, DimensionOfText, Tolerance } from './quantity-types.js';
 
-/** @internal A dimension's name in words, for messages. */
+/** A dimension's name in words, for messages. */
 export function describe(dimension: AnyDimension): string {
   return dimension === 'derived' ? 'derived quantity' : dimension.replace(/[A-Z]/g, (c) => ` ${c.toLowerCase()}`);
 }
 
-/** @internal The ambient pressure of the options, or `fallback`. */
+/** The ambient pressure of the options, or `fallback`. */
 export function ambientPa(options: QuantityOptions | undefined, fallback: number): number {
   checkOptions(options, 'options');
   if (options?.ambient === undefined) return fallback;

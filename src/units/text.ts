@@ -22,7 +22,7 @@ function isDigitCode(code: number): boolean {
  * Splits `"500 psia"` into number and unit, or throws {@link UnitError} (`unit.syntax`).
  * The number is decimal (`12`, `-0.5`, `.5`, `1.2e5`); hexadecimal, octal and binary forms
  * (`0x10`), `Infinity` and `NaN` are refused. One left-to-right pass: linear in the length.
- * @internal exported for tests
+ * (Exported for the tests and the construction module.)
  */
 export function splitQuantityText(text: string, counter?: ParseCounter): [number, string] {
   if (text.length > QUANTITY_TEXT_MAX_LENGTH) {

@@ -74,3 +74,15 @@ describe('ideal-gas species data', () => {
     }
   });
 });
+
+describe('the facade exposes each gas\'s provenance', () => {
+  it("idealGas('O3').source gives title, basis and uncertainty (NIST-JANAF fit, its largest deviation stated)", async () => {
+    const { idealGas } = await import('../../src/ideal-gas/index.js');
+    const src = idealGas('O3').source;
+    expect(src.title).toMatch(/NIST-JANAF/);
+    expect(src.basis).toBe('computed');
+    expect(src.uncertainty).toMatch(/^fit deviation: /);
+    expect(idealGas('NO').source.basis).toBe('from memory');
+    expect(idealGas({ name: 'mine', M: '30 g/mol', cp: '1 kJ/(kg·K)' }).source.basis).toBe('user');
+  });
+});
