@@ -28,7 +28,8 @@ export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidS
   let y = Math.log(m.pc * 0.1);
   const scale = Math.max(Math.abs(h), m.R * m.Tc);
   for (let i = 0; i < 100; i++) {
-    const p = Math.exp(y);
+    // exp(log(p_max)) may round past p_max: the bracket's top end is p_max itself
+    const p = Math.min(m.pMax, Math.exp(y));
     const st = stateFromPS(ctx, p, s, out);
     if (st !== Status.ok) {
       if (st !== Status.outOfRange) return st;
@@ -54,7 +55,8 @@ export function stateFromHS(ctx: FluidContext, h: number, s: number, out: FluidS
     let next = y - f / (p * out.v);
     if (Math.abs(next - y) <= 1e-15 * Math.abs(y) + 1e-15) return st;
     if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);
-    if (hi - lo < 1e-15 * Math.abs(hi)) return loOk && hiOk ? st : Status.outOfRange;
+    // a bracket closed against a range end (p_max, say) holds the answer when h matches to the flash's tolerance
+    if (hi - lo < 1e-15 * Math.abs(hi)) return (loOk && hiOk) || Math.abs(f) <= 1e-9 * scale ? st : Status.outOfRange;
     y = next;
   }
   return Status.noConvergence;
