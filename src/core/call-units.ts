@@ -8,20 +8,19 @@ import { formatNumber, type RangeInCallerUnit } from '../errors.js';
 import type { Dimension } from '../units/dimensions.js';
 import { Quantity } from '../units/quantity.js';
 import { DEFAULT_AMBIENT_PA, fromSI, resolveUnit } from '../units/registry.js';
-
-const NUMBER_PREFIX = /^\s*[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?\s*/;
+import { splitQuantityText } from '../units/text.js';
 
 /** The unit text of an input (a Quantity's unit, or the unit part of unit text); undefined otherwise. */
 export function unitOfInput(input: unknown): string | undefined {
   if (input instanceof Quantity) return input.unit;
-  if (typeof input === 'string' && input.length <= 200) {
-    const m = NUMBER_PREFIX.exec(input);
-    if (m) {
-      const unit = input.slice(m[0].length).trim();
-      return unit === '' ? undefined : unit;
-    }
+  if (typeof input !== 'string') return undefined;
+  try {
+    // the same scanner that reads the text as a quantity
+    const unit = splitQuantityText(input)[1];
+    return unit === '' || unit === '1' ? undefined : unit;
+  } catch {
+    return undefined;
   }
-  return undefined;
 }
 
 /** The units one call's inputs were written in, by dimension (the first input of a dimension decides). */

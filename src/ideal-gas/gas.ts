@@ -9,12 +9,13 @@ import { throwForStatus } from '../core/fail.js';
 import { ABSOLUTE_TEMPERATURE, describeValue, rangeError, readAbsolutePressure, readChoice, readFlag, readFractions, readInput, readOptions, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
-import { DefinitionError, HeatstateError, InvalidInputError, OutOfRangeError, type DefinitionIssue } from '../errors.js';
-import { Quantity, readQuantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
+// OutOfRangeError and DefinitionError are named in the doc comments' links
+import { DefinitionError, InvalidInputError, OutOfRangeError } from '../errors.js';
+import { Quantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import { IdealGasSolver } from './solve.js';
 import { applyOptions, fromDefinition, type Built } from './definition.js';
-import { ConstantCpModel, constantCpFrom, fromSevenCoefficients, MixtureModel, mixNasa, NasaPolynomialModel, type IdealGasModel } from './model.js';
+import { constantCpFrom, MixtureModel, mixNasa, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
 
