@@ -30,7 +30,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
 /**
  * An incompressible substance from the catalogue (by name or alias) or from your own definition.
  *
- * The model: cp = cv = c(T), density constant or ρ(T). Δu = ∫c dT; Δh = Δu + v̄·Δp; Δs = ∫c/T dT.
+ * The model: cp = cv = c(T), density constant or ρ(T). Δu = ∫c dT; Δs = ∫c/T dT; h is a function of
+ * the state, h(T, p) = ∫c dT + v(T)·(p − p_ref) with p_ref = 1 atm (for constant density Δh = Δu + v·Δp),
+ * so `deltaH` is the difference of `state(…).h` (model.ts explains the choice).
  * For solids, v·Δp is tiny and Δh ≈ Δu. For a liquid pumped at constant temperature, Δu = 0
  * and Δh = v·Δp. Each catalogue entry carries its source and valid temperature range; values
  * outside the range throw rather than extrapolate.

@@ -43,7 +43,11 @@ export interface IncompressibleStateResult {
   readonly v: Quantity<'specificVolume'>;
   /** u − u_ref = ∫c dT from the reference temperature. */
   readonly u: Quantity<'specificEnergy'>;
-  /** h − h_ref = (u − u_ref) + v·(p − p_ref). */
+  /**
+   * h − h_ref = ∫c dT + v(T)·(p − p_ref) from the reference state (T_ref, p_ref = 1 atm): for constant
+   * density (u − u_ref) + v·(p − p_ref); with ρ(T), a function of the state whose (∂h/∂T)_p is c at
+   * p_ref (model.ts explains why it is not u + p·v there).
+   */
   readonly h: Quantity<'specificEnergy'>;
   /** s − s_ref = ∫c/T dT from the reference temperature. */
   readonly s: Quantity<'specificEntropy'>;
@@ -90,7 +94,10 @@ export interface IncompressibleSubstance {
   deltaU<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEnergy'>;
   /** Δs = ∫c/T dT from state 1 to state 2. */
   deltaS<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEntropy'>;
-  /** Δh = Δu + v̄·(p2 − p1) between two states `{ T, p }`, v̄ the mean of v(T1) and v(T2). Pressures are absolute. */
+  /**
+   * Δh = ∫c dT + v(T2)·(p2 − p_ref) − v(T1)·(p1 − p_ref) between two states `{ T, p }`, p_ref = 1 atm
+   * (Δu + v·(p2 − p1) for constant density): exactly `state(2).h − state(1).h`. Pressures are absolute.
+   */
   deltaH<const P1 extends IncompressibleState, const P2 extends IncompressibleState>(state1: P1 & CheckedInputs<P1, IncompressibleInputDimensions>, state2: P2 & CheckedInputs<P2, IncompressibleInputDimensions>): Quantity<'specificEnergy'>;
 }
 
