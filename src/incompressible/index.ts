@@ -15,6 +15,7 @@ export type { IncompressibleDefinition, DefinitionSource } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
+export type { TransportSource, CompiledTransport } from './transport-data.js';
 /** Options of {@link incompressible}: `{ supercooled: true }`, or a solution's `{ massFraction }` / `{ volumeFraction }`. */
 export type IncompressibleOptions = CatalogueOptions & {
   /**
@@ -48,6 +49,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * const water = incompressible('water');
  * water.deltaH({ T: '20 °C', p: '1 atm' }, { T: '20 °C', p: '500 psia' }).in('kJ/kg'); //=> 3.352... (v(20 °C)·Δp)
  * copper.c('1400 K');  // throws OutOfRangeError: T = 1400 K is above the upper limit of the data for copper (1358 K)
+ * const oil = incompressible('engine oil').state({ T: '350 K', p: '1 atm' });
+ * oil.Pr;   //=> 546.4 (μ·c/λ from the tabulated μ, c and λ; the table prints 546)
+ * oil.mu?.in('mPa·s');   //=> 35.6
  * ```
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {
