@@ -176,3 +176,40 @@ describe('facade', () => {
     expect(() => incompressible({ name: 'u', state: 'liquid', c: '2 kJ/(kg·K)', density: '900 kg/m³', T: { min: '0 °C', max: '50 °C' }, thermalConductivity: { value: '0.1 Pa·s' } })).toThrow(/thermalConductivity.value/);
   });
 });
+
+describe('figures stated in docs/guide/transport.md (liquids and solids)', async () => {
+  const { readFileSync } = await import('node:fs');
+  const guide = readFileSync(new URL('../../docs/guide/transport.md', import.meta.url), 'utf8');
+  const { saturationPressure } = await import('../../src/water/if97/region4.js');
+  const { region1 } = await import('../../src/water/if97/region1.js');
+  const { WaterProperties } = await import('../../src/water/if97/properties.js');
+  const t = await import('../../src/water/transport/index.js');
+  /** λ2/λ of the saturated liquid at T (K), with the IAPWS-95 enhancement inputs. */
+  const share = (T: number) => {
+    const st = region1(saturationPressure(T), T, new WaterProperties());
+    const d = new t.CriticalEnhancementInputs();
+    t.iapws95EnhancementInputs(T, st.rho, d, new t.Iapws95InputsWork());
+    const out = new t.ConductivityResult();
+    t.thermalConductivity(T, st.rho, true, d, out);
+    return out.lambda2 / out.lambda;
+  };
+  it.each([
+    [573.15, '1.2 %'],
+    [620.65, '3.8 %'],
+    [473.15, '0.2 %'],
+  ])('the λ enhancement of the saturated liquid at %d K is %s of λ', (T, stated) => {
+    expect(guide).toContain(stated);
+    expect(`${(share(T) * 100).toFixed(1)} %`).toBe(stated);
+  });
+  it('nothing at 150 °C and below (the release sets λ2 = 0 there)', () => {
+    expect(guide).toContain('nothing below about 150 °C');
+    expect(share(423.15)).toBe(0);
+    expect(share(373.15)).toBe(0);
+  });
+  it('engine oil at 305 K: 0.349 Pa·s (ln μ in 1/T) against 0.3695 Pa·s for a straight line', () => {
+    expect(guide).toContain('0.349 Pa·s');
+    expect(guide).toContain('0.3695 Pa·s');
+    expect(incompressible('engine oil').viscosity('305 K').si.toFixed(3)).toBe('0.349');
+    expectClose(incompressible('engine oil', { extrapolate: false }).viscosity('300 K').si / 2 + 0.253 / 2, 0.3695, { rel: 1e-12 });
+  });
+});
