@@ -8,7 +8,7 @@
  * @module
  */
 import { runBatch, type BatchLoop, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
-import { Status } from '../core/status.js';
+import { Status, type StatusCode } from '../core/status.js';
 import { SolverContext } from './if97/context.js';
 import { stateFromPH } from './if97/ph.js';
 import { stateFromPS } from './if97/ps.js';
@@ -255,7 +255,7 @@ class TransportWork {
  * IAPWS-95 at (T, ρ). `outOfRange` when a requested correlation does not cover (T, p); `ok` otherwise,
  * with NaN left where the enhancement has no inputs (the critical point itself; `undefinedAt` marks it).
  */
-function addTransport(st: WaterTransportState, t: TransportWork): number {
+function addTransport(st: WaterTransportState, t: TransportWork): StatusCode {
   st.mu = NaN;
   st.lambda = NaN;
   if (st.phase === PHASE.twoPhase) return Status.ok;
@@ -268,8 +268,8 @@ function addTransport(st: WaterTransportState, t: TransportWork): number {
   return Status.ok;
 }
 
-/** Solves with `core`, then adds the requested transport values. */
-function withTransport(code: number, st: WaterTransportState, t: TransportWork): number {
+/** After the IF97 solve's `code`, adds the requested transport values. */
+function withTransport(code: StatusCode, st: WaterTransportState, t: TransportWork): StatusCode {
   return code === Status.ok ? addTransport(st, t) : code;
 }
 
