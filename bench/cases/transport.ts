@@ -128,3 +128,26 @@ export const cases: BenchCase[] = [
     perCall: N,
   },
 ];
+
+// ---- waterBatch with transport properties (kept apart from the cases above) ----
+// The same 1000 (p, T) states with and without mu, lambda, Pr: the transport request runs the runner's
+// loop with an IAPWS-95 evaluation at (T, ρ) and (T_R, ρ) per element for the enhancement inputs.
+import { waterBatch } from '../../src/water/batch.js';
+
+const bN = 1000;
+const bp = Float64Array.from({ length: bN }, (_, i) => [101325, 1e6, 10e6, 30e6][i % 4]!);
+const bT = Float64Array.from({ length: bN }, (_, i) => 280 + ((i * 37) % 800));
+cases.push(
+  {
+    name: 'transport: waterBatch (p, T) → h, rho, cp (no transport)',
+    fn: () => consume(waterBatch({ p: bp, T: bT }, ['h', 'rho', 'cp']).h[0]!),
+    perCall: bN,
+  },
+  {
+    name: 'transport: waterBatch (p, T) → mu, lambda, Pr',
+    fn: () => consume(waterBatch({ p: bp, T: bT }, ['mu', 'lambda', 'Pr']).Pr[0]!),
+    perCall: bN,
+    baseline: 'transport: waterBatch (p, T) → h, rho, cp (no transport)',
+    baselinePerCall: bN,
+  },
+);

@@ -42,6 +42,8 @@ interface Solution {
   readonly basis: string;
   readonly uncertainty: string;
   readonly finding: string;
+  /** Why the solution's viscosity and thermal conductivity are left out. */
+  readonly transportOmitted: string;
   readonly volumeFraction: { readonly convention: string; readonly pureDensity: string; readonly waterDensity: string };
   readonly freezingPoint: { readonly massFraction: readonly number[]; readonly T: readonly number[]; readonly unit: string };
   readonly grid: GridData;
@@ -142,6 +144,8 @@ export function solutionDefinition(solution: Solution, massFraction: number): In
     basis: solution.basis as IncompressibleDefinition['basis'],
     uncertainty: solution.uncertainty,
     finding: solution.finding,
+    viscosity: { omitted: solution.transportOmitted },
+    thermalConductivity: { omitted: solution.transportOmitted },
     note: `${solution.solute} in water, ${percent} at 1 atm; c and ρ interpolated bilinearly in mass fraction and temperature. ${solution.volumeFraction.convention}.`,
     rangeNote: startsAtFreezing
       ? `at ${percent} the solution freezes at ${fmt(freezeC, 3)} °C`

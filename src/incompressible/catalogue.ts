@@ -18,7 +18,12 @@ import { findSolution, solution, solutionNames, type SolutionOptions } from './b
 import { compileChecked, type CompiledSubstance } from './compile.js';
 import type { IncompressibleDefinition } from './schema.js';
 
-const ENTRIES = [liquidWater.substance, ...catalogue.substances] as unknown as readonly IncompressibleDefinition[];
+/**
+ * The generated liquid water (its generator owns water.json) with its transport properties from the
+ * catalogue: IAPWS R12-08 and R15-11 at the IF97 saturated-liquid density.
+ */
+const water = { ...liquidWater.substance, viscosity: catalogue.liquidWaterTransport.viscosity, thermalConductivity: catalogue.liquidWaterTransport.thermalConductivity };
+const ENTRIES = [water, ...catalogue.substances] as unknown as readonly IncompressibleDefinition[];
 const byName = new Map<string, IncompressibleDefinition>();
 /** Aliases given by more than one entry: they resolve to none of them. */
 const shared = new Map<string, string[]>();

@@ -13,6 +13,7 @@ import type { Dimension } from '../units/dimensions.js';
 import { piecewiseLinear } from '../numeric/interpolate.js';
 import { heatCapacityAt, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
+import { compileTransport, type CompiledTransport } from './transport-data.js';
 
 /**
  * Where a substance's numbers come from, how they were obtained, and how far to trust them
@@ -34,6 +35,8 @@ export interface CompiledSubstance {
   readonly model: IncompressibleModel;
   /** The definition's source, basis and uncertainty in one object. */
   readonly provenance: SubstanceSource;
+  /** Viscosity and thermal conductivity, compiled (with their own sources). */
+  readonly transport: CompiledTransport;
 }
 
 /** Options of compilation. */
@@ -210,6 +213,7 @@ export function compileChecked(def: IncompressibleDefinition, options: CompileOp
       }
     }
   }
+  const transport = compileTransport(def, Tmin, Tmax, read, unitOf, issues);
   if (issues.length > 0) throw new DefinitionError(label, issues);
-  return { definition: def, model, provenance: provenanceOf(def) };
+  return { definition: def, model, provenance: provenanceOf(def), transport };
 }

@@ -15,6 +15,7 @@ export type { IncompressibleDefinition, DefinitionSource } from './schema.js';
 export type { CompiledSubstance } from './compile.js';
 export { heatCapacityAt, internalEnergyChange, entropyChange, enthalpyChange, densityAt } from './model.js';
 export type { IncompressibleModel } from './model.js';
+export type { TransportSource, CompiledTransport } from './transport-data.js';
 /** Options of {@link incompressible}: `{ supercooled: true }`, or a solution's `{ massFraction }` / `{ volumeFraction }`. */
 export type IncompressibleOptions = CatalogueOptions & {
   /**
@@ -30,7 +31,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
 /**
  * An incompressible substance from the catalogue (by name or alias) or from your own definition.
  *
- * The model: cp = cv = c(T), density constant or ρ(T). Δu = ∫c dT; Δh = Δu + v̄·Δp; Δs = ∫c/T dT.
+ * The model: cp = cv = c(T), density constant or ρ(T). Δu = ∫c dT; Δs = ∫c/T dT; h is a function of
+ * the state, h(T, p) = ∫c dT + v(T)·(p − p_ref) with p_ref = 1 atm (for constant density Δh = Δu + v·Δp),
+ * so `deltaH` is the difference of `state(…).h` (model.ts explains the choice).
  * For solids, v·Δp is tiny and Δh ≈ Δu. For a liquid pumped at constant temperature, Δu = 0
  * and Δh = v·Δp. Each catalogue entry carries its source and valid temperature range; values
  * outside the range throw rather than extrapolate.
@@ -46,6 +49,9 @@ export type { IncompressibleBatchProperty } from './batch.js';
  * const water = incompressible('water');
  * water.deltaH({ T: '20 °C', p: '1 atm' }, { T: '20 °C', p: '500 psia' }).in('kJ/kg'); //=> 3.352... (v(20 °C)·Δp)
  * copper.c('1400 K');  // throws OutOfRangeError: T = 1400 K is above the upper limit of the data for copper (1358 K)
+ * const oil = incompressible('engine oil').state({ T: '350 K', p: '1 atm' });
+ * oil.Pr;   //=> 546.4 (μ·c/λ from the tabulated μ, c and λ; the table prints 546)
+ * oil.mu?.in('mPa·s');   //=> 35.6
  * ```
  */
 export function incompressible(nameOrDefinition: string | IncompressibleDefinition, options?: IncompressibleOptions): IncompressibleSubstance {

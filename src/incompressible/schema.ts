@@ -42,6 +42,30 @@ export const sourceSchema = z.strictObject({
   table: z.optional(z.string()),
 });
 
+const basisSchema = z.enum(['published', 'computed', 'from memory', 'common practice', 'measured', 'user']);
+const uncertaintySchema = z.string().check(z.regex(/^(fit deviation|source|estimate): /));
+/** Where a transport property's numbers come from: its own source, basis and uncertainty. */
+const transportProvenance = {
+  source: z.optional(sourceSchema),
+  basis: z.optional(basisSchema),
+  uncertainty: z.optional(uncertaintySchema),
+  note: z.optional(z.string()),
+};
+const temperatureRange = z.strictObject({ min: quantityInput, max: quantityInput });
+/** A transport property: a constant (with an optional range of its own), a table, a formulation, or left out with the reason. */
+function transportSchema<T extends z.ZodMiniType, F extends string>(table: T, formulation: F) {
+  return z.union([
+    z.strictObject({ value: quantityInput, T: z.optional(temperatureRange), ...transportProvenance }),
+    z.strictObject({ table, unit: z.string(), temperatureUnit: z.string(), ...transportProvenance }),
+    z.strictObject({ formulation: z.literal(formulation), ...transportProvenance }),
+    z.strictObject({ omitted: text }),
+  ]);
+}
+const nodes = z.array(z.number()).check(z.minLength(2));
+/** Node temperatures (in `temperatureUnit`, strictly increasing) and values (in `unit`). */
+const viscosityTable = z.strictObject({ T: nodes, mu: nodes });
+const conductivityTable = z.strictObject({ T: nodes, lambda: nodes });
+
 /** zod schema of an incompressible substance definition. */
 export const incompressibleDefinitionSchema = z.strictObject({
   name: text,
@@ -76,10 +100,34 @@ export const incompressibleDefinitionSchema = z.strictObject({
   rangeNote: z.optional(z.string()),
   /** Something found while checking the data that a user should know (a disagreement between sources, a value left out). */
   finding: z.optional(z.string()),
+  /** Dynamic viscosity μ(T) of a liquid: a table (ln μ linear in 1/T between nodes), a constant, IAPWS R12-08 (liquid water), or `{ omitted }`. */
+  viscosity: z.optional(transportSchema(viscosityTable, 'IAPWS R12-08')),
+  /** Thermal conductivity λ(T): a constant, a table (linear in T), IAPWS R15-11 (liquid water), or `{ omitted }`. */
+  thermalConductivity: z.optional(transportSchema(conductivityTable, 'IAPWS R15-11')),
 });
 
 /** A quantity in a definition: unit text or a Quantity. */
 type QuantityField = string | Quantity;
+
+/** The provenance fields of a transport property. */
+interface TransportProvenance {
+  readonly source?: DefinitionSource;
+  readonly basis?: 'published' | 'computed' | 'from memory' | 'common practice' | 'measured' | 'user';
+  /** Starts with `fit deviation: `, `source: ` or `estimate: `. */
+  readonly uncertainty?: string;
+  readonly note?: string;
+}
+
+/**
+ * A transport property in a definition: a constant (optionally with its own temperature range), a
+ * table through (T, value) nodes, a named formulation, or `{ omitted: reason }` (the property
+ * functions then throw, naming the reason).
+ */
+export type TransportField<Table, F extends string> =
+  | (TransportProvenance & { readonly value: QuantityField; readonly T?: { readonly min: QuantityField; readonly max: QuantityField } })
+  | (TransportProvenance & { readonly table: Table; readonly unit: string; readonly temperatureUnit: string })
+  | (TransportProvenance & { readonly formulation: F })
+  | { readonly omitted: string };
 
 /** Where a definition's numbers come from. */
 export interface DefinitionSource {
@@ -117,6 +165,10 @@ export interface IncompressibleDefinition {
   readonly rangeNote?: string;
   /** Something found while checking the data that a user should know. */
   readonly finding?: string;
+  /** Dynamic viscosity μ(T) of a liquid (a table's ln μ is linear in 1/T between nodes). */
+  readonly viscosity?: TransportField<{ readonly T: readonly number[]; readonly mu: readonly number[] }, 'IAPWS R12-08'>;
+  /** Thermal conductivity λ(T) (a table's λ is linear in T between nodes). */
+  readonly thermalConductivity?: TransportField<{ readonly T: readonly number[]; readonly lambda: readonly number[] }, 'IAPWS R15-11'>;
 }
 
 type Mutable<T> = T extends Quantity ? T : T extends readonly (infer E)[] ? Mutable<E>[] : T extends object ? { -readonly [K in keyof T]: Mutable<T[K]> } : T;

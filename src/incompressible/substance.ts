@@ -10,11 +10,15 @@ import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
 import { ABSOLUTE_TEMPERATURE, readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
+import { DefinitionError } from '../errors.js';
 import { Quantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import type { CompiledSubstance, SubstanceSource } from './compile.js';
 import { densityAt, enthalpyChange, entropyChange, heatCapacityAt, internalEnergyChange, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
+import type { CompiledTransport } from './transport-data.js';
+import { curveValue, iapwsLiquidWater, LiquidWaterTransportWork, type PropertyCurve } from './transport.js';
+import { Status } from '../core/status.js';
 
 /** A state of an incompressible substance: temperature and (absolute) pressure. */
 export interface IncompressibleState {
@@ -43,10 +47,28 @@ export interface IncompressibleStateResult {
   readonly v: Quantity<'specificVolume'>;
   /** u − u_ref = ∫c dT from the reference temperature. */
   readonly u: Quantity<'specificEnergy'>;
-  /** h − h_ref = (u − u_ref) + v·(p − p_ref). */
+  /**
+   * h − h_ref = ∫c dT + v(T)·(p − p_ref) from the reference state (T_ref, p_ref = 1 atm): for constant
+   * density (u − u_ref) + v·(p − p_ref); with ρ(T), a function of the state whose (∂h/∂T)_p is c at
+   * p_ref (model.ts explains why it is not u + p·v there).
+   */
   readonly h: Quantity<'specificEnergy'>;
   /** s − s_ref = ∫c/T dT from the reference temperature. */
   readonly s: Quantity<'specificEntropy'>;
+  /**
+   * Dynamic viscosity μ(T), liquids only (solids have no such key). `undefined` where the data do not
+   * cover T or leave μ out ({@link IncompressibleSubstance.viscosity} throws and says why). Computed on
+   * first access, like every transport value here.
+   */
+  readonly mu?: Quantity<'dynamicViscosity'> | undefined;
+  /** Thermal conductivity λ(T); `undefined` as for `mu`. */
+  readonly lambda: Quantity<'thermalConductivity'> | undefined;
+  /** Prandtl number μ·c/λ, liquids only. */
+  readonly Pr?: number | undefined;
+  /** Kinematic viscosity ν = μ/ρ, liquids only. */
+  readonly nu?: Quantity<'kinematicViscosity'> | undefined;
+  /** Thermal diffusivity α = λ/(ρ·c). */
+  readonly alpha: Quantity<'thermalDiffusivity'> | undefined;
 }
 
 /** An incompressible liquid or solid, with its property functions. Inputs take quantities or unit text. */
@@ -76,6 +98,35 @@ export interface IncompressibleSubstance {
   readonly core: IncompressibleModel;
   /** Whether temperatures outside the data are computed (by extending its end piece, flagged) rather than refused. */
   readonly extrapolate: boolean;
+  /**
+   * Dynamic viscosity μ(T) of a liquid, from the data named in `transportSource.viscosity` (liquid
+   * water: IAPWS R12-08 at the IF97 saturated-liquid density).
+   * @throws {@link OutOfRangeError} outside the viscosity data's range (in the caller's units)
+   * @throws {@link DefinitionError} for a solid, or a liquid whose viscosity the data leave out, naming why
+   * @example
+   * ```ts
+   * incompressible('water').viscosity('25 °C').in('mPa·s');   //=> 0.8900 (IAPWS R12-08)
+   * incompressible('engine oil').viscosity('300 K').in('Pa·s');   //=> 0.486 (a tabulated node)
+   * incompressible('engine oil').viscosity('500 K');   // throws OutOfRangeError: T = 500 K is above the upper limit of the data for engine oil (430 K)
+   * incompressible('ethanol').viscosity('20 °C');   // throws DefinitionError: ethanol has no viscosity data
+   * ```
+   */
+  viscosity<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'dynamicViscosity'>;
+  /**
+   * Thermal conductivity λ(T), from the data named in `transportSource.thermalConductivity` (liquid
+   * water: IAPWS R15-11 at the IF97 saturated-liquid density).
+   * @throws {@link OutOfRangeError} outside the conductivity data's range
+   * @throws {@link DefinitionError} where the data leave λ out, naming why
+   * @example
+   * ```ts
+   * incompressible('copper').thermalConductivity('300 K').in('W/(m·K)');   //=> 401
+   * incompressible('water').thermalConductivity('100 °C').in('W/(m·K)');   //=> 0.6772 (IAPWS R15-11)
+   * incompressible('copper').thermalConductivity('1300 K');   // throws OutOfRangeError: … above the upper limit of the thermal conductivity data for copper (1200 K)
+   * ```
+   */
+  thermalConductivity<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'thermalConductivity'>;
+  /** Source, basis and uncertainty of the viscosity and the thermal conductivity, each where there are data. */
+  readonly transportSource: CompiledTransport['sources'];
   /** Specific heat c(T) (= cp = cv). Throws {@link OutOfRangeError} outside the range. */
   c<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'specificHeat'>;
   /** Same as {@link IncompressibleSubstance.c}: for an incompressible substance cp = c. */
@@ -90,7 +141,10 @@ export interface IncompressibleSubstance {
   deltaU<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEnergy'>;
   /** Δs = ∫c/T dT from state 1 to state 2. */
   deltaS<const P1 extends IncompressibleThermalState, const P2 extends IncompressibleThermalState>(state1: CheckedState<P1, IncompressibleInputDimensions, 'temperature'>, state2: CheckedState<P2, IncompressibleInputDimensions, 'temperature'>): Quantity<'specificEntropy'>;
-  /** Δh = Δu + v̄·(p2 − p1) between two states `{ T, p }`, v̄ the mean of v(T1) and v(T2). Pressures are absolute. */
+  /**
+   * Δh = ∫c dT + v(T2)·(p2 − p_ref) − v(T1)·(p1 − p_ref) between two states `{ T, p }`, p_ref = 1 atm
+   * (Δu + v·(p2 − p1) for constant density): exactly `state(2).h − state(1).h`. Pressures are absolute.
+   */
   deltaH<const P1 extends IncompressibleState, const P2 extends IncompressibleState>(state1: P1 & CheckedInputs<P1, IncompressibleInputDimensions>, state2: P2 & CheckedInputs<P2, IncompressibleInputDimensions>): Quantity<'specificEnergy'>;
 }
 
@@ -115,6 +169,66 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
   };
   const Tref = Math.min(model.Tmax, Math.max(model.Tmin, 298.15));
   const pRef = STANDARD_ATMOSPHERE_PA;
+  const { transport } = compiled;
+  let waterWork: LiquidWaterTransportWork | undefined;
+  /** The bounds of a transport property: its data's range within the substance's (both lifted by `extrapolate`, except IAPWS water's). */
+  const curveBounds = (curve: PropertyCurve, what: string): Bounds => {
+    if (extrapolate && curve.form !== 'iapws') return ABSOLUTE_TEMPERATURE;
+    const lo = extrapolate ? curve.Tmin : Math.max(model.Tmin, curve.Tmin);
+    const hi = extrapolate ? curve.Tmax : Math.min(model.Tmax, curve.Tmax);
+    const own = lo > model.Tmin || hi < model.Tmax;
+    return { min: lo, max: hi, scope: own ? `the ${what} data for ${name}` : `the data for ${name}`, hint: curve.form === 'iapws' ? `; ${definition.rangeNote ?? 'the formulation is evaluated on the saturated liquid only'}` : hint };
+  };
+  /** The SI value of a curve at T (in its bounds), NaN where it has none. */
+  const curveAt = (curve: PropertyCurve, T: number): number => {
+    if (curve.form === 'none') return NaN;
+    if (curve.form !== 'iapws') return curveValue(curve, T);
+    const work = (waterWork ??= new LiquidWaterTransportWork());
+    const key = curve === transport.viscosity ? 'viscosity' : 'conductivity';
+    if (iapwsLiquidWater(T, key, work) !== Status.ok) return NaN;
+    return key === 'viscosity' ? work.mu.mu : work.lambda.lambda;
+  };
+  const inCurve = (curve: PropertyCurve, T: number, what: string): boolean => {
+    if (curve.form === 'none') return false;
+    const b = curveBounds(curve, what);
+    return T >= b.min && T <= b.max;
+  };
+  const flagged = (curve: PropertyCurve, T: number): boolean => outside(T) || T < curve.Tmin || T > curve.Tmax;
+  /** μ or λ at T for the property functions: throws for missing data or T outside the data. */
+  const transportValue = (key: 'viscosity' | 'thermalConductivity', input: unknown) => {
+    const curve = transport[key];
+    const what = key === 'viscosity' ? 'viscosity' : 'thermal conductivity';
+    if (curve.form === 'none' || (key === 'viscosity' && definition.state === 'solid')) {
+      throw new DefinitionError(`request: ${name} has no ${what} data`, [{ path: [key], message: definition.state === 'solid' && key === 'viscosity' ? `${name} is a solid` : curve.reason }]);
+    }
+    const T = readTemperature(input, 'T', curveBounds(curve, what), new CallUnits());
+    return [curveAt(curve, T), flagged(curve, T)] as const;
+  };
+  /** Adds the transport values of a state as enumerable getters, computed on first access; undefined where there are no data at T. */
+  const withTransport = (target: object, T: number, cT: number, rhoT: number): IncompressibleStateResult => {
+    let mu: number | undefined;
+    let lambda: number | undefined;
+    const muAt = () => (mu ??= inCurve(transport.viscosity, T, 'viscosity') ? curveAt(transport.viscosity, T) : NaN);
+    const lambdaAt = () => (lambda ??= inCurve(transport.thermalConductivity, T, 'thermal conductivity') ? curveAt(transport.thermalConductivity, T) : NaN);
+    const xMu = () => flagged(transport.viscosity, T);
+    const xLambda = () => flagged(transport.thermalConductivity, T);
+    const q = <D extends 'dynamicViscosity' | 'thermalConductivity' | 'kinematicViscosity' | 'thermalDiffusivity'>(si: number, dimension: D, property: string, extrapolated: boolean) => (Number.isNaN(si) ? undefined : resultQuantity(si, dimension, property, extrapolated));
+    const getters: Record<string, () => unknown> = {};
+    if (definition.state === 'liquid') {
+      getters.mu = () => q(muAt(), 'dynamicViscosity', 'mu', xMu());
+      getters.lambda = () => q(lambdaAt(), 'thermalConductivity', 'lambda', xLambda());
+      getters.Pr = () => {
+        const v = (muAt() * cT) / lambdaAt();
+        return Number.isNaN(v) ? undefined : v;
+      };
+      getters.nu = () => q(muAt() / rhoT, 'kinematicViscosity', 'nu', xMu());
+    } else {
+      getters.lambda = () => q(lambdaAt(), 'thermalConductivity', 'lambda', xLambda());
+    }
+    getters.alpha = () => q(lambdaAt() / (rhoT * cT), 'thermalDiffusivity', 'alpha', xLambda());
+    for (const [key, fn] of Object.entries(getters)) Object.defineProperty(target, key, { get: fn, enumerable: true, configurable: false });
+    return target as IncompressibleStateResult;
+  };
   const c = (T: unknown): Quantity<'specificHeat'> => {
     const t = temperature(T, 'T');
     return resultQuantity(heatCapacityAt(model, t), 'specificHeat', 'c', outside(t));
@@ -133,6 +247,15 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
     c,
     cp: c,
     cv: c,
+    transportSource: transport.sources,
+    viscosity(T) {
+      const [v, x] = transportValue('viscosity', T);
+      return resultQuantity(v, 'dynamicViscosity', 'mu', x);
+    },
+    thermalConductivity(T) {
+      const [v, x] = transportValue('thermalConductivity', T);
+      return resultQuantity(v, 'thermalConductivity', 'lambda', x);
+    },
     density: (T) => {
       const t = temperature(T, 'T');
       return resultQuantity(densityAt(model, t), 'density', 'rho', outside(t));
@@ -146,19 +269,21 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
     state(pair) {
       const [T, p] = resolve(pair, '', true);
       const cT = heatCapacityAt(model, T);
+      const rhoT = densityAt(model, T);
       const x = outside(T);
-      return {
+      const result: Omit<IncompressibleStateResult, 'mu' | 'lambda' | 'Pr' | 'nu' | 'alpha'> = {
         T: resultQuantity(T, 'temperature', 'T'),
         p: resultQuantity(p, 'pressure', 'p'),
         c: resultQuantity(cT, 'specificHeat', 'c', x),
         cp: resultQuantity(cT, 'specificHeat', 'cp', x),
         cv: resultQuantity(cT, 'specificHeat', 'cv', x),
-        rho: resultQuantity(densityAt(model, T), 'density', 'rho', x),
-        v: resultQuantity(1 / densityAt(model, T), 'specificVolume', 'v', x),
+        rho: resultQuantity(rhoT, 'density', 'rho', x),
+        v: resultQuantity(1 / rhoT, 'specificVolume', 'v', x),
         u: resultQuantity(internalEnergyChange(model, Tref, T), 'specificEnergy', 'u', x),
         h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h', x),
         s: resultQuantity(entropyChange(model, Tref, T), 'specificEntropy', 's', x),
       };
+      return withTransport(result, T, cT, rhoT);
     },
     deltaU(state1, state2) {
       const [a] = resolve(state1, 'state1.', false);

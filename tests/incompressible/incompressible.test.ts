@@ -60,11 +60,18 @@ describe('the model: cp = cv = c, Δu = ∫c dT, Δh = Δu + vΔp (common practi
     const oil = incompressible('engine oil');
     expectClose(oil.deltaH({ T: '350 K', p: '1 bar' }, { T: '350 K', p: '11 bar' }).si, 1e6 / 853.9, { rel: 1e-12 });
   });
-  it('with ρ(T): Δh = Δu + v̄·Δp, v̄ = (v(T1) + v(T2))/2; at constant pressure Δh = Δu', () => {
+  it('with ρ(T): h(T, p) = ∫c dT + v(T)·(p − p_ref), a function of the state; at p_ref Δh = Δu exactly', () => {
     const oil = incompressible('engine oil');
-    const v = 0.5 / 884.1 + 0.5 / 825.1;
-    expectClose(oil.deltaH({ T: '300 K', p: '1 bar' }, { T: '400 K', p: '21 bar' }).si, oil.deltaU('300 K', '400 K').si + v * 2e6, { rel: 1e-12 });
-    expect(oil.deltaH({ T: '300 K', p: '1 bar' }, { T: '400 K', p: '1 bar' }).si).toBe(oil.deltaU('300 K', '400 K').si);
+    // v at the tabulated nodes 300 K and 400 K (engine-oil density table), p_ref = 1 atm
+    const expected = oil.deltaU('300 K', '400 K').si + (21e5 - 101325) / 825.1 - (1e5 - 101325) / 884.1;
+    expectClose(oil.deltaH({ T: '300 K', p: '1 bar' }, { T: '400 K', p: '21 bar' }).si, expected, { rel: 1e-12 });
+    expect(oil.deltaH({ T: '300 K', p: '1 atm' }, { T: '400 K', p: '1 atm' }).si).toBe(oil.deltaU('300 K', '400 K').si);
+    // path independence: 1 → 2 → 3 equals 1 → 3, and deltaH is the difference of the states' h
+    const s1 = { T: '300 K', p: '1 bar' } as const;
+    const s2 = { T: '400 K', p: '50 bar' } as const;
+    const s3 = { T: '350 K', p: '2 MPa' } as const;
+    expectClose(oil.deltaH(s1, s2).si + oil.deltaH(s2, s3).si, oil.deltaH(s1, s3).si, { rel: 1e-12 });
+    expectClose(oil.deltaH(s1, s2).si, oil.state(s2).h.si - oil.state(s1).h.si, { rel: 1e-12 });
   });
   it('densityAt: constant density, or linear between the tabulated nodes and exact at them', () => {
     expect(densityAt(lookupIncompressible('copper').model, 500)).toBe(8933);

@@ -144,10 +144,9 @@ describe('incompressible substances: random states of every catalogue entry', ()
 });
 
 describe('incompressible substances: deltaH against the states', () => {
-  // known fault (reported): for liquids with ρ(T), deltaH uses the mean volume v̄·Δp while state().h
-  // uses v(T)·(p − p_ref), so deltaH(1, 2) ≠ state(2).h − state(1).h: ethanol from 1 kPa at its
-  // lowest temperature to 100 MPa at its highest differs by 1.1 %
-  it.fails('deltaH equals state(2).h − state(1).h to 1e-9 for every substance (known fault: not for liquids with ρ(T))', () => {
+  // fixed: h is one function of the state, h(T, p) = ∫c dT + v(T)·(p − p_ref) (src/incompressible/model.ts),
+  // and deltaH is its difference, also for liquids with ρ(T)
+  it('deltaH equals state(2).h − state(1).h to 1e-9 for every substance, liquids with ρ(T) included', () => {
     const fail = new Failures();
     for (const name of incompressibleNames().filter((n) => !n.endsWith('solution'))) {
       const sub = incompressible(name);
