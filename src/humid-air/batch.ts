@@ -137,7 +137,7 @@ function fusedLoop(pair: number, p: Float64Array, wetBulb: boolean): BatchLoop<H
         const partial = st.reason !== REASON.none;
         for (let c = 0; c < m; c++) {
           const k = codes[c]!;
-          let v = column(st, k);
+          const v = column(st, k);
           if (partial && v !== v && mayBeUndefined(k)) {
             code = Status.undefinedProperty;
           } else if (!(v - v === 0)) {
