@@ -52,10 +52,12 @@ describe('consumer bundles', () => {
 });
 
 describe('humid-air bundle', () => {
-  // measured at the time of writing: 33.9 kB, of which the units layer alone is 12.2 kB (over its own
-  // 8 kB ceiling above) and IF97 regions 1 and 2 (condensate and steam enthalpies of the processes)
-  // about 7 kB; humidAir.state alone bundles to 20.8 kB. This ceiling is the goal, not yet met.
-  it('heatstate/humid-air: at most 36 kB gzipped, without decimal.js, zod, substance data, steam tables or IF97 regions 3 and 5', async () => {
+  // the goal of the humid-air issue is 20 kB, not yet met: 33.4 kB measured. Leave-one-out shares of
+  // the gzipped bundle: the units layer about 12 kB (its own entry bundles to 12.2 kB), IF97 regions 1
+  // and 2 (condensate and steam enthalpies of the processes) 6.7 kB with their data, of which 0.7 kB is
+  // the metastable-vapour kernel region2 references, the humid-air facade 5.7 kB, its SI core 4.3 kB,
+  // the facade kit and errors 3.3 kB; humidAir.state alone bundles to 20.7 kB.
+  it('heatstate/humid-air: at most 35 kB gzipped, without decimal.js, zod, substance data, steam tables, IF97 regions 3 and 5 or the provenance text of its data files', async () => {
     const js = await bundle(`import { humidAir, humidAirBatch } from 'heatstate/humid-air';
       const s = humidAir.state({ T: '30 °C', RH: 0.5 });
       console.log(s, humidAir.coolingCoil({ inlet: s, flow: '1 kg/s', ADP: '10 °C', bypassFactor: 0.1 }), humidAirBatch);`);
@@ -64,9 +66,10 @@ describe('humid-air bundle', () => {
     expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
     // IF97 region 3 (Table 30, n1) and region 5 (Table 37, n1 of the ideal part) are not needed
     expect(js).not.toMatch(/1\.0658070028513|-0\.13179983674201e2|-13\.179983674201/);
-    // 33.9 kB measured, above the 20 kB target of the humid-air issue: the units layer alone is 12.2 kB
-    // and IF97 regions 1 and 2 (condensate and steam enthalpies) about 7 kB; this ceiling guards against growth
-    expect(gzipSync(js).length / 1024).toBeLessThan(36);
+    // the humid-air data files are imported by name: their numbers ship, their source and uncertainty text does not
+    expect(js).not.toMatch(/Melting and Sublimation Curves|equation numbers from memory/);
+    // 33.4 kB measured (from 33.9 kB: the data files imported by name), above the 20 kB target; this ceiling guards against growth
+    expect(gzipSync(js).length / 1024).toBeLessThan(35);
   });
 });
 

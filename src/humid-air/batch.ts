@@ -6,7 +6,7 @@
  *
  * @module
  */
-import { runBatch, type BatchInputSet, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
+import { runBatch, type BatchInputSet, type BatchLoop, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
 import { Status, type StatusCode } from '../core/status.js';
 import { InvalidInputError } from '../errors.js';
 import { HumidAirState, humidAirState, PAIR, REASON } from './core/state.js';
@@ -74,13 +74,95 @@ function undefinedAt(out: HumidAirState, property: HumidAirBatchProperty): boole
   }
 }
 
+/** Column codes of the fused loop, one per property (the order of {@link PROPERTIES}). */
+const COLUMN: { readonly [K in HumidAirBatchProperty]: number } = { T: 0, Twb: 1, Tdp: 2, RH: 3, W: 4, h: 5, v: 6, rho: 7, pw: 8, pws: 9, Ws: 10, saturationDegree: 11, cp: 12 };
+
+/** Property `code` of {@link COLUMN} from the state. */
+function column(out: HumidAirState, code: number): number {
+  switch (code) {
+    case 0:
+      return out.T;
+    case 1:
+      return out.Twb;
+    case 2:
+      return out.Tdp;
+    case 3:
+      return out.RH;
+    case 4:
+      return out.W;
+    case 5:
+      return out.h;
+    case 6:
+      return out.v;
+    case 7:
+      return out.rho;
+    case 8:
+      return out.pw;
+    case 9:
+      return out.pws;
+    case 10:
+      return out.Ws;
+    case 11:
+      return out.mu;
+    default:
+      return out.cp;
+  }
+}
+
+/** Whether column `code` may be NaN where the core reports it undefined (Tdp, Twb, Ws, μ: see {@link undefinedAt}). */
+function mayBeUndefined(code: number): boolean {
+  return code === 1 || code === 2 || code === 10 || code === 11;
+}
+
+/**
+ * The fused loop of one pair (see `BatchLoop` in src/core/batch.ts): the SI core per element over
+ * one reused state, the columns read by code, without the runner's per-element calls. Same codes
+ * and values, bit for bit, as the runner's loop over `solve` with {@link PROPERTIES} and
+ * {@link undefinedAt}: undefinedProperty from the core counts as ok, a requested property that is
+ * NaN where the core says it is undefined is NaN with status undefinedProperty, any other
+ * non-finite value is invalidInput, and a failed element is NaN in every column.
+ */
+function fusedLoop(pair: number, p: Float64Array, wetBulb: boolean): BatchLoop<HumidAirBatchProperty> {
+  return (a, b, props, columns, status) => {
+    if (b === undefined) return false;
+    const m = props.length;
+    const codes = new Int32Array(m);
+    for (let c = 0; c < m; c++) codes[c] = COLUMN[props[c]!];
+    const st = new HumidAirState();
+    const n = a.length;
+    for (let i = 0; i < n; i++) {
+      let code: number = humidAirState(pair, a[i]!, b[i]!, p[i]!, wetBulb, st);
+      if (code === Status.undefinedProperty) code = Status.ok;
+      if (code === Status.ok) {
+        const partial = st.reason !== REASON.none;
+        for (let c = 0; c < m; c++) {
+          const k = codes[c]!;
+          const v = column(st, k);
+          if (partial && v !== v && mayBeUndefined(k)) {
+            code = Status.undefinedProperty;
+          } else if (!(v - v === 0)) {
+            // not finite: a core that answered ok with a non-finite value is not a result
+            code = Status.invalidInput;
+            break;
+          }
+          columns[c]![i] = v;
+        }
+      }
+      if (code !== Status.ok && code !== Status.undefinedProperty) for (let c = 0; c < m; c++) columns[c]![i] = NaN;
+      status[i] = code;
+    }
+    return true;
+  };
+}
+
 /**
  * The input sets for one call. The generic runner hands its solver two inputs per element; the
  * third, the pressure, is read from `p` at the element's index, counted here (the runner calls the
  * solver once per element, in order). Each call checks that the runner's first input is the
- * element's own (a guard against a change of that order), and answers invalidInput if not.
+ * element's own (a guard against a change of that order), and answers invalidInput if not. The
+ * runner uses each set's fused loop instead when it has passed the call's checks.
  */
-function inputSets(p: Float64Array, columns: Readonly<Record<string, Float64Array | undefined>>, wetBulb: boolean): BatchInputSet<HumidAirState>[] {
+function inputSets(p: Float64Array, columns: Readonly<Record<string, Float64Array | undefined>>, wetBulb: boolean): BatchInputSet<HumidAirState, HumidAirBatchProperty>[] {
   return PAIRS.map(([k1, k2, pair]) => {
     let i = 0;
     const first = columns[k1];
@@ -94,6 +176,7 @@ function inputSets(p: Float64Array, columns: Readonly<Record<string, Float64Arra
         // a computed state is ok for the runner; a property not defined there is its NaN (undefinedAt)
         return s === Status.undefinedProperty ? Status.ok : s;
       },
+      loop: fusedLoop(pair, p, wetBulb),
     };
   });
 }

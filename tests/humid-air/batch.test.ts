@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { humidAir, humidAirBatch, InvalidInputError } from '../../src/humid-air/index.js';
 import { HumidAirState, humidAirStateSI, PAIR } from '../../src/humid-air/core/index.js';
+import { runBatch, type BatchModel } from '../../src/core/batch.js';
 import { Status } from '../../src/core/status.js';
 import { quantity } from '../../src/units/quantity.js';
 
@@ -95,5 +96,55 @@ describe('humidAirBatch', () => {
     const W = new Float64Array(6);
     const r = humidAirBatch({ T, RH, p }, ['W'], { W });
     expect(r.W).toBe(W);
+  });
+});
+
+describe('humidAirBatch fused loop', () => {
+  // the oracle: the generic runner's own loop (no fused loop) over the SI core, with the readers and
+  // the undefined-property rule the batch documents (NaN where not defined, status undefinedProperty)
+  const props = ['T', 'Twb', 'Tdp', 'RH', 'W', 'h', 'v', 'rho', 'pw', 'pws', 'Ws', 'saturationDegree', 'cp'] as const;
+  type Prop = (typeof props)[number];
+  const readers: { [K in Prop]: (o: HumidAirState) => number } = {
+    T: (o) => o.T, Twb: (o) => o.Twb, Tdp: (o) => o.Tdp, RH: (o) => o.RH, W: (o) => o.W, h: (o) => o.h, v: (o) => o.v,
+    rho: (o) => o.rho, pw: (o) => o.pw, pws: (o) => o.pws, Ws: (o) => o.Ws, saturationDegree: (o) => o.mu, cp: (o) => o.cp,
+  };
+  const mayBeUndefined = new Set<Prop>(['Tdp', 'Twb', 'Ws', 'saturationDegree']);
+  function generic(pair: number, a: Float64Array, b: Float64Array, p: Float64Array, wanted: readonly Prop[]) {
+    let i = 0;
+    const wetBulb = wanted.includes('Twb');
+    const model: BatchModel<HumidAirState, Prop> = {
+      name: 'oracle',
+      inputs: [{ keys: ['a', 'b'], solve: (x, y, out) => { const s = humidAirStateSI(pair, x, y, p[i++]!, wetBulb, out); return s === Status.undefinedProperty ? Status.ok : s; } }],
+      properties: readers,
+      createOutput: () => new HumidAirState(),
+      undefinedAt: (out, prop) => out.reason !== 0 && mayBeUndefined.has(prop) && Number.isNaN(readers[prop](out)),
+    };
+    return runBatch(model, { a, b }, wanted);
+  }
+  const range: Record<string, [number, number]> = { T: [150, 500], Twb: [150, 500], Tdp: [150, 500], RH: [-0.1, 1.1], W: [-0.01, 0.3], h: [-2e5, 8e5] };
+  const pairs: [string, string, number][] = [
+    ['T', 'RH', PAIR.T_RH], ['T', 'W', PAIR.T_W], ['T', 'h', PAIR.T_h], ['T', 'Tdp', PAIR.T_Tdp], ['T', 'Twb', PAIR.T_Twb],
+    ['RH', 'W', PAIR.RH_W], ['RH', 'h', PAIR.RH_h], ['RH', 'Tdp', PAIR.RH_Tdp], ['RH', 'Twb', PAIR.RH_Twb],
+    ['W', 'h', PAIR.W_h], ['W', 'Twb', PAIR.W_Twb], ['h', 'Tdp', PAIR.h_Tdp], ['h', 'Twb', PAIR.h_Twb], ['Tdp', 'Twb', PAIR.Tdp_Twb],
+  ];
+  const value = (key: string) => fc.oneof({ weight: 20, arbitrary: fc.double({ min: range[key]![0], max: range[key]![1], noNaN: true }) }, { weight: 1, arbitrary: fc.constantFrom(NaN, 0, 1, 273.15) });
+  it.each(pairs)('(%s, %s): statuses and values equal the generic runner over the core, bit for bit, for every property and for the batch path (Tdp, W, h) (fast-check)', (k1, k2, pair) => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(value(k1), value(k2), fc.oneof({ weight: 20, arbitrary: fc.double({ min: 1e3, max: 1.2e6, noNaN: true }) }, { weight: 1, arbitrary: fc.constant(101325) })), { minLength: 1, maxLength: 30 }),
+        (rows) => {
+          const a = Float64Array.from(rows, (r) => r[0]);
+          const b = Float64Array.from(rows, (r) => r[1]);
+          const p = Float64Array.from(rows, (r) => r[2]);
+          for (const wanted of [props, ['Tdp', 'W', 'h'] as const]) {
+            const fused = humidAirBatch({ [k1]: a, [k2]: b, p } as never, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
+            const oracle = generic(pair, a, b, p, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
+            expect([...fused.status]).toEqual([...oracle.status]);
+            for (const prop of wanted) for (let i = 0; i < rows.length; i++) expect(Object.is(fused[prop]![i], oracle[prop]![i])).toBe(true);
+          }
+        },
+      ),
+      { numRuns: 60, endOnFailure: true }, // no shrinking: a failing array of states shrinks for minutes
+    );
   });
 });

@@ -10,6 +10,8 @@ import { HumidAirState, humidAirStateSI, PAIR, REASON, moistAirEnthalpy, saturat
 import { Status } from '../../src/core/status.js';
 import { quantity } from '../../src/units/quantity.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { saturationPressure, saturationTemperature } from '../../src/water/if97/region4.js';
+import { sublimationPressure } from '../../src/humid-air/core/saturation.js';
 
 const P = 101325;
 const st = new HumidAirState();
@@ -312,5 +314,39 @@ describe('facade inputs and results', () => {
     expect(r.W.si).toBe(st.W);
     expect(r.Twb!.si).toBe(st.Twb);
     expect(r.h.si).toBe(st.h);
+  });
+});
+
+describe('the (T, RH, p) path of the batch', () => {
+  // the relations composed by hand, with an independent solver for the frost point (bisection on
+  // IAPWS R14-08 Eq. 6): pw = RH·pws(T) (IF97 Eq. 30 from 0 °C, R14-08 Eq. 6 below), W = 0.621945 pw/(p − pw)
+  // (ASHRAE Eq. 22), h (Eq. 32), Tdp = Ts(pw) (IF97 Eq. 31) or the frost point; to 1e-12 relative
+  function frostPoint(pw: number): number {
+    let lo = 150;
+    let hi = 273.16;
+    for (let i = 0; i < 200 && hi - lo > 1e-14 * hi; i++) {
+      const mid = 0.5 * (lo + hi);
+      if (sublimationPressure(mid) < pw) lo = mid;
+      else hi = mid;
+    }
+    return 0.5 * (lo + hi);
+  }
+  it('W, h and Tdp equal the relations composed directly, from −60 °C to 90 °C and 5 % to 100 % RH, at 70 kPa to 1 MPa (fast-check)', () => {
+    const out = new HumidAirState();
+    fc.assert(
+      fc.property(fc.double({ min: 213.15, max: 363.15, noNaN: true }), fc.double({ min: 0.05, max: 1, noNaN: true }), fc.double({ min: 7e4, max: 1e6, noNaN: true }), (T, RH, p) => {
+        const pws = T < 273.15 ? sublimationPressure(T) : saturationPressure(T);
+        const pw = RH * pws;
+        fc.pre(pws < 0.9 * p); // below the boiling point at p, where every output is defined
+        expect(humidAirStateSI(PAIR.T_RH, T, RH, p, false, out)).toBe(Status.ok);
+        const W = (0.621945 * pw) / (p - pw);
+        const t = T - 273.15;
+        expectClose(out.W, W, { rel: 1e-12 });
+        expectClose(out.h, 1006 * t + W * (2501e3 + 1860 * t), { rel: 1e-12, abs: 1e-9 });
+        const Tdp = pw >= saturationPressure(273.15) ? saturationTemperature(pw) : pw < sublimationPressure(273.15) ? frostPoint(pw) : 273.15;
+        expectClose(out.Tdp, Tdp, { rel: 1e-12 });
+      }),
+      { numRuns: 300 },
+    );
   });
 });

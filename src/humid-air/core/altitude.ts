@@ -6,16 +6,16 @@
  *
  * @module
  */
-import ashrae from '../../../data/humid-air/ashrae-moist-air.json';
+import { altitude } from '../../../data/humid-air/ashrae-moist-air.json';
 import { Status, type StatusCode } from '../../core/status.js';
 
 /** Lowest altitude of the standard-atmosphere relation, m. */
-export const ALTITUDE_MIN = ashrae.altitude.zMin;
+export const ALTITUDE_MIN = altitude.zMin;
 /** Highest altitude of the standard-atmosphere relation, m. */
-export const ALTITUDE_MAX = ashrae.altitude.zMax;
-const P0 = ashrae.altitude.p0;
-const K = ashrae.altitude.k;
-const N = ashrae.altitude.exponent;
+export const ALTITUDE_MAX = altitude.zMax;
+const P0 = altitude.p0;
+const K = altitude.k;
+const N = altitude.exponent;
 
 /**
  * Standard-atmosphere pressure (Pa) at altitude Z (m), or −1 outside {@link ALTITUDE_MIN} … {@link ALTITUDE_MAX}

@@ -12,27 +12,28 @@
  *
  * @module
  */
-import ashrae from '../../../data/humid-air/ashrae-moist-air.json';
+// named imports, so that a bundle carries the numbers and not the file's source text
+import { cIce, cLiquid, cpDryAir, cpVapor, dryAirGasConstant, hIceAt0C, hVaporAt0C, molarMassRatio, vaporVolumeFactor } from '../../../data/humid-air/ashrae-moist-air.json';
 import { T_ICE, waterSaturationPressure } from './saturation.js';
 
 /** Ratio of the molar masses of water and dry air, 0.621945 (ASHRAE Eq. 22). */
-export const EPSILON = ashrae.molarMassRatio;
+export const EPSILON = molarMassRatio;
 /** Gas constant of dry air used by ASHRAE Eq. 28, J/(kg·K). */
-export const R_DRY_AIR = ashrae.dryAirGasConstant;
+export const R_DRY_AIR = dryAirGasConstant;
 /** 1.607858 = 1/0.621945, the vapour volume factor of Eq. 28. */
-export const VAPOR_VOLUME_FACTOR = ashrae.vaporVolumeFactor;
+export const VAPOR_VOLUME_FACTOR = vaporVolumeFactor;
 /** cp of dry air in Eq. 32, J/(kg·K). */
-export const CP_DRY_AIR = ashrae.cpDryAir;
+export const CP_DRY_AIR = cpDryAir;
 /** Enthalpy of water vapour at 0 °C in Eq. 32, J/kg. */
-export const H_VAPOR_0 = ashrae.hVaporAt0C;
+export const H_VAPOR_0 = hVaporAt0C;
 /** cp of water vapour in Eq. 32, J/(kg·K). */
-export const CP_VAPOR = ashrae.cpVapor;
+export const CP_VAPOR = cpVapor;
 /** Specific heat of liquid water in hw = 4.186 t, J/(kg·K). */
-export const C_LIQUID = ashrae.cLiquid;
+export const C_LIQUID = cLiquid;
 /** Enthalpy of ice at 0 °C, J/kg (hw = −333.4 + 2.1 t kJ/kg). */
-export const H_ICE_0 = ashrae.hIceAt0C;
+export const H_ICE_0 = hIceAt0C;
 /** Specific heat of ice, J/(kg·K). */
-export const C_ICE = ashrae.cIce;
+export const C_ICE = cIce;
 
 /** Returned by the relations below when water vapour would reach the total pressure (no saturated state). */
 export const NO_SATURATION = 1e300;

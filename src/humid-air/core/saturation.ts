@@ -19,13 +19,14 @@
  *
  * @module
  */
-import sublimation from '../../../data/humid-air/sublimation-iapws-r14.json';
+// named imports, so that a bundle carries the numbers and not the file's source text
+import { a as SUBLIMATION_A, b as SUBLIMATION_B, pt as SUBLIMATION_PT, Tt as SUBLIMATION_TT } from '../../../data/humid-air/sublimation-iapws-r14.json';
 import { saturationPressure, saturationTemperature } from '../../water/if97/region4.js';
 
-const TT = sublimation.Tt;
-const PT = sublimation.pt;
-const [A1, A2, A3] = sublimation.a as [number, number, number];
-const [B1, B2, B3] = sublimation.b as [number, number, number];
+const TT = SUBLIMATION_TT;
+const PT = SUBLIMATION_PT;
+const [A1, A2, A3] = SUBLIMATION_A as [number, number, number];
+const [B1, B2, B3] = SUBLIMATION_B as [number, number, number];
 const LN_PT = Math.log(PT);
 /** 1 − b_i: ln(p/pt) = Σ a_i u^(1 − b_i) with u = Tt/T. */
 const C1 = 1 - B1;

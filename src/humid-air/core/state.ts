@@ -156,10 +156,18 @@ function belowBoiling(p: number, T: number): number {
 }
 
 /**
- * Fills every output from (p, T, W); `Tdp`, `Twb` and `pwsAtT` (pws(T)) are used as given when
- * not NaN (the caller knows them exactly), computed otherwise.
+ * Fills every output from (p, T, W), which the caller has written into `out.p`, `out.T` and `out.W`
+ * (in the object rather than as arguments: a double passed to a call that is not inlined is boxed,
+ * and this one is too large to inline); `out.Tdp`, `out.Twb` and `out.pws` (pws(T)) are used as
+ * given when not NaN (the caller knows them exactly), computed otherwise.
  */
-function fill(out: HumidAirState, p: number, T: number, W: number, Tdp: number, Twb: number, wetBulb: boolean, pwsAtT: number): StatusCode {
+function fill(out: HumidAirState, wetBulb: boolean): StatusCode {
+  const p = out.p;
+  const T = out.T;
+  let W = out.W;
+  const Tdp = out.Tdp;
+  const Twb = out.Twb;
+  const pwsAtT = out.pws;
   const pws = pwsAtT === pwsAtT ? pwsAtT : waterSaturationPressure(T);
   const psat = pws;
   const Ws = psat < p ? humidityRatioFromVaporPressure(p, psat) : NO_SATURATION;
@@ -172,8 +180,6 @@ function fill(out: HumidAirState, p: number, T: number, W: number, Tdp: number, 
   let status: StatusCode = Status.ok;
   let reason: number = REASON.none;
   const pw = vaporPressureFromHumidityRatio(p, W);
-  out.p = p;
-  out.T = T;
   out.W = W;
   out.pw = pw;
   out.pws = pws;
@@ -432,7 +438,13 @@ export function humidAirState(pair: number, a: number, b: number, p: number, wet
   if ((s = checkTemperature(out, T)) !== Status.ok) return s;
   if (Tdp === Tdp && Tdp > T) Tdp = T;
   if (Twb === Twb && Twb > T) Twb = T;
-  return fill(out, p, T, W, Tdp, Twb, wetBulb, pwsT);
+  out.p = p;
+  out.T = T;
+  out.W = W;
+  out.Tdp = Tdp;
+  out.Twb = Twb;
+  out.pws = pwsT;
+  return fill(out, wetBulb);
 }
 
 /** |hw| below this (J/kg: t* within 1e-6 K of 0 °C over liquid) makes (h, Twb) a dependent pair. */
