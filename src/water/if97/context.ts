@@ -8,7 +8,7 @@
  */
 import { RootResult } from '../../core/root.js';
 import { EntropyAlongEnthalpy } from './hs-residual.js';
-import { Region3IsobarResidual } from './isobar-residual.js';
+import { Region3IsobarDensityResidual, Region3IsobarResidual } from './isobar-residual.js';
 import { WaterProperties } from './properties.js';
 import { VolumeAlongIsotherm } from './tv-residual.js';
 import { region3Pressure } from './region3.js';
@@ -47,6 +47,8 @@ export class SolverContext {
   readonly entropyAlongEnthalpy: EntropyAlongEnthalpy = new EntropyAlongEnthalpy(this);
   /** Region 3 isobar search in T. */
   readonly isobar: Region3IsobarResidual = new Region3IsobarResidual(this);
+  /** Region 3 isobar search in ρ, next to the critical point. */
+  readonly isobarByDensity = new Region3IsobarDensityResidual();
   /** The (T, v) search in ln p. */
   readonly volumeAlongIsotherm = new VolumeAlongIsotherm();
   /** Root finder output. */

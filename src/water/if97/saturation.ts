@@ -6,7 +6,7 @@
  * @module
  */
 import { Status, type StatusCode } from '../../core/status.js';
-import { CRITICAL_EXPONENT_BETA, P_CRITICAL, RHO_CRITICAL, T_13, T_CRITICAL, T_MIN, T_NEAR_CRITICAL_BAND } from './constants.js';
+import { CRITICAL_EXPONENT_BETA, P_CRITICAL, RHO_CRITICAL, T_13, T_CRITICAL, T_LINEAR_SATURATION_ZONE, T_MIN, T_NEAR_CRITICAL_BAND } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
 import type { WaterProperties } from './properties.js';
 import { region1 } from './region1.js';
@@ -33,16 +33,31 @@ export const P_SAT_13 = saturationPressure(T_13);
 export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {
   if (!Number.isFinite(T)) return Status.invalidInput;
   if (!(T >= T_MIN && T <= T_CRITICAL)) return Status.outOfRange;
-  const p = T === T_CRITICAL ? P_CRITICAL : saturationLinePressure(T);
+  if (T <= T_13) {
+    const p = saturationPressure(T);
+    region1(p, T, liquid);
+    region2(p, T, vapor);
+    return Status.ok;
+  }
+  return saturatedPhases(T, T_CRITICAL - T, T === T_CRITICAL ? P_CRITICAL : saturationLinePressure(T), liquid, vapor, ctx);
+}
+
+/**
+ * Both phases at T on the saturation line at p, `below` kelvin under T_c (T_c − T, or in the linear
+ * zone next to T_c the distance that p itself fixes, finer than T's rounding): regions 1 and 2 up to
+ * 623.15 K, region 3 at its two roots above, and in the near-critical band the densities scaled
+ * toward ρc by `below`, so that every p under p_c has two distinct phases.
+ */
+function saturatedPhases(T: number, below: number, p: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext): StatusCode {
   if (T <= T_13) {
     region1(p, T, liquid);
     region2(p, T, vapor);
     return Status.ok;
   }
-  if (T === T_CRITICAL) {
+  if (!(below > 0)) {
     region3(RHO_CRITICAL, T, liquid);
     region3(RHO_CRITICAL, T, vapor);
-  } else if (T > T_CRITICAL - T_NEAR_CRITICAL_BAND) {
+  } else if (below < T_NEAR_CRITICAL_BAND) {
     // the near-critical band: the saturated densities at the band's edge, scaled toward ρc with the
     // coexistence curve's exponent; properties from region 3 at (ρ, T). The isotherm is flat here,
     // so p₃(ρ, T) stays within a few 1e-10 of p_s(T).
@@ -51,7 +66,7 @@ export function saturationAtT(T: number, liquid: WaterProperties, vapor: WaterPr
     if (region3DensityAt(pEdge, edge, 1, ctx) !== Status.ok) return Status.noConvergence;
     const rlEdge = ctx.rho;
     if (region3DensityAt(pEdge, edge, 2, ctx) !== Status.ok) return Status.noConvergence;
-    const scale = ((T_CRITICAL - T) / T_NEAR_CRITICAL_BAND) ** CRITICAL_EXPONENT_BETA;
+    const scale = (below / T_NEAR_CRITICAL_BAND) ** CRITICAL_EXPONENT_BETA;
     region3(RHO_CRITICAL + (rlEdge - RHO_CRITICAL) * scale, T, liquid);
     region3(RHO_CRITICAL + (ctx.rho - RHO_CRITICAL) * scale, T, vapor);
   } else {
@@ -87,17 +102,18 @@ export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterPr
     region2(p, Tl, vapor);
     return Status.ok;
   }
-  const status = saturationAtT(T, liquid, vapor, ctx);
-  liquid.p = p;
-  vapor.p = p;
-  return status;
+  // in the linear zone T_s(p) rounds to within an ulp of T_c, p_c − p still fixes the distance
+  const below = p >= P_CRITICAL ? 0 : P_CRITICAL - p < LINEAR_ZONE_PRESSURE ? (P_CRITICAL - p) / CRITICAL_SLOPE : T_CRITICAL - T;
+  return saturatedPhases(T, below, p, liquid, vapor, ctx);
 }
 
 /**
  * The saturation pressure used on the saturation line: Eq. 30, and inside the near-critical band
  * Eq. 30 plus a linear share of its miss at the critical point (Eq. 30 gives p_s(T_c) = p_c +
  * 0.32 mPa, within its stated accuracy), so that the line ends exactly at (T_c, p_c) and T_s(p_c) = T_c.
- * The correction is at most 0.32 mPa (1.5e-11 relative).
+ * The correction is at most 0.32 mPa (1.5e-11 relative). Within 1 µK of T_c the line is its tangent
+ * at T_c (it departs from it by under 1e-7 Pa there, the rounding level of Eq. 30 near T_c), so that
+ * it falls strictly and T_s(p) inverts it exactly up to p_c.
  * @example
  * ```ts
  * saturationLinePressure(373.15);   //=> 101417.978 (Pa; Eq. 30 alone away from T_c)
@@ -105,6 +121,12 @@ export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterPr
  * ```
  */
 export function saturationLinePressure(T: number): number {
+  if (T > T_CRITICAL - T_LINEAR_SATURATION_ZONE) return P_CRITICAL - CRITICAL_SLOPE * (T_CRITICAL - T);
+  return bandLinePressure(T);
+}
+
+/** Eq. 30 with the near-critical band's correction (see {@link saturationLinePressure}). */
+function bandLinePressure(T: number): number {
   const ps = saturationPressure(T);
   if (!(T > T_CRITICAL - T_NEAR_CRITICAL_BAND)) return ps;
   return ps - CRITICAL_MISS * ((T - (T_CRITICAL - T_NEAR_CRITICAL_BAND)) / T_NEAR_CRITICAL_BAND);
@@ -112,6 +134,21 @@ export function saturationLinePressure(T: number): number {
 
 /** Eq. 30's miss at the critical point, p_s(T_c) − p_c, Pa. */
 const CRITICAL_MISS = saturationPressure(T_CRITICAL) - P_CRITICAL;
+
+/**
+ * The slope of the saturation line at T_c, dp_s/dT = 268 136 Pa/K, from differences of the band's
+ * line 10 µK and 20 µK under T_c (Richardson extrapolation; Eq. 30 is evaluated to a few 1e-8 Pa
+ * near T_c, 2e-14 relative, so the slope is good to about 1e-8 relative).
+ */
+const CRITICAL_SLOPE = 2 * lineSlopeBelowCritical(1e-5) - lineSlopeBelowCritical(2e-5);
+
+/** (p_c − p_band(T_c − dT))/dT, Pa/K. */
+function lineSlopeBelowCritical(dT: number): number {
+  return (P_CRITICAL - bandLinePressure(T_CRITICAL - dT)) / dT;
+}
+
+/** p_c − p_s at the linear zone's edge, Pa. */
+const LINEAR_ZONE_PRESSURE = CRITICAL_SLOPE * T_LINEAR_SATURATION_ZONE;
 
 /**
  * T_s(p) above 16.5 MPa: Eq. 31, then Newton steps on the saturation line's pressure
@@ -140,6 +177,7 @@ function nearCriticalSaturationTemperature(p: number): number {
  */
 export function saturationTemperatureOnLine(p: number): number {
   if (p >= P_CRITICAL) return T_CRITICAL;
+  if (P_CRITICAL - p < LINEAR_ZONE_PRESSURE) return T_CRITICAL - (P_CRITICAL - p) / CRITICAL_SLOPE;
   return p > P_SAT_13 ? nearCriticalSaturationTemperature(p) : Math.min(T_CRITICAL, Math.max(T_MIN, saturationTemperature(p)));
 }
 
