@@ -156,9 +156,10 @@ const NEAR_CRITICAL_PRESSURE = 1e-5 * P_CRITICAL;
  * 0.05 mPa) and has a two-phase loop of its own up to T_c + 1.03 nK (its own critical point lies
  * there, at p_c + 0.23 mPa). An isobar through that loop crosses it at temperatures where the density
  * root changes branch, and h(T) jumps (by 40 J/kg at p_c). Along the isobar h and s are monotonic in
- * ρ (dh = T ds, and (∂s/∂ρ)_p = −cp/(ρ²T(∂v/∂T)_p) does not change sign across so small a loop), so
- * the search in ρ finds the one state with the target value. Answers inside the loop (where
- * (∂p/∂ρ)_T < 0) are kept only within the near-critical band of the saturation line.
+ * ρ: dh = T ds there, and (∂s/∂v)_p = [T(∂p/∂T)_v² − cv(∂p/∂v)_T]/(T(∂p/∂T)_v) stays positive across
+ * so small a loop, where (∂p/∂v)_T is barely positive; so the search in ρ finds the one state with
+ * the target value. Answers inside the loop (where (∂p/∂ρ)_T < 0) are kept only within the
+ * near-critical band of the saturation line.
  */
 function region3ByDensity(p: number, target: number, by: Matched, out: WaterState, ctx: SolverContext): StatusCode {
   const f = ctx.isobarByDensity;
