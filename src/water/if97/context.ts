@@ -39,6 +39,12 @@ export class SolverContext {
   readonly density = new DensityResidual();
   /** The answer of the last density search, kg/m³. */
   rho = 0;
+  /**
+   * The saturated densities at the near-critical band's edge (T_c − 0.1 mK), kg/m³: fixed numbers,
+   * solved on first use by this context (0 until then).
+   */
+  bandEdgeLiquidDensity = 0;
+  bandEdgeVaporDensity = 0;
   /** Region 3 (ρ, T) values and derivatives for Newton steps. */
   readonly d3 = new Float64Array(9);
   /** p and (∂p/∂ρ)_T from region 3. */

@@ -59,14 +59,19 @@ function saturatedPhases(T: number, below: number, p: number, liquid: WaterPrope
     // the near-critical band: the saturated densities at the band's edge, scaled toward ρc with the
     // coexistence curve's exponent; properties from region 3 at (ρ, T). The isotherm is flat here,
     // so p₃(ρ, T) stays within a few 1e-10 of p_s(T).
-    const edge = T_CRITICAL - T_NEAR_CRITICAL_BAND;
-    const pEdge = saturationPressure(edge);
-    if (region3DensityAt(pEdge, edge, 1, ctx) !== Status.ok) return Status.noConvergence;
-    const rlEdge = ctx.rho;
-    if (region3DensityAt(pEdge, edge, 2, ctx) !== Status.ok) return Status.noConvergence;
+    if (!(ctx.bandEdgeLiquidDensity > 0)) {
+      // the same two numbers for every call: solved once per context
+      const edge = T_CRITICAL - T_NEAR_CRITICAL_BAND;
+      const pEdge = saturationPressure(edge);
+      if (region3DensityAt(pEdge, edge, 2, ctx) !== Status.ok) return Status.noConvergence;
+      const rvEdge = ctx.rho;
+      if (region3DensityAt(pEdge, edge, 1, ctx) !== Status.ok) return Status.noConvergence;
+      ctx.bandEdgeVaporDensity = rvEdge;
+      ctx.bandEdgeLiquidDensity = ctx.rho;
+    }
     const scale = (below / T_NEAR_CRITICAL_BAND) ** CRITICAL_EXPONENT_BETA;
-    region3(RHO_CRITICAL + (rlEdge - RHO_CRITICAL) * scale, T, liquid);
-    region3(RHO_CRITICAL + (ctx.rho - RHO_CRITICAL) * scale, T, vapor);
+    region3(RHO_CRITICAL + (ctx.bandEdgeLiquidDensity - RHO_CRITICAL) * scale, T, liquid);
+    region3(RHO_CRITICAL + (ctx.bandEdgeVaporDensity - RHO_CRITICAL) * scale, T, vapor);
   } else {
     if (region3DensityAt(p, T, 1, ctx) !== Status.ok) return Status.noConvergence;
     const rl = ctx.rho;
