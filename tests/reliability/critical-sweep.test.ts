@@ -14,7 +14,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { Status } from '../../src/core/status.js';
-import { P_CRITICAL, T_CRITICAL } from '../../src/water/if97/constants.js';
+import { P_CRITICAL, T_CRITICAL, T_LINEAR_SATURATION_ZONE } from '../../src/water/if97/constants.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { stateFromHS } from '../../src/water/if97/hs.js';
 import { stateFromPH } from '../../src/water/if97/ph.js';
@@ -24,7 +24,7 @@ import { WaterProperties } from '../../src/water/if97/properties.js';
 import { stateFromPX, stateFromTX } from '../../src/water/if97/quality.js';
 import { region3 } from '../../src/water/if97/region3.js';
 import { saturationPressure } from '../../src/water/if97/region4.js';
-import { saturationAtP, saturationAtT } from '../../src/water/if97/saturation.js';
+import { saturationAtP, saturationAtT, saturationLinePressure, saturationTemperatureOnLine } from '../../src/water/if97/saturation.js';
 import { PHASE, WaterState } from '../../src/water/if97/water-state.js';
 import { water } from '../../src/water/index.js';
 import { Failures, Random, closeRel } from './helpers.js';
@@ -98,6 +98,18 @@ describe('IF97 saturation up to the critical point', () => {
       pPrev = liquid.p;
     }
     fail.expectNone('last ulps of the saturation line');
+  });
+
+  it('the saturation line is continuous where it turns into its tangent at T_c (1 µK below T_c: a step under 3e-7 Pa, 1.4e-14 relative)', () => {
+    const edge = T_CRITICAL - T_LINEAR_SATURATION_ZONE;
+    const slope = 268136.2; // Pa/K, dp_s/dT of Eq. 30 at T_c (its change over 2 µK: 0.015 Pa/K)
+    for (let k = 1; k < 200; k++) {
+      const inside = edge + k * 2 ** -43;
+      const outside = edge - k * 2 ** -43;
+      expect(Math.abs(saturationLinePressure(inside) - saturationLinePressure(outside) - slope * (inside - outside))).toBeLessThan(3e-7);
+    }
+    expect(saturationLinePressure(T_CRITICAL)).toBe(P_CRITICAL);
+    expect(saturationTemperatureOnLine(P_CRITICAL)).toBe(T_CRITICAL);
   });
 
   it('the facade at T_c and p_c exactly: both phases meet, h_fg = 0 (not negative), σ = 0', () => {

@@ -58,7 +58,7 @@ export const RHO_SEARCH_MAX_3 = 800;
 export const T_NEAR_CRITICAL_BAND = 1e-4;
 /**
  * Width of the linear zone of the saturation line next to T_c, K: within 1 µK (0.27 Pa) of the
- * critical point the line is its tangent there (see saturation.ts), so the saturated phases of any
+ * critical point the line is its tangent there (see saturation-line.ts), so the saturated phases of any
  * p < p_c are distinct even where T_s(p) rounds to T_c.
  */
 export const T_LINEAR_SATURATION_ZONE = 1e-6;

@@ -19,8 +19,9 @@ export const P_SAT_13 = saturationPressure(T_13);
  * Eq. 30 plus a linear share of its miss at the critical point (Eq. 30 gives p_s(T_c) = p_c +
  * 0.32 mPa, within its stated accuracy), so that the line ends exactly at (T_c, p_c) and T_s(p_c) = T_c.
  * The correction is at most 0.32 mPa (1.5e-11 relative). Within 1 µK of T_c the line is its tangent
- * at T_c (it departs from it by under 1e-7 Pa there, the rounding level of Eq. 30 near T_c), so that
- * it falls strictly and T_s(p) inverts it exactly up to p_c.
+ * at T_c (Eq. 30 departs from it by under 1e-7 Pa there, about the rounding of Eq. 30 near T_c, which
+ * scatters by a few 1e-8 Pa; the step where the two meet is under 3e-7 Pa), so that the line falls
+ * strictly and T_s(p) inverts it exactly up to p_c.
  * @example
  * ```ts
  * saturationLinePressure(373.15);   //=> 101417.978 (Pa; Eq. 30 alone away from T_c)
