@@ -92,6 +92,8 @@ function saturatedPhases(T: number, below: number, p: number, liquid: WaterPrope
  * const liquid = new WaterProperties(), vapor = new WaterProperties();
  * saturationAtP(101325, liquid, vapor);   //=> 0 (Status.ok)
  * vapor.h - liquid.h;                     //=> 2256.54e3 (J/kg: h_fg at 1 atm)
+ * saturationAtP(22.064e6 - 2 ** -28, liquid, vapor);   //=> 0 (one ulp under p_c)
+ * liquid.rho > vapor.rho;                             //=> true (still two phases)
  * ```
  */
 export function saturationAtP(p: number, liquid: WaterProperties, vapor: WaterProperties, ctx: SolverContext = defaultContext()): StatusCode {
