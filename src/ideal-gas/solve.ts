@@ -1,7 +1,10 @@
 /**
  * The ideal-gas SI core solvers: temperature from enthalpy or entropy, and isentropic end states, on
  * the core contract (a status, a caller-owned result, no throw, no NaN answer). Each solve is a
- * bracketed Newton iteration on [Tmin, Tmax] of the model: dh/dT = cp, ds°/dT = cp/T.
+ * bracketed Newton iteration on [Tmin, Tmax] of the model: dh/dT = cp, ds°/dT = cp/T. A target at
+ * an end of the data, within one unit in the last place of the end's value (the rounding a caller's
+ * unit conversion leaves, such as h/R of an h computed as R·(h/R)), gives the end temperature itself;
+ * beyond that it is out of range.
  *
  * @module
  */
@@ -58,12 +61,16 @@ export class IdealGasSolver {
    * const solver = new IdealGasSolver(n2);
    * solver.temperatureAtEnthalpy(1000 * n2.hRT(1000), 900);   //=> 0
    * solver.result.x;                                          //=> 1000.000000 (K)
+   * const end = n2.Tmax * n2.hRT(n2.Tmax);                     // h°/R̄ at the top of the data
+   * solver.temperatureAtEnthalpy(end, 900);                    //=> 0 (the end itself)
+   * solver.result.x;                                           //=> 6000
+   * solver.temperatureAtEnthalpy(end * (1 + 2 ** -49), 900);   //=> 1 (Status.outOfRange: 8 ulps past it)
    * ```
    */
   temperatureAtEnthalpy(hOverR: number, guess: number): StatusCode {
     if (!Number.isFinite(hOverR)) return Status.invalidInput;
     this.enthalpy.target = hOverR;
-    return bracketedNewton(this.enthalpy, this.model.Tmin, this.model.Tmax, guess, 1e-13, this.result);
+    return this.solve(this.enthalpy, hOverR, guess);
   }
 
   /**
@@ -73,7 +80,25 @@ export class IdealGasSolver {
   temperatureAtStandardEntropy(sOverR: number, guess: number): StatusCode {
     if (!Number.isFinite(sOverR)) return Status.invalidInput;
     this.entropy.target = sOverR;
-    return bracketedNewton(this.entropy, this.model.Tmin, this.model.Tmax, guess, 1e-13, this.result);
+    return this.solve(this.entropy, sOverR, guess);
+  }
+
+  /** The bracketed solve on [Tmin, Tmax]; a target within one ulp past an end is that end. */
+  private solve(f: ResidualWithSlope, target: number, guess: number): StatusCode {
+    const { Tmin, Tmax } = this.model;
+    const status = bracketedNewton(f, Tmin, Tmax, guess, 1e-13, this.result);
+    if (status !== Status.outOfRange) return status;
+    return this.atEnd(f, target, Tmin) || this.atEnd(f, target, Tmax) ? Status.ok : status;
+  }
+
+  /** True (with result.x = T) when the end value at T misses the target by at most its last-place unit. */
+  private atEnd(f: ResidualWithSlope, target: number, T: number): boolean {
+    // f at an end is the end's value minus the target
+    const miss = f.value(T);
+    if (!(Math.abs(miss) <= ulp(miss + target))) return false;
+    this.result.x = T;
+    this.result.iterations = 0;
+    return true;
   }
 
   /**
@@ -94,6 +119,16 @@ export class IdealGasSolver {
     const guess = T1 * (p2 / p1) ** (1 - 1 / (cpR / (cpR - 1)));
     return this.temperatureAtStandardEntropy(this.model.sR(T1) + Math.log(p2 / p1), guess);
   }
+}
+
+/** One unit in the last place of a finite x ≠ 0 (the spacing of doubles at |x|); the smallest double at 0. */
+function ulp(x: number): number {
+  const a = Math.abs(x);
+  if (!(a >= 2 ** -1022)) return Number.MIN_VALUE;
+  let e = Math.floor(Math.log2(a));
+  if (2 ** e > a) e--;
+  else if (2 ** (e + 1) <= a) e++;
+  return 2 ** (e - 52);
 }
 
 /**

@@ -12,9 +12,16 @@ import { DefinitionError, InvalidInputError, type DefinitionIssue } from '../err
 import { PropertyGrid } from './grid.js';
 import type { GridData, TableData } from './schema.js';
 import { PropertyTable } from './table.js';
+import { UNIT_TEXT_MAX_LENGTH } from '../units/expression.js';
 
 /** The largest text a loader reads (characters): a guard against a wrong file, not a limit of tables. */
 const MAX_TEXT = 50_000_000;
+
+/**
+ * The longest CSV header cell read (characters): a name of up to 60 characters, its unit (at most
+ * {@link UNIT_TEXT_MAX_LENGTH}) in brackets, and spacing.
+ */
+const HEADER_CELL_MAX_LENGTH = 64 + UNIT_TEXT_MAX_LENGTH;
 
 /** A decimal number as a CSV cell may hold it: sign, digits, point, exponent; nothing else. */
 const DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
@@ -150,6 +157,13 @@ export function tableFromCSV(text: string, options?: CsvOptions): PropertyTable 
   const names: string[] = [];
   const units: string[] = [];
   heads.forEach((h, c) => {
+    if (h.length > HEADER_CELL_MAX_LENGTH) {
+      // refused by its length before it is read: no header a table needs is this long
+      issues.push({ path: ['header', c], message: `column ${c + 1} header "${h.slice(0, 40)}…" is ${h.length} characters long, longer than ${HEADER_CELL_MAX_LENGTH} (a name and a unit in brackets)` });
+      names.push(`column ${c + 1}`);
+      units.push('');
+      return;
+    }
     const m = splitHeader(h);
     if (!m) {
       issues.push({ path: ['header', c], message: `column ${c + 1} header "${h}" has no unit: write it as "name [unit]", for example "T [°F]"` });

@@ -14,7 +14,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { Status } from '../../src/core/status.js';
-import { P_CRITICAL, T_CRITICAL } from '../../src/water/if97/constants.js';
+import { P_CRITICAL, T_CRITICAL, T_LINEAR_SATURATION_ZONE } from '../../src/water/if97/constants.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { stateFromHS } from '../../src/water/if97/hs.js';
 import { stateFromPH } from '../../src/water/if97/ph.js';
@@ -22,8 +22,9 @@ import { stateFromPS } from '../../src/water/if97/ps.js';
 import { stateFromPT } from '../../src/water/if97/pt.js';
 import { WaterProperties } from '../../src/water/if97/properties.js';
 import { stateFromPX, stateFromTX } from '../../src/water/if97/quality.js';
+import { region3 } from '../../src/water/if97/region3.js';
 import { saturationPressure } from '../../src/water/if97/region4.js';
-import { saturationAtP, saturationAtT } from '../../src/water/if97/saturation.js';
+import { saturationAtP, saturationAtT, saturationLinePressure, saturationTemperatureOnLine } from '../../src/water/if97/saturation.js';
 import { PHASE, WaterState } from '../../src/water/if97/water-state.js';
 import { water } from '../../src/water/index.js';
 import { Failures, Random, closeRel } from './helpers.js';
@@ -83,6 +84,32 @@ describe('IF97 saturation up to the critical point', () => {
       if (!(liquid.T <= T_CRITICAL)) fail.add(`saturationAtP(${p}): T = ${liquid.T} above T_c`);
     }
     fail.expectNone('saturation by p');
+  });
+
+  it('every p below p_c and every T below T_c, to the last ulp (64 each): two distinct phases (h_fg > 0, ρ_f > ρ_g), p_s(T) strictly below p_c and falling with T', () => {
+    const fail = new Failures();
+    let pPrev = P_CRITICAL;
+    for (let k = 1; k <= 64; k++) {
+      const p = P_CRITICAL - k * 2 ** -28; // ulp(p_c) = 2^-28 Pa
+      if (saturationAtP(p, liquid, vapor, ctx) !== Status.ok || !(vapor.h - liquid.h > 0) || !(liquid.rho > vapor.rho)) fail.add(`saturationAtP(p_c − ${k} ulp): h_fg = ${vapor.h - liquid.h}, ρ_f = ${liquid.rho}, ρ_g = ${vapor.rho}`);
+      const T = T_CRITICAL - k * 2 ** -43; // ulp(T_c) = 2^-43 K
+      if (saturationAtT(T, liquid, vapor, ctx) !== Status.ok || !(vapor.h - liquid.h > 0) || !(liquid.rho > vapor.rho)) fail.add(`saturationAtT(T_c − ${k} ulp): h_fg = ${vapor.h - liquid.h}`);
+      if (!(liquid.p < pPrev)) fail.add(`saturationAtT(T_c − ${k} ulp): p_s = ${liquid.p}, not below ${pPrev}`);
+      pPrev = liquid.p;
+    }
+    fail.expectNone('last ulps of the saturation line');
+  });
+
+  it('the saturation line is continuous where it turns into its tangent at T_c (1 µK below T_c: a step under 3e-7 Pa, 1.4e-14 relative)', () => {
+    const edge = T_CRITICAL - T_LINEAR_SATURATION_ZONE;
+    const slope = 268136.2; // Pa/K, dp_s/dT of Eq. 30 at T_c (its change over 2 µK: 0.015 Pa/K)
+    for (let k = 1; k < 200; k++) {
+      const inside = edge + k * 2 ** -43;
+      const outside = edge - k * 2 ** -43;
+      expect(Math.abs(saturationLinePressure(inside) - saturationLinePressure(outside) - slope * (inside - outside))).toBeLessThan(3e-7);
+    }
+    expect(saturationLinePressure(T_CRITICAL)).toBe(P_CRITICAL);
+    expect(saturationTemperatureOnLine(P_CRITICAL)).toBe(T_CRITICAL);
   });
 
   it('the facade at T_c and p_c exactly: both phases meet, h_fg = 0 (not negative), σ = 0', () => {
@@ -149,9 +176,10 @@ describe('IF97 two-phase states just below the critical point', () => {
     fail.expectNone('near-critical two-phase');
   });
 
-  // known fault (reported): within 1e-13 of T_c, p_s(T) rounds to p_c itself, and the (p, h) and
-  // (p, s) flashes at p = p_c answer status 0 with a state whose h or s is off by about 1.5e-5
-  it.fails('(T, x) and (p, x) within 1e-13 of the critical point, to its last ulp: likewise (known fault: flashes at p = p_c exactly return unconverged states)', () => {
+  // issue 17 (fixed): within 1e-13 of T_c, p_s(T) rounded to p_c itself, T_s(p) rounded to T_c with
+  // both phases at ρc, and the (p, h) and (p, s) flashes at p = p_c answered status 0 with a state
+  // whose h or s was off by about 1.5e-5 (relative)
+  it('(T, x) and (p, x) within 1e-13 of the critical point, to its last ulp: likewise', () => {
     const fail = new Failures();
     twoPhaseBack([2 ** -53, 2 ** -52, 3 * 2 ** -52, 1e-15, 3e-15, 1e-14, 3e-14], 33, fail);
     fail.expectNone('last ulps below the critical point');
@@ -276,23 +304,28 @@ describe('IF97 phase labels in region 3 follow the state', () => {
     fail.expectNone('saturated phase labels');
   });
 
-  // known fault (reported): within about 3e-12 of p_c (66 µPa) the saturated liquid's (p, h_f) and
-  // (p, s_f) flashes land about 1.8e-10 K above T_s, which is above T_c there, and are labelled 'vapor'
-  it.fails('likewise within 1e-11 of p_c (500 pressures; known fault: saturated liquid labelled vapor)', () => {
+  // issue 17 (fixed): within about 3e-12 of p_c (66 µPa) the saturated liquid's (p, h_f) and
+  // (p, s_f) flashes land about 1.8e-10 K above T_s, which is above T_c there, and were labelled
+  // 'vapor' by a pressure comparison
+  it('likewise within 1e-11 of p_c (500 pressures): saturated liquid never labelled vapor', () => {
     const r = new Random(55);
     const fail = new Failures();
     saturatedLabels(Array.from({ length: 500 }, () => P_CRITICAL * (1 - r.logUniform(1e-16, 1e-11))), fail);
     fail.expectNone('saturated phase labels next to p_c');
   });
 
-  it.fails('(p, h) at p = p_c exactly, h = 2087546.9891888113 J/kg: the answer reproduces h (known fault: status 0 with forward h = 2087582.11 J/kg)', () => {
+  // issue 17 (fixed): status 0 with forward h = 2087582.11 J/kg (the search in T stopped at a jump of h(T))
+  it('(p, h) at p = p_c exactly, h = 2087546.9891888113 J/kg: the answer reproduces h', () => {
     expect(stateFromPH(P_CRITICAL, 2087546.9891888113, b, ctx)).toBe(Status.ok);
     expect(closeRel(b.h, 2087546.9891888113, TOL), `forward h = ${b.h} at T = ${b.T}`).toBe(true);
+    expect(closeRel(region3(b.rho, b.T, liquid).p, P_CRITICAL, TOL), `forward p = ${liquid.p}`).toBe(true);
   });
 
-  it.fails('(p, s) at p = p_c exactly, s = 4412.022809284432 J/(kg·K): the answer reproduces s (known fault: status 0 with forward s = 4411.96613)', () => {
+  // issue 17 (fixed): status 0 with forward s = 4411.96613 J/(kg·K)
+  it('(p, s) at p = p_c exactly, s = 4412.022809284432 J/(kg·K): the answer reproduces s', () => {
     expect(stateFromPS(P_CRITICAL, 4412.022809284432, b, ctx)).toBe(Status.ok);
     expect(closeRel(b.s, 4412.022809284432, TOL), `forward s = ${b.s} at T = ${b.T}`).toBe(true);
+    expect(closeRel(region3(b.rho, b.T, liquid).p, P_CRITICAL, TOL), `forward p = ${liquid.p}`).toBe(true);
   });
 
   it('compressed liquid and superheated vapour in region 3 (p, T) within 1e-6 of the saturation line (2000 states): liquid and vapor', () => {

@@ -56,6 +56,12 @@ export const RHO_SEARCH_MAX_3 = 800;
  * (see saturation.ts).
  */
 export const T_NEAR_CRITICAL_BAND = 1e-4;
+/**
+ * Width of the linear zone of the saturation line next to T_c, K: within 1 µK (0.27 Pa) of the
+ * critical point the line is its tangent there (see saturation-line.ts), so the saturated phases of any
+ * p < p_c are distinct even where T_s(p) rounds to T_c.
+ */
+export const T_LINEAR_SATURATION_ZONE = 1e-6;
 /** Critical exponent β of the coexistence curve, ρ′ − ρ″ ∝ (Tc − T)^β (common practice, β ≈ 0.325). */
 export const CRITICAL_EXPONENT_BETA = 0.325;
 /** Temperature window around T_c where a region 3 density search on a branch may fall back to the single root of a loop-free isotherm, K. */

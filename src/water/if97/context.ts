@@ -8,7 +8,7 @@
  */
 import { RootResult } from '../../core/root.js';
 import { EntropyAlongEnthalpy } from './hs-residual.js';
-import { Region3IsobarResidual } from './isobar-residual.js';
+import { Region3IsobarDensityResidual, Region3IsobarResidual } from './isobar-residual.js';
 import { WaterProperties } from './properties.js';
 import { VolumeAlongIsotherm } from './tv-residual.js';
 import { region3Pressure } from './region3.js';
@@ -39,6 +39,12 @@ export class SolverContext {
   readonly density = new DensityResidual();
   /** The answer of the last density search, kg/m³. */
   rho = 0;
+  /**
+   * The saturated densities at the near-critical band's edge (T_c − 0.1 mK), kg/m³: fixed numbers,
+   * solved on first use by this context (0 until then).
+   */
+  bandEdgeLiquidDensity = 0;
+  bandEdgeVaporDensity = 0;
   /** Region 3 (ρ, T) values and derivatives for Newton steps. */
   readonly d3 = new Float64Array(9);
   /** p and (∂p/∂ρ)_T from region 3. */
@@ -47,6 +53,8 @@ export class SolverContext {
   readonly entropyAlongEnthalpy: EntropyAlongEnthalpy = new EntropyAlongEnthalpy(this);
   /** Region 3 isobar search in T. */
   readonly isobar: Region3IsobarResidual = new Region3IsobarResidual(this);
+  /** Region 3 isobar search in ρ, next to the critical point. */
+  readonly isobarByDensity = new Region3IsobarDensityResidual();
   /** The (T, v) search in ln p. */
   readonly volumeAlongIsotherm = new VolumeAlongIsotherm();
   /** Root finder output. */

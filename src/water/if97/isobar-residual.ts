@@ -8,7 +8,8 @@ import type { Residual } from '../../core/root.js';
 import { Status } from '../../core/status.js';
 import type { SolverContext } from './context.js';
 import type { WaterProperties } from './properties.js';
-import { region3 } from './region3.js';
+import { T_CRITICAL } from './constants.js';
+import { region3, region3Derivatives } from './region3.js';
 import { region3DensityAt } from './region3-density.js';
 
 /** Which property an isobar solve matches: enthalpy or entropy. */
@@ -44,5 +45,38 @@ export class Region3IsobarResidual implements Residual {
   value(T: number): number {
     if (!region3At(this.p, T, this.branch, this.ctx.scratchB, this.ctx)) return NaN;
     return valueOf(this.ctx.scratchB, this.by) - this.target;
+  }
+}
+
+/**
+ * h or s on a region 3 isobar minus the target, as a function of the density (for Brent): at each ρ
+ * the temperature on the isobar solves p₃(ρ, T) = p by Newton steps in T ((∂p/∂T)_ρ > 0, so there is
+ * one); the last temperature is kept in {@link T} and starts the next evaluation. Unlike the search in
+ * T, this follows the isobar through a loop of the region 3 isotherms, where the root in ρ at a
+ * given T changes branch and h(T) jumps.
+ */
+export class Region3IsobarDensityResidual implements Residual {
+  p = 0;
+  target = 0;
+  by: Matched = BY_H;
+  /** The temperature on the isobar at the last density evaluated, K. */
+  T = T_CRITICAL;
+  private readonly d3 = new Float64Array(9);
+  value(rho: number): number {
+    const d3 = this.d3;
+    const k = this.by === BY_H ? 3 : 6;
+    let T = this.T;
+    for (let i = 0; i < 30; i++) {
+      region3Derivatives(rho, T, d3);
+      const dT = (d3[0]! - this.p) / d3[2]!;
+      if (!(Number.isFinite(dT) && T - dT > 0)) return NaN;
+      if (Math.abs(dT) <= 1e-14 * T) {
+        // the last step, applied to the value to first order
+        this.T = T - dT;
+        return d3[k]! - d3[k + 2]! * dT - this.target;
+      }
+      T -= dT;
+    }
+    return NaN;
   }
 }

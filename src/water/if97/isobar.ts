@@ -14,15 +14,15 @@ import { region1TemperaturePH, region2TemperaturePH } from './backward-ph.js';
 import { region1TemperaturePS, region2TemperaturePS } from './backward-ps.js';
 import { region3TemperaturePH, region3TemperaturePS, region3VolumePH, region3VolumePS } from './backward-region3.js';
 import { finishSinglePhase } from './classify.js';
-import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './constants.js';
+import { P_CRITICAL, P_MAX, P_MAX_5, RHO_CRITICAL, RHO_SEARCH_MAX_3, RHO_SEARCH_MIN_3, T_13, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN, T_NEAR_CRITICAL_BAND } from './constants.js';
 import type { SolverContext } from './context.js';
 import type { WaterProperties } from './properties.js';
-import { region3, region3Derivatives } from './region3.js';
+import { region3, region3Derivatives, region3Pressure } from './region3.js';
 import { region3At } from './isobar-residual.js';
 import { saturationTemperature } from './region4.js';
 import { evaluateForward } from './regions.js';
 import { mixPhases, P_SAT_13, P_SAT_MIN, saturationAtP } from './saturation.js';
-import type { WaterState } from './water-state.js';
+import { PHASE, type WaterState } from './water-state.js';
 
 /** Which property an isobar solve matches: enthalpy or entropy. */
 import { BY_H, valueOf, type Matched } from './isobar-residual.js';
@@ -101,20 +101,95 @@ function newtonRegion3(p: number, target: number, by: Matched, Tlo: number, Thi:
  * Solves T on a region 3 isobar between Tlo and Thi so that h (or s) matches. The basic equations
  * differ slightly at the region boundaries (IF97 Section 10): a target that falls in that gap at the
  * 1/3 boundary (Tlo = 623.15 K) is solved on region 1 just above 623.15 K (at the B23 line the gas
- * side does the same on region 2), so the flash still matches it exactly.
+ * side does the same on region 2), so the flash still matches it exactly. Every answer is checked
+ * against the target; next to the critical point, where the search in T meets a jump of h(T) (see
+ * {@link region3ByDensity}), the search in ρ takes over. `branch` (1 liquid, 2 vapour: the side of
+ * the dome the target lies on, from the saturated values) labels the phase.
  */
 function solveRegion3(p: number, target: number, by: Matched, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState, ctx: SolverContext): StatusCode {
   if (Tlo === T_13 && region3At(p, Tlo, branch, ctx.scratchB, ctx) && valueOf(ctx.scratchB, by) > target) {
     return polishT(1, p, target, by, T_13, T_MIN, T_13 + 5, out);
   }
-  if (newtonRegion3(p, target, by, Tlo, Thi, branch, out, ctx) === Status.ok) return Status.ok;
+  if (newtonRegion3(p, target, by, Tlo, Thi, branch, out, ctx) === Status.ok) return labelSide(out, branch);
   const residual = ctx.isobar;
   residual.p = p;
   residual.target = target;
   residual.by = by;
   residual.branch = branch;
-  if (brent(residual, Tlo, Thi, 1e-14, ctx.root) !== Status.ok) return Status.noConvergence;
-  if (!region3At(p, ctx.root.x, branch, out, ctx)) return Status.noConvergence;
+  const found = brent(residual, Tlo, Thi, 1e-14, ctx.root) === Status.ok && region3At(p, ctx.root.x, branch, out, ctx);
+  if (found && matches(valueOf(out, by), target, 1e-11)) return region3Answer(out, branch);
+  const T = ctx.root.x;
+  if (Math.abs(p - P_CRITICAL) <= NEAR_CRITICAL_PRESSURE && region3ByDensity(p, target, by, out, ctx) === Status.ok) return labelSide(out, branch);
+  // away from the critical point, an answer of the search in T within the flash tolerance stands
+  if (found && region3At(p, T, branch, out, ctx) && matches(valueOf(out, by), target, 1e-9)) return region3Answer(out, branch);
+  return Status.noConvergence;
+}
+
+/** |value − target| within `rel` of the target (and 1e-9 absolute, for values near 0). */
+function matches(value: number, target: number, rel: number): boolean {
+  return Math.abs(value - target) <= rel * Math.abs(target) + 1e-9;
+}
+
+/** Marks a region 3 answer single-phase, on the side of the dome its target lies on. */
+function region3Answer(out: WaterState, branch: 0 | 1 | 2): StatusCode {
+  finishSinglePhase(out, 3);
+  return labelSide(out, branch);
+}
+
+/**
+ * The phase of a region 3 answer by the saturation test that chose its branch: a target at or below
+ * the saturated liquid's value is liquid, at or above the vapour's is vapour, even where rounding or
+ * IF97's inconsistency at the critical point puts T a fraction of a nK above T_c. Branch 0 (at and
+ * above p_c) keeps the label from p, T and ρ.
+ */
+function labelSide(out: WaterState, branch: 0 | 1 | 2): StatusCode {
+  if (branch !== 0) out.phase = branch === 1 ? PHASE.liquid : PHASE.vapor;
+  return Status.ok;
+}
+
+/** Pressures within this distance of p_c (Pa, 1e-5 relative) may need {@link region3ByDensity}. */
+const NEAR_CRITICAL_PRESSURE = 1e-5 * P_CRITICAL;
+
+/**
+ * The region 3 isobar searched in ρ, from ρc outward, for where the search in T fails: the region 3
+ * equation meets IF97's critical point only within its consistency tolerance (p₃(ρc, T_c) = p_c −
+ * 0.05 mPa) and has a two-phase loop of its own up to T_c + 1.03 nK (its own critical point lies
+ * there, at p_c + 0.23 mPa). An isobar through that loop crosses it at temperatures where the density
+ * root changes branch, and h(T) jumps (by 40 J/kg at p_c). Along the isobar h and s are monotonic in
+ * ρ: dh = T ds there, and (∂s/∂v)_p = [T(∂p/∂T)_v² − cv(∂p/∂v)_T]/(T(∂p/∂T)_v) stays positive across
+ * so small a loop, where (∂p/∂v)_T is barely positive; so the search in ρ finds the one state with
+ * the target value. Answers inside the loop (where (∂p/∂ρ)_T < 0) are kept only within the
+ * near-critical band of the saturation line.
+ */
+function region3ByDensity(p: number, target: number, by: Matched, out: WaterState, ctx: SolverContext): StatusCode {
+  const f = ctx.isobarByDensity;
+  f.p = p;
+  f.target = target;
+  f.by = by;
+  f.T = T_CRITICAL;
+  let a = RHO_CRITICAL;
+  let fa = f.value(a);
+  if (!Number.isFinite(fa)) return Status.noConvergence;
+  // h and s fall as ρ rises along the isobar: step toward the root, widening, until the sign changes
+  const up = fa > 0;
+  let b = a;
+  let fb = fa;
+  for (let step = 1e-4; fa * fb > 0; step *= 4) {
+    if (!(step < 1e3)) return Status.noConvergence;
+    a = b;
+    fa = fb;
+    b = up ? Math.min(RHO_SEARCH_MAX_3, a + step) : Math.max(RHO_SEARCH_MIN_3, a - step);
+    if (b === a) return Status.noConvergence;
+    fb = f.value(b);
+    if (!Number.isFinite(fb)) return Status.noConvergence;
+  }
+  if (brent(f, Math.min(a, b), Math.max(a, b), 1e-15, ctx.root) !== Status.ok) return Status.noConvergence;
+  const rho = ctx.root.x;
+  if (!matches(f.value(rho) + target, target, 1e-11)) return Status.noConvergence;
+  region3(rho, f.T, out);
+  out.p = p;
+  region3Pressure(rho, f.T, ctx.pr);
+  if (!(ctx.pr[1]! > 0) && !(Math.abs(f.T - T_CRITICAL) <= T_NEAR_CRITICAL_BAND)) return Status.noConvergence;
   return finishSinglePhase(out, 3);
 }
 

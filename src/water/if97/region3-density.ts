@@ -1,7 +1,8 @@
 /**
  * Region 3 density at given (p, T): a bracketed search on the region 3 pressure p₃(ρ, T), the solve
  * IAPWS R7-97(2012) allows in place of the SR5-05 backward equations, choosing the liquid or vapour
- * branch by the saturation pressure of Eq. 30. Step sizes come from the approximate saturated
+ * branch by the saturation line of Eq. 30 (as the solvers use it, ending exactly at p_c: see
+ * saturation-line.ts). Step sizes come from the approximate saturated
  * densities of IAPWS SR1-86 (Eqs. 2.3 and 2.4), used for search step sizes only.
  *
  * @module
@@ -12,7 +13,7 @@ import { Status, type StatusCode } from '../../core/status.js';
 import { RHO_CRITICAL, RHO_SEARCH_MAX_3, RHO_SEARCH_MIN_3, T_CRITICAL, T_LOOP_FREE_WINDOW } from './constants.js';
 import type { SolverContext } from './context.js';
 import { region3Pressure } from './region3.js';
-import { saturationPressure } from './region4.js';
+import { saturationLinePressure } from './saturation-line.js';
 
 const SAT_B = satData.liquid.b;
 const SAT_BE = satData.liquid.exponents;
@@ -94,6 +95,7 @@ function found(rho: number, ctx: SolverContext): StatusCode {
 /**
  * Density (kg/m³) in region 3 at (p [Pa], T [K]), written to `ctx.rho`.
  * `branch`: 1 = liquid (the largest root), 2 = vapour (the smallest root), 0 = choose by p_s(T)
+ * of the saturation line
  * below the critical temperature. Above the critical temperature the isotherm rises monotonically
  * and one bracket suffices. Below it, the search stays on its branch: from the high-density end down
  * for the liquid, from the low-density end up for the vapour, in steps a tenth of the width of the
@@ -127,7 +129,7 @@ function branchDensity(p: number, T: number, branch: 0 | 1 | 2, ctx: SolverConte
     if (!(pMin < p && pMax > p)) return Status.noConvergence;
     return polishDensity(p, T, RHO_SEARCH_MIN_3, RHO_SEARCH_MAX_3, ctx, pMin, pMax);
   }
-  const b = branch === 0 ? (p >= saturationPressure(T) ? 1 : 2) : branch;
+  const b = branch === 0 ? (p >= saturationLinePressure(T) ? 1 : 2) : branch;
   const rl = approxLiquidDensity(T);
   const rv = approxVaporDensity(T);
   const fine = Math.max(0.02, (rl - rv) / 12);
