@@ -20,7 +20,7 @@
  * @module
  */
 // named imports: a bundler keeps only these parts of the data file (not its source and finding texts)
-import { methods, mixtures, range, species as speciesData } from '../../data/ideal-gas/transport.json';
+import { collisionIntegral as CI, conductivity, mixtures, range, species as speciesData } from '../../data/ideal-gas/transport.json';
 import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K } from '../chem/constants.js';
 import { Status, type StatusCode } from '../core/status.js';
 import type { IdealGasModel } from './model.js';
@@ -41,15 +41,14 @@ export interface GasTransportModel {
   cp(T: number): number;
 }
 
-const CI = methods.collisionIntegral;
 const A = CI.A;
 const B = CI.B;
 const C = CI.C;
 const D = CI.D;
 const E = CI.E;
 const F = CI.F;
-const EUCKEN_A = methods.conductivity.a;
-const EUCKEN_B = methods.conductivity.b;
+const EUCKEN_A = conductivity.a;
+const EUCKEN_B = conductivity.b;
 const T_CAP = range.Tmax;
 
 /**
