@@ -6,7 +6,7 @@
  */
 import { formatNumber } from '../errors.js';
 import { fluid } from '../fluids/index.js';
-import { idealGas } from '../ideal-gas/gas.js';
+import { idealGas, type GasStateResult, type IdealGas } from '../ideal-gas/gas.js';
 import { gasTransportIds } from '../ideal-gas/transport.js';
 import { incompressible } from '../incompressible/index.js';
 import type { Dimension } from '../units/dimensions.js';
@@ -128,7 +128,7 @@ export function gasCommand(args: Args): Row[] {
  * state), from the ideal-gas facade (dilute gas: no pressure dependence in μ and λ); a `transport` row
  * says why they are not defined when the gas has no transport data or T lies outside it.
  */
-function gasTransportRows(gas: ReturnType<typeof idealGas>, T: number, st?: ReturnType<ReturnType<typeof idealGas>['state']>): Row[] {
+function gasTransportRows(gas: IdealGas, T: number, st?: GasStateResult): Row[] {
   const core = gas.transportCore;
   const inRange = core !== undefined && T >= core.Tmin && T <= core.Tmax;
   const at = Quantity.fromSI(T, 'temperature');

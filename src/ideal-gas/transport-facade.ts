@@ -205,7 +205,7 @@ class GasStateWithTransport implements GasStateTransport {
 
   /** JSON of the state: its own fields and the five transport values. */
   toJSON(): Record<string, unknown> {
-    return { ...this, mu: this.mu, lambda: this.lambda, nu: this.nu, alpha: this.alpha, Pr: this.Pr };
+    return { ...(this as object), mu: this.mu, lambda: this.lambda, nu: this.nu, alpha: this.alpha, Pr: this.Pr };
   }
 }
 

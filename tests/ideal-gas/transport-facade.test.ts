@@ -7,7 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { molarMass } from '../../src/chem/index.js';
 import { DimensionError, InvalidInputError, OutOfRangeError, UnitError, UnknownNameError } from '../../src/errors.js';
-import { dryAir, idealGas, mixture } from '../../src/ideal-gas/gas.js';
+import { dryAir, idealGas, mixture, type IdealGas } from '../../src/ideal-gas/gas.js';
 import { GasMixtureTransport, gasTransportIds, gasTransportModel } from '../../src/ideal-gas/transport.js';
 import { expectClose } from '../helpers/tolerance.js';
 
@@ -127,7 +127,7 @@ describe('identities on states: Pr = μ cp/λ, ν = μ/ρ, α = λ/(ρ cp)', () 
 
 describe('typed errors', () => {
   it('a gas without transport data: UnknownNameError naming it and listing the gases that have data', () => {
-    for (const call of [(g: ReturnType<typeof idealGas>) => g.viscosity('300 K'), (g: ReturnType<typeof idealGas>) => g.thermalConductivity('300 K'), (g: ReturnType<typeof idealGas>) => g.prandtl('300 K')]) {
+    for (const call of [(g: IdealGas) => g.viscosity('300 K'), (g: IdealGas) => g.thermalConductivity('300 K'), (g: IdealGas) => g.prandtl('300 K')]) {
       let error: unknown;
       try {
         call(idealGas('NH3'));

@@ -27,7 +27,7 @@ describe('handbook values at 300 K, 1 atm (from memory), through idealGas(name)'
     ['C3H8', 8.2, 18.0, 'CRC Handbook, from memory'],
     ['C2H4', 10.4, 20.5, 'CRC Handbook, from memory'],
     ['n-C4H10', 7.5, 16.4, 'CRC Handbook, from memory'],
-  ] as const)('%s: μ = %d µPa·s, λ = %d mW/(m·K) (%s)', (id, mu, lambda) => {
+  ] as const)('%s: μ = %d µPa·s, λ = %d mW/(m·K) (%s)', (id, mu, lambda, _source) => {
     const gas = idealGas(id);
     expectClose(gas.viscosity('300 K').in('µPa·s'), mu, { rel: MU_TOL });
     expectClose(gas.thermalConductivity('300 K').in('mW/(m·K)'), lambda, { rel: LAMBDA_POLYATOMIC_TOL });
