@@ -189,3 +189,12 @@ describe('air at 300 K and 1 atm against Incropera et al., Fundamentals of Heat 
   it('α within 10 % (λ\'s uncertainty)', () => expectClose(st.alpha!.si, 22.5e-6, { rel: 0.1 }));
   it('Pr within 12 % (μ and λ combined)', () => expectClose(st.Pr!, 0.707, { rel: 0.12 }));
 });
+
+describe('nitrogen at 800 K and 1 atm against Incropera et al., Table A.4 (from memory)', () => {
+  // Table A.4, nitrogen at 800 K: μ = 335.8e-7 N·s/m², k = 54.8e-3 W/(m·K), Pr = 0.687; the data file
+  // states about 3 % for μ away from room temperature, 10 % for λ of a polyatomic gas
+  const st = idealGas('N2').state({ T: '800 K', p: '1 atm' });
+  it('μ within 3 %', () => expectClose(st.mu!.si, 335.8e-7, { rel: 0.03 }));
+  it('λ within 10 %', () => expectClose(st.lambda!.si, 54.8e-3, { rel: 0.1 }));
+  it('Pr within 12 %', () => expectClose(st.Pr!, 0.687, { rel: 0.12 }));
+});
