@@ -20,7 +20,7 @@ import type { Quantity, QuantityInput } from '../units/quantity.js';
 import type { IdealGasModel } from './model.js';
 import { GasMixtureTransport, gasTransportIds, gasTransportModel, type GasTransportModel } from './transport.js';
 
-/** The transport methods of an ideal gas (see {@link IdealGas}). */
+/** The transport methods of an ideal gas (part of `IdealGas`). */
 export interface GasTransportMethods {
   /**
    * Dynamic viscosity μ(T) of the dilute gas (Chapman-Enskog with Svehla's Lennard-Jones parameters;
