@@ -147,7 +147,7 @@ export function transportMethods(source: TransportSource, core: IdealGasModel, n
 /**
  * The transport part of a gas state: getters on the prototype, computed on first access and kept.
  * A class rather than per-state property definitions: defining five getters on each state object
- * cost about 10 µs per state (bench/cases/transport.ts), the class nothing measurable.
+ * measured 8 to 25 µs per state (a loaded 2-core machine), building this object about 0.3 µs.
  */
 class GasStateWithTransport implements GasStateTransport {
   readonly #model: GasTransportModel | undefined;
