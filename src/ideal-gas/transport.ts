@@ -97,8 +97,13 @@ export class ChapmanEnskogModel implements GasTransportModel {
   }
 
   lambda(T: number): number {
+    return this.lambdaFromMu(T, this.mu(T));
+  }
+
+  /** λ at T from μ at T (Pa·s), for a caller that has μ already (the mixtures). */
+  lambdaFromMu(T: number, mu: number): number {
     // λ = μ cv (1.32 + 1.77 R/cv) per kg = μ R (1.32 (cp/R − 1) + 1.77)
-    return this.mu(T) * this.thermo.R * (EUCKEN_A * (this.thermo.cpR(T) - 1) + EUCKEN_B);
+    return mu * this.thermo.R * (EUCKEN_A * (this.thermo.cpR(T) - 1) + EUCKEN_B);
   }
 
   cp(T: number): number {
@@ -182,7 +187,13 @@ export class GasMixtureTransport implements GasTransportModel {
   lambda(T: number): number {
     this.prepare(T);
     let total = 0;
-    for (let i = 0; i < this.parts.length; i++) if (this.y[i] !== 0) total += (this.y[i]! * this.parts[i]!.lambda(T)) / this.phiSum[i]!;
+    for (let i = 0; i < this.parts.length; i++) {
+      if (this.y[i] === 0) continue;
+      const part = this.parts[i]!;
+      // a Lennard-Jones part's λ from the μ prepare() just computed (the same number, one evaluation fewer)
+      const lambda = part instanceof ChapmanEnskogModel ? part.lambdaFromMu(T, this.muScratch[i]!) : part.lambda(T);
+      total += (this.y[i]! * lambda) / this.phiSum[i]!;
+    }
     return total;
   }
 
