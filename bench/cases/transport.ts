@@ -1,11 +1,14 @@
 /**
  * Benchmark cases for the transport SI cores: water viscosity and thermal conductivity at (T, ρ) with
  * and without the critical enhancement (derivative inputs precomputed, as a caller holding a state has
- * them), the IF97 helper that computes those inputs, and dilute-gas μ(T), λ(T). Each case loops over
- * a spread of states and reports per call.
+ * them), the IF97 helper that computes those inputs, dilute-gas μ(T), λ(T) (core and facade), and a
+ * gas state with and without its transport properties. Each case loops over a spread of states and
+ * reports per call.
  */
 import { type BenchCase, consume } from '../kit.js';
-import { gasTransportModel } from '../../src/ideal-gas/transport.js';
+import { idealGas } from '../../src/ideal-gas/gas.js';
+import { gasTransport, gasTransportModel, GasTransportResult } from '../../src/ideal-gas/transport.js';
+import { Quantity } from '../../src/units/quantity.js';
 import { ConductivityResult, CriticalEnhancementInputs, if97EnhancementInputs, If97InputsWork, thermalConductivity, viscosity, ViscosityResult } from '../../src/water/transport/index.js';
 
 const N = 1000;
@@ -41,6 +44,14 @@ const helperWork = new If97InputsWork();
 const gT = Float64Array.from({ length: N }, (_, i) => 250 + ((i * 37) % 1500));
 const n2 = gasTransportModel('N2')!;
 const air = gasTransportModel('air')!;
+const h2 = gasTransportModel('H2')!;
+const gasOut = new GasTransportResult();
+// the facade: quantities made once (as a caller holding them has them), the gas object built once
+const FN = 200;
+const gQ = Array.from({ length: FN }, (_, i) => Quantity.fromSI(gT[i]!, 'temperature'));
+const n2Gas = idealGas('N2');
+const airGas = idealGas('air');
+const pQ = Quantity.fromSI(101325, 'pressure');
 
 export const cases: BenchCase[] = [
   {
@@ -112,6 +123,50 @@ export const cases: BenchCase[] = [
     },
     perCall: N,
     targetNs: 50,
+  },
+  {
+    name: 'transport: gas μ(T), H2 (Chapman-Enskog)',
+    fn: () => {
+      for (let i = 0; i < N; i++) consume(h2.mu(gT[i]!));
+    },
+    perCall: N,
+    targetNs: 50,
+  },
+  {
+    name: 'transport: gas μ, λ, cp, Pr of N2 (gasTransport: range-checked SI core)',
+    fn: () => {
+      for (let i = 0; i < N; i++) {
+        gasTransport(n2, gT[i]!, gasOut);
+        consume(gasOut.Pr);
+      }
+    },
+    perCall: N,
+  },
+  {
+    name: 'transport: idealGas("N2").viscosity(T) facade (Quantity in, Quantity out)',
+    fn: () => {
+      for (let i = 0; i < FN; i++) consume(n2Gas.viscosity(gQ[i]!).si);
+    },
+    perCall: FN,
+  },
+  {
+    name: 'transport: idealGas("air").state({ T, p }) without transport (baseline)',
+    fn: () => {
+      for (let i = 0; i < FN; i++) consume(airGas.state({ T: gQ[i]!, p: pQ }).h.si);
+    },
+    perCall: FN,
+  },
+  {
+    name: 'transport: idealGas("air").state({ T, p }) with mu, lambda, Pr read',
+    fn: () => {
+      for (let i = 0; i < FN; i++) {
+        const st = airGas.state({ T: gQ[i]!, p: pQ });
+        consume(st.h.si + st.mu!.si + st.lambda!.si + st.Pr!);
+      }
+    },
+    perCall: FN,
+    baseline: 'transport: idealGas("air").state({ T, p }) without transport (baseline)',
+    baselinePerCall: FN,
   },
   {
     name: 'transport: gas μ(T), air (Wilke, 4 components)',

@@ -4,8 +4,10 @@
  *
  * @module
  */
+import { formatNumber } from '../errors.js';
 import { fluid } from '../fluids/index.js';
-import { idealGas } from '../ideal-gas/gas.js';
+import { idealGas, type GasStateResult, type IdealGas } from '../ideal-gas/gas.js';
+import { gasTransportIds } from '../ideal-gas/transport.js';
 import { incompressible } from '../incompressible/index.js';
 import type { Dimension } from '../units/dimensions.js';
 import { Quantity } from '../units/quantity.js';
@@ -100,7 +102,7 @@ export function saturationCommand(args: Args): Row[] {
   return rows;
 }
 
-/** `heatstate gas <species> T=… [p=…] | h=… p=… | s=… p=…`. */
+/** `heatstate gas <species> T=… [p=…] | h=… p=… | s=… p=… [--transport]`. */
 export function gasCommand(args: Args): Row[] {
   const species = args.positional.slice(1);
   if (species.length === 0) throw new UsageError('heatstate gas needs a species, for example: heatstate gas N2 T="500 K"');
@@ -111,10 +113,29 @@ export function gasCommand(args: Args): Row[] {
   const head: Row[] = [['gas', gas.name], ['M', gas.M], ['R', gas.R]];
   if (set === 'T') {
     const T = inputs.T as `${number} K`;
-    return [...head, ['T', Quantity.fromSI(readValue('T', T, 'temperature'), 'temperature')], ['cp', gas.cp(T)], ['cv', gas.cv(T)], ['k', gas.k(T)], ['h', gas.h(T)], ['h - h(298.15 K)', gas.hSensible(T)], ['u', gas.u(T)], ['s° (at 100 kPa)', gas.sStandard(T)]];
+    const rows: Row[] = [...head, ['T', Quantity.fromSI(readValue('T', T, 'temperature'), 'temperature')], ['cp', gas.cp(T)], ['cv', gas.cv(T)], ['k', gas.k(T)], ['h', gas.h(T)], ['h - h(298.15 K)', gas.hSensible(T)], ['u', gas.u(T)], ['s° (at 100 kPa)', gas.sStandard(T)]];
+    if (args.transport) rows.push(...gasTransportRows(gas, readValue('T', T, 'temperature')));
+    return rows;
   }
   const st = gas.state(inputs as unknown as Parameters<typeof gas.state>[0]);
-  return [...head, ['T', st.T], ['p', st.p], ['v', st.v], ['rho', st.rho], ['cp', st.cp], ['cv', st.cv], ['k', st.k], ['h', st.h], ['h - h(298.15 K)', st.hSensible], ['u', st.u], ['s', st.s]];
+  const rows: Row[] = [...head, ['T', st.T], ['p', st.p], ['v', st.v], ['rho', st.rho], ['cp', st.cp], ['cv', st.cv], ['k', st.k], ['h', st.h], ['h - h(298.15 K)', st.hSensible], ['u', st.u], ['s', st.s]];
+  if (args.transport) rows.push(...gasTransportRows(gas, st.T.si, st));
+  return rows;
+}
+
+/**
+ * The dilute-gas transport rows of `heatstate gas … --transport`: μ, λ and Pr (with ν and α for a
+ * state), from the ideal-gas facade (dilute gas: no pressure dependence in μ and λ); a `transport` row
+ * says why they are not defined when the gas has no transport data or T lies outside it.
+ */
+function gasTransportRows(gas: IdealGas, T: number, st?: GasStateResult): Row[] {
+  const core = gas.transportCore;
+  const inRange = core !== undefined && T >= core.Tmin && T <= core.Tmax;
+  const at = Quantity.fromSI(T, 'temperature');
+  const rows = st ? transportRows(st) : transportRows(inRange ? { mu: gas.viscosity(at), lambda: gas.thermalConductivity(at), Pr: gas.prandtl(at) } : {});
+  if (core === undefined) rows.push(['transport', `no dilute-gas transport data for ${gas.name} (gases with data: ${gasTransportIds().join(', ')})`]);
+  else if (!inRange) rows.push(['transport', `outside the dilute-gas transport data for ${gas.name} (${formatNumber(core.Tmin)} K to ${formatNumber(core.Tmax)} K)`]);
+  return rows;
 }
 
 /** `heatstate liquid <substance> T1=… T2=… [p1=…] [p2=…]`. */

@@ -17,8 +17,9 @@ usage:
   heatstate sat T=<value> | p=<value> [--transport]
         saturated liquid (f) and vapour (g); --transport adds both phases' mu, lambda, nu,
         alpha, Pr and the surface tension sigma (IAPWS R1-76(2014))
-  heatstate gas <species> T=<value> [p=<value>] | h=<value> p=<value> | s=<value> p=<value>
-        ideal-gas properties (NASA polynomials); one species
+  heatstate gas <species> T=<value> [p=<value>] | h=<value> p=<value> | s=<value> p=<value> [--transport]
+        ideal-gas properties (NASA polynomials); one species; --transport adds the dilute-gas
+        mu, lambda and Pr (with nu and alpha when p is given) where the species has transport data
   heatstate liquid <substance> T1=<value> T2=<value> [p1=<value>] [p2=<value>]
         incompressible mean c, Δu, Δh and Δs between two states (p1, p2 default 1 atm)
   heatstate air <two of T, Twb, Tdp, RH, W, h> [p=<value> | altitude=<value>]
@@ -43,7 +44,7 @@ options:
   --units si|us           units of the output (default si: K, kPa, kJ/kg, g/kg, mPa·s, kW, …;
                           us: °F, psia, Btu/lbm, gr/lbm, lbm/(ft·h), Btu/h, …)
   --json                  JSON instead of a table
-  --transport             transport properties (water and sat)
+  --transport             transport properties (water, sat and gas)
   --help                  this text
 
 Values are decimal numbers with units (T=300K, p="1 atm"), quoted when they contain spaces;
@@ -66,6 +67,7 @@ examples:
   heatstate sat p="1 MPa" --transport
   heatstate gas N2 T="800 K" p="5 bar"
   heatstate gas air h="500 kJ/kg" p="1 atm"
+  heatstate gas N2 T=80degF p=14.7psia --transport --units us
   heatstate liquid copper T1="20 °C" T2="120 °C"
   heatstate liquid water T1=25degC T2=25degC p1="1 atm" p2="500 psia" --units us
   heatstate air T="30 °C" RH=50%

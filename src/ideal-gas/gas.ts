@@ -18,6 +18,7 @@ import { applyOptions, fromDefinition, type Built } from './definition.js';
 import { constantCpFrom, MixtureModel, mixNasa, type IdealGasModel } from './model.js';
 import { speciesModel } from './species.js';
 import { cpOf, cvOf, hOf, hSensibleOf, kOf, sOf, sStandardOf, uOf } from './formulas.js';
+import { mixtureTransport, noTransport, speciesTransport, transportMethods, withGasTransport, type GasStateTransport, type GasTransportMethods, type TransportSource } from './transport-facade.js';
 
 /** Mass basis (per kg, the default) or molar basis (per mol). */
 export type Basis = 'mass' | 'molar';
@@ -88,8 +89,8 @@ export interface GasInputDimensions<B extends Basis = 'mass'> {
 /** A state for an energy difference: a temperature, `{ T }`, or any {@link GasPair}. */
 export type GasEnergyState<B extends Basis = 'mass'> = LooseQuantity<'temperature'> | { readonly T: LooseQuantity<'temperature'> } | GasPair<B>;
 
-/** A state of an ideal gas as `gas.state` returns it: every property as a quantity. */
-export interface GasStateResult<B extends Basis = 'mass'> {
+/** A state of an ideal gas as `gas.state` returns it: every property as a quantity; transport (`mu`, `lambda`, `nu`, `alpha`, `Pr`) on first access. */
+export interface GasStateResult<B extends Basis = 'mass'> extends GasStateTransport {
   readonly T: Quantity<'temperature'>;
   readonly p: Quantity<'pressure'>;
   /** Specific volume RT/p (per kg, on either basis). */
@@ -149,7 +150,7 @@ export type IdealGasDefinition =
  * - `hSensible(T)` = h(T) − h(298.15 K): the sensible enthalpy, zero at 298.15 K for every gas.
  * - Differences (`deltaH`, `deltaU`) are the same either way; for a non-reacting process use them.
  */
-export interface IdealGas<B extends Basis = 'mass'> {
+export interface IdealGas<B extends Basis = 'mass'> extends GasTransportMethods {
   /** Name as catalogued or defined. */
   readonly name: string;
   /** Formula, when there is one. */
@@ -212,7 +213,7 @@ export interface IdealGas<B extends Basis = 'mass'> {
 const GAS_PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['h', 'p'], ['s', 'p']];
 const ENERGY_PAIRS: readonly (readonly string[])[] = [['T'], ...GAS_PAIRS];
 
-function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): IdealGas<B> {
+function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean, transport: TransportSource): IdealGas<B> {
   const core = built.core;
   const molar = basis === 'molar';
   const scale = molar ? MOLAR_GAS_CONSTANT : core.R; // J/(mol·K) or J/(kg·K) per unit of cpR
@@ -278,6 +279,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     extrapolate,
     solver,
     bounds,
+    ...transportMethods(transport, core, built.name),
     cp: single(cpOf, hc, 'cp'),
     cv: single(cvOf, hc, 'cv'),
     k: (T) => kOf(core, temperature(T)),
@@ -293,7 +295,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     state: (pair) => {
       const [T, p] = resolve(pair, '', GAS_PAIRS);
       const flag = outside(T);
-      return {
+      return withGasTransport({
         T: resultQuantity(T, 'temperature', 'T', flag),
         p: resultQuantity(p, 'pressure', 'p'),
         v: resultQuantity((core.R * T) / p, 'specificVolume', 'v', flag),
@@ -306,7 +308,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
         u: result(uOf(core, scale, T), en, 'u', T),
         s: result(sOf(core, scale, T, p), sd, 's', T),
         extrapolated: flag,
-      };
+      }, transport.model, core, T, p / (core.R * T));
     },
     deltaH: (state1, state2) => {
       const [a] = resolve(state1, 'state1.', ENERGY_PAIRS);
@@ -325,7 +327,7 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
     },
     withConstantCp: (referenceT) => {
       const T0 = referenceT === undefined ? REFERENCE_TEMPERATURE_K : temperature(referenceT, 'referenceT');
-      return wrap({ ...built, core: constantCpFrom(core, T0), model: 'constant-cp' }, basis, extrapolate);
+      return wrap({ ...built, core: constantCpFrom(core, T0), model: 'constant-cp' }, basis, extrapolate, transport);
     },
   };
   return gas;
@@ -341,7 +343,8 @@ function wrap<B extends Basis>(built: Built, basis: B, extrapolate: boolean): Id
  *
  * Species: N2, O2, Ar, He, Ne, H2, CO, CO2, H2O, CH4, C2H6, C3H8, n-C4H10, C2H4, C2H2, NH3, NO, NO2,
  * N2O, SO2, H2S (to 1000 K), O3, OH, H, O, N, and dry air as one pseudo-species (`"air"`);
- * see {@link dryAir} for air as a defined mixture.
+ * see {@link dryAir} for air as a defined mixture. Dilute-gas transport (`viscosity`, `thermalConductivity`,
+ * `prandtl`, and `mu`, `lambda`, `nu`, `alpha`, `Pr` on states) for the species in data/ideal-gas/transport.json.
  *
  * @throws {@link UnknownNameError} unknown species, with the closest names
  * @throws {@link OutOfRangeError} temperatures outside the data (unless `extrapolate`), p ≤ 0
@@ -367,7 +370,8 @@ export function idealGas(nameOrDefinition: string | IdealGasDefinition, options?
   } else {
     built = fromDefinition(nameOrDefinition);
   }
-  return wrap(applyOptions(built, o), o.basis ?? 'mass', o.extrapolate === true);
+  const transport = typeof nameOrDefinition === 'string' ? speciesTransport(built.name) : noTransport(built.name);
+  return wrap(applyOptions(built, o), o.basis ?? 'mass', o.extrapolate === true, transport);
 }
 
 const GAS_OPTIONS = ['basis', 'model', 'referenceT', 'cp', 'extrapolate'] as const;
@@ -469,7 +473,7 @@ export function mixture(composition: Composition, options?: MixtureOptions): Ide
   const ids = names.map((n) => speciesModel(n).record.id);
   const summary = `ideal mixture of ${ids.join(', ')}`;
   const built: Built = { name, formula: undefined, source: { title: summary, basis: 'computed', uncertainty: 'estimate: that of its components (ideal mixing adds none)', summary }, core, model: 'polynomial' };
-  return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true);
+  return wrap(applyOptions(built, options), options?.basis ?? 'mass', options?.extrapolate === true, mixtureTransport(ids, y));
 }
 
 function zip(names: string[], values: number[]): [string, number][] {

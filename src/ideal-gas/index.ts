@@ -6,6 +6,9 @@
  */
 export { idealGas, mixture, dryAir, DRY_AIR_MOLE_FRACTIONS, moleToMassFractions, massToMoleFractions } from './gas.js';
 export type { IdealGas, IdealGasOptions, IdealGasDefinition, MixtureOptions, Composition, GasState, GasPair, GasEnergyState, GasStateResult, GasInputDimensions, GasSource, Basis, HeatCapacityDimension, EnergyDimension, EntropyDimension } from './gas.js';
+export type { GasTransportMethods, GasStateTransport } from './transport-facade.js';
+export { gasTransportModel, gasTransportIds, gasTransport, GasTransportResult, ChapmanEnskogModel, GasMixtureTransport, collisionIntegral22 } from './transport.js';
+export type { GasTransportModel } from './transport.js';
 export { idealGasBatch, IDEAL_GAS_BATCH_STATUS } from './batch.js';
 export type { IdealGasBatchProperty } from './batch.js';
 export { isentropicEnd, compressor, turbine, polytropic, constantCpDeviation } from './processes.js';

@@ -19,7 +19,8 @@
  *
  * @module
  */
-import data from '../../data/ideal-gas/transport.json';
+// named imports: a bundler keeps only these parts of the data file (not its source and finding texts)
+import { collisionIntegral as CI, conductivity, mixtures, range, species as speciesData } from '../../data/ideal-gas/transport.json';
 import { AVOGADRO_PER_MOL, BOLTZMANN_J_PER_K } from '../chem/constants.js';
 import { Status, type StatusCode } from '../core/status.js';
 import type { IdealGasModel } from './model.js';
@@ -40,16 +41,15 @@ export interface GasTransportModel {
   cp(T: number): number;
 }
 
-const CI = data.methods.collisionIntegral;
 const A = CI.A;
 const B = CI.B;
 const C = CI.C;
 const D = CI.D;
 const E = CI.E;
 const F = CI.F;
-const EUCKEN_A = data.methods.conductivity.a;
-const EUCKEN_B = data.methods.conductivity.b;
-const T_CAP = data.range.Tmax;
+const EUCKEN_A = conductivity.a;
+const EUCKEN_B = conductivity.b;
+const T_CAP = range.Tmax;
 
 /**
  * The collision integral Ω(2,2)*(T*) of the Lennard-Jones (12-6) potential, Neufeld, Janzen & Aziz (1972).
@@ -97,8 +97,13 @@ export class ChapmanEnskogModel implements GasTransportModel {
   }
 
   lambda(T: number): number {
+    return this.lambdaFromMu(T, this.mu(T));
+  }
+
+  /** λ at T from μ at T (Pa·s), for a caller that has μ already (the mixtures). */
+  lambdaFromMu(T: number, mu: number): number {
     // λ = μ cv (1.32 + 1.77 R/cv) per kg = μ R (1.32 (cp/R − 1) + 1.77)
-    return this.mu(T) * this.thermo.R * (EUCKEN_A * (this.thermo.cpR(T) - 1) + EUCKEN_B);
+    return mu * this.thermo.R * (EUCKEN_A * (this.thermo.cpR(T) - 1) + EUCKEN_B);
   }
 
   cp(T: number): number {
@@ -182,7 +187,13 @@ export class GasMixtureTransport implements GasTransportModel {
   lambda(T: number): number {
     this.prepare(T);
     let total = 0;
-    for (let i = 0; i < this.parts.length; i++) if (this.y[i] !== 0) total += (this.y[i]! * this.parts[i]!.lambda(T)) / this.phiSum[i]!;
+    for (let i = 0; i < this.parts.length; i++) {
+      if (this.y[i] === 0) continue;
+      const part = this.parts[i]!;
+      // a Lennard-Jones part's λ from the μ prepare() just computed (the same number, one evaluation fewer)
+      const lambda = part instanceof ChapmanEnskogModel ? part.lambdaFromMu(T, this.muScratch[i]!) : part.lambda(T);
+      total += (this.y[i]! * lambda) / this.phiSum[i]!;
+    }
     return total;
   }
 
@@ -196,8 +207,9 @@ export class GasMixtureTransport implements GasTransportModel {
 const catalogue = new Map<string, GasTransportModel>();
 
 /**
- * The dilute-gas transport model of a catalogued gas: N2, O2, Ar, CO2, He, CH4 (Chapman-Enskog) and
- * `air` (their Wilke / Mason-Saxena mixture); `undefined` for others. Built on first use, then shared
+ * The dilute-gas transport model of a catalogued gas: N2, O2, Ar, CO2, He, CH4, H2, CO, NO, N2O, C2H6,
+ * C3H8, C2H4, n-C4H10 (Chapman-Enskog) and `air` (the Wilke / Mason-Saxena mixture of N2, O2, Ar, CO2);
+ * `undefined` for others (the data file's finding says why each was left out). Built on first use, then shared
  * (the mixture's scratch makes `air` one instance per thread of use).
  * @example
  * ```ts
@@ -209,13 +221,13 @@ const catalogue = new Map<string, GasTransportModel>();
 export function gasTransportModel(id: string): GasTransportModel | undefined {
   const known = catalogue.get(id);
   if (known) return known;
-  const species = (data.species as Record<string, { sigma: number; epsilonOverK: number } | undefined>)[id];
+  const species = (speciesData as Record<string, { sigma: number; epsilonOverK: number } | undefined>)[id];
   if (species) {
     const model = new ChapmanEnskogModel(speciesModel(id).model, species.sigma * 1e-10, species.epsilonOverK);
     catalogue.set(id, model);
     return model;
   }
-  const mixture = (data.mixtures as Record<string, Record<string, number | string> | undefined>)[id];
+  const mixture = (mixtures as Record<string, Record<string, number | string> | undefined>)[id];
   if (mixture) {
     const ids = Object.keys(mixture).filter((k) => typeof mixture[k] === 'number');
     const model = new GasMixtureTransport(ids.map((k) => gasTransportModel(k)!), ids.map((k) => mixture[k] as number));
@@ -229,11 +241,11 @@ export function gasTransportModel(id: string): GasTransportModel | undefined {
  * The identifiers {@link gasTransportModel} knows.
  * @example
  * ```ts
- * gasTransportIds();   //=> ['N2', 'O2', 'Ar', 'CO2', 'He', 'CH4', 'air']
+ * gasTransportIds();   //=> ['N2', 'O2', 'Ar', 'CO2', 'He', 'CH4', 'H2', 'CO', 'NO', 'N2O', 'C2H6', 'C3H8', 'C2H4', 'n-C4H10', 'air']
  * ```
  */
 export function gasTransportIds(): string[] {
-  return [...Object.keys(data.species), ...Object.keys(data.mixtures)];
+  return [...Object.keys(speciesData), ...Object.keys(mixtures)];
 }
 
 /** Transport properties of a dilute gas at one temperature, filled by {@link gasTransport}. */

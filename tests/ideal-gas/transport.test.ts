@@ -159,7 +159,7 @@ describe('values quoted in the doc comments', () => {
     expectClose(collisionIntegral22(4.2), 0.9587, { rel: 5e-5 });
     expectClose(gasTransportModel('N2')!.mu(300), 1.7699e-5, { rel: 5e-5 });
     expectClose(gasTransportModel('air')!.lambda(300), 0.026713, { rel: 5e-5 });
-    expect(gasTransportIds()).toEqual(['N2', 'O2', 'Ar', 'CO2', 'He', 'CH4', 'air']);
+    expect(gasTransportIds()).toEqual(['N2', 'O2', 'Ar', 'CO2', 'He', 'CH4', 'H2', 'CO', 'NO', 'N2O', 'C2H6', 'C3H8', 'C2H4', 'n-C4H10', 'air']);
     expect(gasTransport(gasTransportModel('air')!, 300, out)).toBe(0);
     expectClose(out.mu, 1.8351e-5, { rel: 5e-5 });
     expectClose(out.Pr, 0.69, { abs: 5e-4 });
