@@ -34,7 +34,7 @@ describe('consumer bundles', () => {
     // tables), four new dimensions, the plant and HVAC units and the linear-time parser with its limits
     expect(kB).toBeLessThan(13);
   });
-  it('heatstate/units + heatstate/ideal-gas: at most 27 kB gzipped, no decimal.js, zod or incompressible data', async () => {
+  it('heatstate/units + heatstate/ideal-gas: at most 29 kB gzipped, no decimal.js, zod or incompressible data', async () => {
     const js = await bundle(`import { quantity } from 'heatstate/units'; import { idealGas, mixture, compressor } from 'heatstate/ideal-gas';
       console.log(quantity('1 psia').in('kPa'), idealGas('N2').cp('300 K'), mixture({ N2: 0.79, O2: 0.21 }), compressor);`);
     expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
@@ -42,8 +42,9 @@ describe('consumer bundles', () => {
     expect(js).not.toContain('stainless steel');
     const kB = gzipSync(js).length / 1024;
     // 25.9 kB measured: from 15 kB with the units above and the species data (20 species now fitted to
-    // NIST-JANAF in the 9-constant form, 200 to 6000 K, with their provenance)
-    expect(kB).toBeLessThan(27);
+    // NIST-JANAF in the 9-constant form, 200 to 6000 K, with their provenance); 27.9 kB with the
+    // dilute-gas transport facade every gas now carries (Lennard-Jones data, collision integral, mixing)
+    expect(kB).toBeLessThan(29);
   });
   it('heatstate/incompressible carries no decimal.js', async () => {
     const js = await bundle(`import { incompressible } from 'heatstate/incompressible'; console.log(incompressible('water'));`);

@@ -339,7 +339,7 @@ const CATALOGUE: Record<string, readonly Case[]> = {
     [['water', 'T=300K', 'p=1MPa', '--json=yes'], 2, '--json=yes'],
     [['water', 'T=300K', 'p=1MPa', '--units', 'si', '--units', 'us'], 2, '--units is given twice'],
     [['air', 'T=30degC', 'RH=0.5', '--model', 'fancy'], 2, '"--model"'],
-    [['gas', 'N2', 'T=300K', '--transport'], 2, '--transport'],
+    [['liquid', 'copper', 'T1=20degC', 'T2=30degC', '--transport'], 2, '--transport'],
     [['water', 'T=300K', 'p=1MPa', '--model', 'ideal'], 2, '--model'],
     [['water', 'T=300K', 'p=1MPa', '-x'], 2, '"-x"'],
   ],

@@ -3,8 +3,8 @@
  * parameters (Svehla 1962, via Poling, Prausnitz & O'Connell 2001 Appendix B, recalled), modified
  * Eucken conductivity, Wilke / Mason-Saxena mixing.
  *
- * Handbook values at 300 K and 0.101325 MPa: NIST Chemistry WebBook, Thermophysical Properties of
- * Fluid Systems (E. W. Lemmon, M. O. McLinden, D. G. Friend), from memory. Tolerances are the stated
+ * Handbook values at 300 K and 0.101325 MPa: the CRC Handbook of Chemistry and Physics tables
+ * "Viscosity of gases" and "Thermal conductivity of gases" (dilute-gas values), from memory. Tolerances are the stated
  * uncertainties of the methods (data/ideal-gas/transport.json): viscosity 2 %; conductivity 2 % for
  * monatomic gases (Eucken's 15/4 is exact for them, so λ inherits μ's uncertainty) and 10 % for
  * polyatomic gases (modified Eucken).
@@ -33,7 +33,7 @@ const MU_TOL = 0.02;
 const LAMBDA_MONATOMIC_TOL = 0.02;
 const LAMBDA_POLYATOMIC_TOL = 0.1;
 
-describe('handbook values at 300 K, 1 atm (NIST WebBook, from memory)', () => {
+describe('handbook values at 300 K, 1 atm (CRC Handbook gas tables, from memory)', () => {
   // [id, μ µPa·s, λ mW/(m·K), monatomic]
   it.each([
     ['air', 18.53, 26.24, false], // the Wilke / Mason-Saxena mixture of N2, O2, Ar, CO2
