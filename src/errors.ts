@@ -18,6 +18,7 @@ export type ErrorCode =
   | 'result.not-finite'
   | 'range.outside'
   | 'name.unknown'
+  | 'property.unavailable'
   | 'formula.invalid'
   | 'definition.invalid'
   | 'solve.no-convergence'
@@ -203,6 +204,32 @@ export class UnknownNameError extends HeatstateError {
     this.given = given;
     this.catalogue = catalogue;
     this.suggestions = suggestions;
+  }
+}
+
+/**
+ * A property that a substance's model or data do not provide (`property.unavailable`): no viscosity
+ * data for ethanol, no dilute-gas transport data for a user-defined gas. The substance and the
+ * property exist; the data for this pair do not.
+ */
+export class UnavailablePropertyError extends HeatstateError {
+  static override readonly kind: string = 'UnavailablePropertyError';
+  /** The substance, species or mixture as named by the caller or the catalogue. */
+  readonly substance: string;
+  /** The property asked for, in words (`viscosity`, `thermal conductivity`, `transport properties`). */
+  readonly property: string;
+  /** Why it is not available. */
+  readonly reason: string;
+  /** The substances that do carry this property, when the catalogue has such a list (may be empty). */
+  readonly available: readonly string[];
+
+  constructor(substance: string, property: string, reason: string, available: readonly string[] = []) {
+    const list = available.length > 0 ? `; ${property} data exist for ${available.join(', ')}` : '';
+    super('property.unavailable', `${substance} has no ${property} data: ${reason}${list}`);
+    this.substance = substance;
+    this.property = property;
+    this.reason = reason;
+    this.available = available;
   }
 }
 

@@ -27,7 +27,7 @@ export {
 export { fluidBatch, type FluidBatchInputs, type FluidBatchProperty } from './batch.js';
 export { saturationTable, type FluidSaturationColumn, type SaturationTableOptions } from './tables.js';
 export type { FluidSource } from './definition.js';
-export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, UnknownNameError, ResultError } from '../errors.js';
+export { HeatstateError, InvalidInputError, OutOfRangeError, ConvergenceError, DimensionError, UnitError, UnknownNameError, UnavailablePropertyError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
 export { safe } from '../core/safe.js';
 export type { SafeResult } from '../core/safe.js';

@@ -24,4 +24,4 @@ export { NasaPolynomialModel, ConstantCpModel, MixtureModel, constantCpFrom, mix
 export type { IdealGasModel } from './model.js';
 export { speciesNames, speciesRecords, findSpecies } from './species.js';
 export type { SpeciesRecord } from './species.js';
-export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, UnavailablePropertyError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';

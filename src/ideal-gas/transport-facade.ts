@@ -6,7 +6,7 @@
  * Mason-Saxena mixing; sources and checks in data/ideal-gas/transport.json).
  *
  * Low-density limit: no pressure dependence. Gases without transport data (H2O, NH3, SO2, …, and
- * user-defined gases) throw {@link UnknownNameError} from the methods and give `undefined` on states.
+ * user-defined gases) throw {@link UnavailablePropertyError} from the methods and give `undefined` on states.
  *
  * @module
  */
@@ -14,7 +14,7 @@ import { CallUnits } from '../core/call-units.js';
 import { readTemperature, type Bounds } from '../core/read.js';
 import { optionalQuantity, resultQuantity } from '../core/result.js';
 // OutOfRangeError is named in the doc comments' links
-import { UnknownNameError, type OutOfRangeError } from '../errors.js';
+import { UnavailablePropertyError, type OutOfRangeError } from '../errors.js';
 import type { LooseQuantity } from '../core/inputs.js';
 import type { Quantity, QuantityInput } from '../units/quantity.js';
 import type { IdealGasModel } from './model.js';
@@ -27,13 +27,13 @@ export interface GasTransportMethods {
    * mixtures by Wilke's rule). Independent of pressure: valid where the gas is ideal.
    * Range: the species' transport data, at most 200 K to 2000 K (He to 1022 K); uncertainty about 2 %
    * near room temperature, about 3 % at 1000 K.
-   * @throws {@link UnknownNameError} a gas (or mixture component) without transport data, listing those that have it
+   * @throws {@link UnavailablePropertyError} a gas (or mixture component) without transport data, listing those that have it
    * @throws {@link OutOfRangeError} T outside the transport data's range, in the caller's unit
    * @example
    * ```ts
    * idealGas('N2').viscosity('300 K').in('µPa·s');     //=> 17.699 (Incropera Table A.4: 17.82, from memory)
    * idealGas('air').viscosity('80 °F').in('lbm/(ft·h)'); //=> 0.04437...
-   * idealGas('H2O').viscosity('400 K');   // throws UnknownNameError: "H2O" is not in the dilute-gas transport catalogue
+   * idealGas('H2O').viscosity('400 K');   // throws UnavailablePropertyError: H2O has no dilute-gas transport data
    * idealGas('He').viscosity('1500 °F');  // throws OutOfRangeError: T = 1500 °F (1088.7056 K) is above the upper limit of the dilute-gas transport data for He (1379.93 °F (1022 K))
    * ```
    */
@@ -95,11 +95,13 @@ export interface TransportSource {
   readonly model: GasTransportModel | undefined;
   /** The gas or component without transport data (named in the error). */
   readonly missing: string;
+  /** Why it has none (for the error). */
+  readonly reason?: string;
 }
 
 /** The transport of a catalogued species, by its id. */
 export function speciesTransport(id: string): TransportSource {
-  return { model: gasTransportModel(id), missing: id };
+  return { model: gasTransportModel(id), missing: id, reason: 'not in the dilute-gas transport catalogue (data/ideal-gas/transport.json says why for the species left out)' };
 }
 
 /** The transport of a mixture: Wilke / Mason-Saxena over its components, when every one has data. */
@@ -107,7 +109,7 @@ export function mixtureTransport(ids: readonly string[], moleFractions: readonly
   const models: GasTransportModel[] = [];
   for (const id of ids) {
     const m = gasTransportModel(id);
-    if (m === undefined) return { model: undefined, missing: id };
+    if (m === undefined) return { model: undefined, missing: id, reason: `the mixture's component ${id} is not in the dilute-gas transport catalogue` };
     models.push(m);
   }
   return { model: new GasMixtureTransport(models, moleFractions), missing: '' };
@@ -115,7 +117,7 @@ export function mixtureTransport(ids: readonly string[], moleFractions: readonly
 
 /** No transport (a user-defined gas). */
 export function noTransport(name: string): TransportSource {
-  return { model: undefined, missing: name };
+  return { model: undefined, missing: name, reason: 'a user-defined gas carries no transport data' };
 }
 
 /** The methods of {@link GasTransportMethods} for a gas of thermodynamic core `core` (mass cp = cpR·R). */
@@ -123,7 +125,7 @@ export function transportMethods(source: TransportSource, core: IdealGasModel, n
   const model = source.model;
   const bounds: Bounds | undefined = model && { min: model.Tmin, max: model.Tmax, scope: `the dilute-gas transport data for ${name}` };
   const read = (input: unknown): number => {
-    if (model === undefined) throw new UnknownNameError(source.missing, 'dilute-gas transport', gasTransportIds());
+    if (model === undefined) throw new UnavailablePropertyError(source.missing, 'dilute-gas transport', source.reason ?? 'no transport data', gasTransportIds());
     return readTemperature(input, 'T', bounds, new CallUnits());
   };
   return {

@@ -64,7 +64,7 @@ export function incompressible(nameOrDefinition: string | IncompressibleDefiniti
   const compiled = typeof nameOrDefinition === 'string' ? lookupIncompressible(nameOrDefinition, lookup) : compileDefinition(nameOrDefinition);
   return substanceFacade(compiled, readFlag(extrapolate, 'options.extrapolate'));
 }
-export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, UnavailablePropertyError, FormulaError, DefinitionError, ConvergenceError, ResultError } from '../errors.js';
 export { Status } from '../core/status.js';
 export { safe } from '../core/safe.js';
 export type { SafeResult } from '../core/safe.js';

@@ -10,7 +10,7 @@ import { STANDARD_ATMOSPHERE_PA } from '../chem/constants.js';
 import { CallUnits } from '../core/call-units.js';
 import { ABSOLUTE_TEMPERATURE, readAbsolutePressure, readPair, readTemperature, type Bounds } from '../core/read.js';
 import { resultQuantity } from '../core/result.js';
-import { DefinitionError } from '../errors.js';
+import { UnavailablePropertyError } from '../errors.js';
 import { Quantity, type QuantityInput, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, CheckedState, LooseQuantity } from '../core/inputs.js';
 import type { CompiledSubstance, SubstanceSource } from './compile.js';
@@ -102,13 +102,13 @@ export interface IncompressibleSubstance {
    * Dynamic viscosity μ(T) of a liquid, from the data named in `transportSource.viscosity` (liquid
    * water: IAPWS R12-08 at the IF97 saturated-liquid density).
    * @throws {@link OutOfRangeError} outside the viscosity data's range (in the caller's units)
-   * @throws {@link DefinitionError} for a solid, or a liquid whose viscosity the data leave out, naming why
+   * @throws {@link UnavailablePropertyError} for a solid, or a liquid whose viscosity the data leave out, naming why
    * @example
    * ```ts
    * incompressible('water').viscosity('25 °C').in('mPa·s');   //=> 0.8900 (IAPWS R12-08)
    * incompressible('engine oil').viscosity('300 K').in('Pa·s');   //=> 0.486 (a tabulated node)
    * incompressible('engine oil').viscosity('500 K');   // throws OutOfRangeError: T = 500 K is above the upper limit of the data for engine oil (430 K)
-   * incompressible('ethanol').viscosity('20 °C');   // throws DefinitionError: ethanol has no viscosity data
+   * incompressible('ethanol').viscosity('20 °C');   // throws UnavailablePropertyError: ethanol has no viscosity data
    * ```
    */
   viscosity<I extends LooseQuantity<'temperature'>>(T: QuantityInput<'temperature', I>): Quantity<'dynamicViscosity'>;
@@ -116,7 +116,7 @@ export interface IncompressibleSubstance {
    * Thermal conductivity λ(T), from the data named in `transportSource.thermalConductivity` (liquid
    * water: IAPWS R15-11 at the IF97 saturated-liquid density).
    * @throws {@link OutOfRangeError} outside the conductivity data's range
-   * @throws {@link DefinitionError} where the data leave λ out, naming why
+   * @throws {@link UnavailablePropertyError} where the data leave λ out, naming why
    * @example
    * ```ts
    * incompressible('copper').thermalConductivity('300 K').in('W/(m·K)');   //=> 401
@@ -199,7 +199,7 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
     const curve = transport[key];
     const what = key === 'viscosity' ? 'viscosity' : 'thermal conductivity';
     if (curve.form === 'none' || (key === 'viscosity' && definition.state === 'solid')) {
-      throw new DefinitionError(`request: ${name} has no ${what} data`, [{ path: [key], message: definition.state === 'solid' && key === 'viscosity' ? `${name} is a solid` : curve.reason }]);
+      throw new UnavailablePropertyError(name, what, definition.state === 'solid' && key === 'viscosity' ? `${name} is a solid` : curve.reason);
     }
     const T = readTemperature(input, 'T', curveBounds(curve, what), new CallUnits());
     return [curveAt(curve, T), flagged(curve, T)] as const;

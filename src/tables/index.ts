@@ -17,4 +17,4 @@ export type { InterpolationMethod, InverseResult, LookupOptions, LookupResult } 
 export { tableFromJSON, gridFromJSON, tableFromCSV } from './load.js';
 export type { CsvOptions } from './load.js';
 export type { TableData, GridData, TableSource, InterpolationErrors } from './schema.js';
-export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';
+export { HeatstateError, UnitError, DimensionError, InvalidInputError, OutOfRangeError, UnknownNameError, UnavailablePropertyError, FormulaError, DefinitionError, ConvergenceError } from '../errors.js';

@@ -6,7 +6,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { molarMass } from '../../src/chem/index.js';
-import { DimensionError, InvalidInputError, OutOfRangeError, UnitError, UnknownNameError } from '../../src/errors.js';
+import { DimensionError, InvalidInputError, OutOfRangeError, UnavailablePropertyError, UnitError } from '../../src/errors.js';
 import { dryAir, idealGas, mixture, type IdealGas } from '../../src/ideal-gas/gas.js';
 import { GasMixtureTransport, gasTransportIds, gasTransportModel } from '../../src/ideal-gas/transport.js';
 import { expectClose } from '../helpers/tolerance.js';
@@ -126,7 +126,7 @@ describe('identities on states: Pr = μ cp/λ, ν = μ/ρ, α = λ/(ρ cp)', () 
 });
 
 describe('typed errors', () => {
-  it('a gas without transport data: UnknownNameError naming it and listing the gases that have data', () => {
+  it('a gas without transport data: UnavailablePropertyError naming it and listing the gases that have data', () => {
     for (const call of [(g: IdealGas) => g.viscosity('300 K'), (g: IdealGas) => g.thermalConductivity('300 K'), (g: IdealGas) => g.prandtl('300 K')]) {
       let error: unknown;
       try {
@@ -134,18 +134,19 @@ describe('typed errors', () => {
       } catch (e) {
         error = e;
       }
-      expect(error).toBeInstanceOf(UnknownNameError);
-      const e = error as UnknownNameError;
-      expect(e.given).toBe('NH3');
-      expect(e.suggestions).toEqual(gasTransportIds());
-      expect(e.message).toContain('"NH3"');
-      expect(e.message).toContain('"CO2"');
-      expect(e.message).toContain('"air"');
+      expect(error).toBeInstanceOf(UnavailablePropertyError);
+      const e = error as UnavailablePropertyError;
+      expect(e.code).toBe('property.unavailable');
+      expect(e.substance).toBe('NH3');
+      expect(e.available).toEqual(gasTransportIds());
+      expect(e.message).toMatch(/^NH3 has no dilute-gas transport data: not in the dilute-gas transport catalogue/);
+      expect(e.message).toContain('CO2');
+      expect(e.message).toContain('air');
     }
   });
   it('a user-defined gas names itself; a mixture names the component without data', () => {
-    expect(() => idealGas({ name: 'octane vapour', M: molarMass('C8H18'), cp: '1.7 kJ/(kg·K)' }).viscosity('400 K')).toThrow(/"octane vapour" is not in the dilute-gas transport catalogue/);
-    expect(() => mixture({ N2: 0.72, CO2: 0.09, H2O: 0.17, O2: 0.02 }).thermalConductivity('600 K')).toThrow(/"H2O" is not in the dilute-gas transport catalogue/);
+    expect(() => idealGas({ name: 'octane vapour', M: molarMass('C8H18'), cp: '1.7 kJ/(kg·K)' }).viscosity('400 K')).toThrow(/octane vapour has no dilute-gas transport data: a user-defined gas carries no transport data/);
+    expect(() => mixture({ N2: 0.72, CO2: 0.09, H2O: 0.17, O2: 0.02 }).thermalConductivity('600 K')).toThrow(/H2O has no dilute-gas transport data: the mixture's component H2O/);
     expect(() => dryAir().withConstantCp().viscosity('300 K')).not.toThrow();
   });
   it('above the range, called in °F: the message and the data give the °F limits', () => {

@@ -5,7 +5,7 @@
  * errors for data left out.
  */
 import { describe, expect, it } from 'vitest';
-import { DefinitionError, OutOfRangeError } from '../../src/errors.js';
+import { DefinitionError, OutOfRangeError, UnavailablePropertyError } from '../../src/errors.js';
 import { incompressible, incompressibleCatalogue } from '../../src/incompressible/index.js';
 import { incompressibleDefinitionSchema } from '../../src/incompressible/schema.js';
 import { quantity } from '../../src/units/index.js';
@@ -136,14 +136,14 @@ describe('facade', () => {
     expect(x.viscosity('420 K').extrapolated).toBe(false);
     expect(x.viscosity('440 K').si).toBeLessThan(x.viscosity('430 K').si);
   });
-  it('data left out: DefinitionError naming the substance and the property; the state getters are undefined', () => {
+  it('data left out: UnavailablePropertyError naming the substance and the property; the state getters are undefined', () => {
     const check = (fn: () => unknown, pattern: RegExp) => {
-      expect(fn).toThrow(DefinitionError);
+      expect(fn).toThrow(UnavailablePropertyError);
       expect(fn).toThrow(pattern);
     };
-    check(() => incompressible('ethanol').viscosity('20 °C'), /ethanol has no viscosity data: viscosity: left out/);
+    check(() => incompressible('ethanol').viscosity('20 °C'), /ethanol has no viscosity data: left out/);
     check(() => incompressible('seawater').thermalConductivity('20 °C'), /seawater has no thermal conductivity data/);
-    check(() => incompressible('copper').viscosity('300 K'), /copper has no viscosity data: viscosity: copper is a solid/);
+    check(() => incompressible('copper').viscosity('300 K'), /copper has no viscosity data: copper is a solid/);
     const st = incompressible('methanol').state({ T: '20 °C', p: '1 atm' });
     expect([st.mu, st.lambda, st.Pr, st.nu, st.alpha]).toEqual([undefined, undefined, undefined, undefined, undefined]);
     // light fuel oil: conductivity from the recalled petroleum correlation, viscosity left out

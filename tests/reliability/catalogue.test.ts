@@ -20,7 +20,7 @@
 import { describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/run.js';
 import { molarMass, parseFormula } from '../../src/chem/index.js';
-import { DefinitionError, DimensionError, FormulaError, HeatstateError, InvalidInputError, OutOfRangeError, ResultError, UnitError, UnknownNameError } from '../../src/errors.js';
+import { DefinitionError, DimensionError, FormulaError, HeatstateError, InvalidInputError, OutOfRangeError, ResultError, UnavailablePropertyError, UnitError, UnknownNameError } from '../../src/errors.js';
 import { fluid } from '../../src/fluids/index.js';
 import { humidAir, humidAirBatch } from '../../src/humid-air/index.js';
 import { compressor, constantCpDeviation, idealGas, idealGasBatch, isentropicEnd, mixture, moleToMassFractions, polytropic, turbine } from '../../src/ideal-gas/index.js';
@@ -282,6 +282,13 @@ add('guessed', 'incompressible', [
   { label: 'both massFraction and volumeFraction', call: () => incompressible('ethylene glycol solution', { massFraction: 0.3, volumeFraction: 0.3 }), ...invalid, names: ['massFraction'] },
   { label: 'a solution without its concentration', call: () => incompressible('ethylene glycol solution'), ...invalid, names: ['massFraction'] },
   { label: 'unknown name', call: () => incompressible('unobtainium'), error: UnknownNameError, code: 'name.unknown', names: ['unobtainium'] },
+]);
+const unavailable = { error: UnavailablePropertyError, code: 'property.unavailable' } as const;
+add('unnamed', 'transport data left out', [
+  { label: 'viscosity of a solid', call: () => incompressible('copper').viscosity('300 K'), ...unavailable, names: ['copper', 'viscosity'] },
+  { label: 'a liquid whose viscosity the data leave out', call: () => incompressible('ethanol').viscosity('20 °C'), ...unavailable, names: ['ethanol', 'viscosity'] },
+  { label: 'a gas without dilute-gas transport data', call: () => idealGas('NH3').thermalConductivity('300 K'), ...unavailable, names: ['NH3'] },
+  { label: 'a mixture with a component without data', call: () => mixture({ N2: 0.8, H2O: 0.2 }).viscosity('400 K'), ...unavailable, names: ['H2O'] },
 ]);
 add('plain-error', 'substance.c', [
   { label: 'null', call: () => copper.c(any(null)), ...invalid, names: ['T'] },
