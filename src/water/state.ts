@@ -24,7 +24,8 @@ import { stateFromPX, stateFromTX } from './if97/quality.js';
 import { evaluateForward } from './if97/regions.js';
 import { P_SAT_MIN, saturationAtP, saturationAtT, saturationTemperatureOnLine } from './if97/saturation.js';
 import { stateFromTV } from './if97/tv.js';
-import { surfaceTensionAt, transportAt, waterSurfaceTension, waterThermalConductivity, waterViscosity, type TransportValues } from './transport-properties.js';
+import { SaturatedPhaseRecord, WaterStateRecord, type SaturatedPhaseFields, type WaterStateFields } from './state-record.js';
+import { surfaceTensionAt, waterSurfaceTension, waterThermalConductivity, waterViscosity } from './transport-properties.js';
 import { PHASE, WaterState } from './if97/water-state.js';
 
 /** The phase of a state. */
@@ -68,7 +69,9 @@ export interface WaterStateResult {
   readonly subcooling: Quantity<'temperatureDifference'> | undefined;
   /**
    * Dynamic viscosity (IAPWS R12-08, with its critical enhancement); `undefined` in two-phase states
-   * and outside the release's range (T above 1173.15 K, p above its limit). Computed on first access.
+   * and outside the release's range (T above 1173.15 K, p above its limit). Computed on first access,
+   * like `lambda`, `nu`, `alpha` and `Pr`: they are getters, read by name; `JSON.stringify(state)` has
+   * them, `{ ...state }` and `Object.keys(state)` do not.
    */
   readonly mu: Quantity<'dynamicViscosity'> | undefined;
   /** Thermal conductivity (IAPWS R15-11, with its critical enhancement); `undefined` as for `mu`. */
@@ -88,10 +91,17 @@ export interface SaturatedPhase {
   readonly u: Quantity<'specificEnergy'>;
   readonly h: Quantity<'specificEnergy'>;
   readonly s: Quantity<'specificEntropy'>;
-  /** Dynamic viscosity (IAPWS R12-08); `undefined` at the critical point itself. Computed on first access. */
+  /**
+   * Dynamic viscosity (IAPWS R12-08); `undefined` at the critical point itself. Computed on first
+   * access, like the other transport values (getters: read by name; JSON has them, `{ ...phase }` not).
+   */
   readonly mu: Quantity<'dynamicViscosity'> | undefined;
   /** Thermal conductivity (IAPWS R15-11); `undefined` at the critical point itself. */
   readonly lambda: Quantity<'thermalConductivity'> | undefined;
+  /** Kinematic viscosity ν = μ/ρ. */
+  readonly nu: Quantity<'kinematicViscosity'> | undefined;
+  /** Thermal diffusivity α = λ/(ρ·cp). */
+  readonly alpha: Quantity<'thermalDiffusivity'> | undefined;
   /** Prandtl number μ·cp/λ. */
   readonly Pr: number | undefined;
 }
@@ -159,38 +169,13 @@ function readIf97Temperature(input: unknown, units: CallUnits): number {
 const T_SATURATION: Bounds = { min: T_MIN, max: T_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
 const P_SATURATION: Bounds = { min: P_SAT_MIN, max: P_CRITICAL, scope: 'the saturation line (a quality is defined only there)' };
 
-/**
- * Adds the transport properties of one state to `target` as enumerable getters, computed on first
- * access (so `water.state` costs nothing extra unless they are read). `full` adds ν, α and Pr too.
- */
-function withTransport<T extends object>(target: T, T_: number, rho: number, p: number, cp: number, defined: boolean, full: boolean): T {
-  let values: TransportValues | undefined;
-  const get = (): TransportValues => (values ??= defined ? transportAt(T_, rho, p, { mu: NaN, lambda: NaN }) : { mu: NaN, lambda: NaN });
-  const getters: Record<string, () => unknown> = {
-    mu: () => optionalQuantity(get().mu, 'dynamicViscosity', 'mu'),
-    lambda: () => optionalQuantity(get().lambda, 'thermalConductivity', 'lambda'),
-    Pr: () => {
-      const v = (get().mu * cp) / get().lambda;
-      return Number.isNaN(v) ? undefined : v;
-    },
-  };
-  if (full) {
-    getters.nu = () => optionalQuantity(get().mu / rho, 'kinematicViscosity', 'nu');
-    getters.alpha = () => optionalQuantity(get().lambda / (rho * cp), 'thermalDiffusivity', 'alpha');
-  }
-  for (const [key, fn] of Object.entries(getters)) Object.defineProperty(target, key, { get: fn, enumerable: true, configurable: false });
-  return target;
-}
-
 function toResult(st: WaterState): WaterStateResult {
   const two = st.phase === PHASE.twoPhase;
-  // the transport getters are added below; the object is complete when returned
-  type Base = Omit<WaterStateResult, 'mu' | 'lambda' | 'nu' | 'alpha' | 'Pr'>;
   const hasSat = st.p >= P_SAT_MIN && st.p <= P_CRITICAL;
   const Tsat = two ? st.T : hasSat ? saturationTemperatureOnLine(st.p) : NaN;
   const vapor = st.phase === PHASE.vapor && hasSat;
   const liquid = st.phase === PHASE.liquid && hasSat;
-  const base: Base = {
+  const base: WaterStateFields = {
     T: resultQuantity(st.T, 'temperature', 'T'),
     p: resultQuantity(st.p, 'pressure', 'p'),
     phase: PHASES[st.phase]!,
@@ -209,7 +194,7 @@ function toResult(st: WaterState): WaterStateResult {
     superheat: vapor ? resultQuantity(Math.max(0, st.T - Tsat), 'temperatureDifference', 'superheat') : undefined,
     subcooling: liquid ? resultQuantity(Math.max(0, Tsat - st.T), 'temperatureDifference', 'subcooling') : undefined,
   };
-  return withTransport(base, st.T, st.rho, st.p, st.cp, !two, true) as WaterStateResult;
+  return new WaterStateRecord(base, st.T, st.rho, st.p, st.cp, !two);
 }
 
 /** Range checks of (p, T) with the limits of the standard, in the caller's units. */
@@ -367,14 +352,14 @@ export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>)
 }
 
 function phaseOf(w: WaterProperties): SaturatedPhase {
-  const base: Omit<SaturatedPhase, 'mu' | 'lambda' | 'Pr'> = {
+  const base: SaturatedPhaseFields = {
     v: resultQuantity(w.v, 'specificVolume', 'v'),
     rho: resultQuantity(w.rho, 'density', 'rho'),
     u: resultQuantity(w.u, 'specificEnergy', 'u'),
     h: resultQuantity(w.h, 'specificEnergy', 'h'),
     s: resultQuantity(w.s, 'specificEntropy', 's'),
   };
-  return withTransport(base, w.T, w.rho, w.p, w.cp, Number.isFinite(w.cp) && w.cp > 0, false) as SaturatedPhase;
+  return new SaturatedPhaseRecord(base, w.T, w.rho, w.p, w.cp, Number.isFinite(w.cp) && w.cp > 0);
 }
 
 /**

@@ -39,9 +39,18 @@ describe('transport on water.state', () => {
     expectClose(s.lambda!.in('W/(m·K)'), 0.607, { rel: 2e-3 });
     expectClose(s.Pr!, 6.13, { rel: 1e-2 });
   });
-  it('the getters are part of the state object (enumerable, in its JSON)', () => {
-    const json = JSON.parse(JSON.stringify(water.state({ T: '300 K', p: '1 MPa' })));
-    expect(Object.keys(json)).toEqual(expect.arrayContaining(['mu', 'lambda', 'nu', 'alpha', 'Pr']));
+  it('the transport values are getters read by name and are in the JSON of states and saturated phases', () => {
+    const st = water.state({ T: '300 K', p: '1 MPa' });
+    const json = JSON.parse(JSON.stringify(st));
+    expect(Object.keys(json)).toEqual(expect.arrayContaining(['T', 'p', 'h', 'mu', 'lambda', 'nu', 'alpha', 'Pr']));
+    expect(json.mu).toEqual(JSON.parse(JSON.stringify(st.mu)));
+    // the plain fields are own properties; the transport getters are not (computed on first read)
+    expect(Object.keys(st)).toContain('h');
+    expect(Object.keys(st)).not.toContain('mu');
+    const liquid = water.saturation({ T: '100 °C' }).liquid;
+    expect(Object.keys(JSON.parse(JSON.stringify(liquid)))).toEqual(expect.arrayContaining(['h', 'mu', 'lambda', 'nu', 'alpha', 'Pr']));
+    // ν = μ/ρ and α = λ/(ρ·cp) on the saturated phase too (identities)
+    expect(liquid.nu!.si).toBe(liquid.mu!.si / liquid.rho.si);
   });
 });
 
