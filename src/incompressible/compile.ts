@@ -13,7 +13,7 @@ import type { Dimension } from '../units/dimensions.js';
 import { piecewiseLinear } from '../numeric/interpolate.js';
 import { heatCapacityAt, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
-import { compileTransport, type CompiledTransport } from './transport-data.js';
+import { compileTransport, provenanceOf, type CompiledTransport } from './transport-data.js';
 
 /**
  * Where a substance's numbers come from, how they were obtained, and how far to trust them
@@ -45,18 +45,6 @@ export interface CompileOptions {
   readonly supercooled?: boolean;
 }
 
-/** The definition's source, basis and uncertainty as one object. */
-export function provenanceOf(def: IncompressibleDefinition): SubstanceSource {
-  const s = def.source;
-  return {
-    title: s?.title ?? 'user definition',
-    ...(s?.authors !== undefined ? { authors: s.authors } : {}),
-    ...(s?.year !== undefined ? { year: s.year } : {}),
-    ...(s?.table !== undefined ? { table: s.table } : {}),
-    basis: def.basis ?? 'user',
-    uncertainty: def.uncertainty ?? 'not stated',
-  };
-}
 
 /**
  * Expands Σ aᵢ·tⁱ with t = α·T + β into coefficients in T (binomial expansion).

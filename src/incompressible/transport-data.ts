@@ -9,7 +9,7 @@ import type { DefinitionIssue } from '../errors.js';
 import type { Dimension } from '../units/dimensions.js';
 import { toSI, DEFAULT_AMBIENT_PA, type ResolvedUnit } from '../units/registry.js';
 import type { Quantity } from '../units/quantity.js';
-import type { IncompressibleDefinition, TransportField } from './schema.js';
+import type { DefinitionSource, IncompressibleDefinition, TransportField } from './schema.js';
 import { missingCurve, type PropertyCurve } from './transport.js';
 
 /** Where one transport property's numbers come from (same shape as a substance's source). */
@@ -40,15 +40,19 @@ type UnitReader = (unit: string, dimension: Dimension, path: (string | number)[]
 type AnyField = TransportField<{ readonly T: readonly number[]; readonly mu?: readonly number[]; readonly lambda?: readonly number[] }, string>;
 
 function sourceOf(field: AnyField): TransportSource | undefined {
-  if ('omitted' in field) return undefined;
-  const s = field.source;
+  return 'omitted' in field ? undefined : provenanceOf(field);
+}
+
+/** Source, basis and uncertainty of a definition or one of its fields, with the defaults of a user definition. */
+export function provenanceOf(fields: { readonly source?: DefinitionSource; readonly basis?: TransportSource['basis']; readonly uncertainty?: string }): TransportSource {
+  const s = fields.source;
   return {
     title: s?.title ?? 'user definition',
     ...(s?.authors !== undefined ? { authors: s.authors } : {}),
     ...(s?.year !== undefined ? { year: s.year } : {}),
     ...(s?.table !== undefined ? { table: s.table } : {}),
-    basis: field.basis ?? 'user',
-    uncertainty: field.uncertainty ?? 'not stated',
+    basis: fields.basis ?? 'user',
+    uncertainty: fields.uncertainty ?? 'not stated',
   };
 }
 
