@@ -19,6 +19,7 @@ import type { IncompressibleDefinition } from './schema.js';
 import type { CompiledTransport } from './transport-data.js';
 import { curveValue, iapwsLiquidWater, LiquidWaterTransportWork, type PropertyCurve } from './transport.js';
 import { Status } from '../core/status.js';
+import { LiquidStateRecord, SolidStateRecord, type IncompressibleStateFields, type TransportReader } from './state-record.js';
 
 /** A state of an incompressible substance: temperature and (absolute) pressure. */
 export interface IncompressibleState {
@@ -58,7 +59,8 @@ export interface IncompressibleStateResult {
   /**
    * Dynamic viscosity μ(T), liquids only (solids have no such key). `undefined` where the data do not
    * cover T or leave μ out ({@link IncompressibleSubstance.viscosity} throws and says why). Computed on
-   * first access, like every transport value here.
+   * first read, like every transport value here: they are getters, in the state's JSON but not in
+   * `{ ...state }` or `Object.keys(state)`.
    */
   readonly mu?: Quantity<'dynamicViscosity'> | undefined;
   /** Thermal conductivity λ(T); `undefined` as for `mu`. */
@@ -204,31 +206,14 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
     const T = readTemperature(input, 'T', curveBounds(curve, what), new CallUnits());
     return [curveAt(curve, T), flagged(curve, T)] as const;
   };
-  /** Adds the transport values of a state as enumerable getters, computed on first access; undefined where there are no data at T. */
-  const withTransport = (target: object, T: number, cT: number, rhoT: number): IncompressibleStateResult => {
-    let mu: number | undefined;
-    let lambda: number | undefined;
-    const muAt = () => (mu ??= inCurve(transport.viscosity, T, 'viscosity') ? curveAt(transport.viscosity, T) : NaN);
-    const lambdaAt = () => (lambda ??= inCurve(transport.thermalConductivity, T, 'thermal conductivity') ? curveAt(transport.thermalConductivity, T) : NaN);
-    const xMu = () => flagged(transport.viscosity, T);
-    const xLambda = () => flagged(transport.thermalConductivity, T);
-    const q = <D extends 'dynamicViscosity' | 'thermalConductivity' | 'kinematicViscosity' | 'thermalDiffusivity'>(si: number, dimension: D, property: string, extrapolated: boolean) => (Number.isNaN(si) ? undefined : resultQuantity(si, dimension, property, extrapolated));
-    const getters: Record<string, () => unknown> = {};
-    if (definition.state === 'liquid') {
-      getters.mu = () => q(muAt(), 'dynamicViscosity', 'mu', xMu());
-      getters.lambda = () => q(lambdaAt(), 'thermalConductivity', 'lambda', xLambda());
-      getters.Pr = () => {
-        const v = (muAt() * cT) / lambdaAt();
-        return Number.isNaN(v) ? undefined : v;
-      };
-      getters.nu = () => q(muAt() / rhoT, 'kinematicViscosity', 'nu', xMu());
-    } else {
-      getters.lambda = () => q(lambdaAt(), 'thermalConductivity', 'lambda', xLambda());
-    }
-    getters.alpha = () => q(lambdaAt() / (rhoT * cT), 'thermalDiffusivity', 'alpha', xLambda());
-    for (const [key, fn] of Object.entries(getters)) Object.defineProperty(target, key, { get: fn, enumerable: true, configurable: false });
-    return target as IncompressibleStateResult;
+  /** The transport values of the states (NaN where the data have none at T). */
+  const reader: TransportReader = {
+    mu: (T) => (inCurve(transport.viscosity, T, 'viscosity') ? curveAt(transport.viscosity, T) : NaN),
+    lambda: (T) => (inCurve(transport.thermalConductivity, T, 'thermal conductivity') ? curveAt(transport.thermalConductivity, T) : NaN),
+    muOutside: (T) => flagged(transport.viscosity, T),
+    lambdaOutside: (T) => flagged(transport.thermalConductivity, T),
   };
+  const Record_ = definition.state === 'liquid' ? LiquidStateRecord : SolidStateRecord;
   const c = (T: unknown): Quantity<'specificHeat'> => {
     const t = temperature(T, 'T');
     return resultQuantity(heatCapacityAt(model, t), 'specificHeat', 'c', outside(t));
@@ -271,7 +256,7 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
       const cT = heatCapacityAt(model, T);
       const rhoT = densityAt(model, T);
       const x = outside(T);
-      const result: Omit<IncompressibleStateResult, 'mu' | 'lambda' | 'Pr' | 'nu' | 'alpha'> = {
+      const result: IncompressibleStateFields = {
         T: resultQuantity(T, 'temperature', 'T'),
         p: resultQuantity(p, 'pressure', 'p'),
         c: resultQuantity(cT, 'specificHeat', 'c', x),
@@ -283,7 +268,7 @@ export function substanceFacade(compiled: CompiledSubstance, extrapolate = false
         h: resultQuantity(enthalpyChange(model, Tref, pRef, T, p), 'specificEnergy', 'h', x),
         s: resultQuantity(entropyChange(model, Tref, T), 'specificEntropy', 's', x),
       };
-      return withTransport(result, T, cT, rhoT);
+      return new Record_(result, reader, T, cT, rhoT);
     },
     deltaU(state1, state2) {
       const [a] = resolve(state1, 'state1.', false);
