@@ -1,8 +1,9 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
-import { defineConfig } from 'tsup';
-import ts from 'typescript';
+import { defineConfig, type Options } from 'tsup';
+import type * as TypeScript from 'typescript';
 import { readManifest, tsupEntries } from './scripts/entries.js';
 
 const manifest = readManifest();
@@ -18,16 +19,18 @@ const root = process.cwd();
  * outside node_modules (the bundler leaves files there external) and removed when tsup exits.
  */
 function emitDeclarations(): Record<string, string> {
+  // loaded here, not at the top: importing this config (tests/entries.test.ts does) compiles nothing
+  const ts = createRequire(import.meta.url)('typescript') as typeof TypeScript;
   const dir = mkdtempSync(join(tmpdir(), 'heatstate-declarations-'));
   process.on('exit', () => rmSync(dir, { recursive: true, force: true }));
-  const host: ts.ParseConfigFileHost = {
+  const host: TypeScript.ParseConfigFileHost = {
     ...ts.sys,
     onUnRecoverableConfigFileDiagnostic: (d) => {
       throw new Error(ts.flattenDiagnosticMessageText(d.messageText, '\n'));
     },
   };
   const config = ts.getParsedCommandLineOfConfigFile(join(root, 'tsconfig.json'), undefined, host)!;
-  const options: ts.CompilerOptions = {
+  const options: TypeScript.CompilerOptions = {
     ...config.options,
     noEmit: false,
     declaration: true,
@@ -57,13 +60,19 @@ function emitDeclarations(): Record<string, string> {
   return Object.fromEntries(manifest.entries.map((e) => [e.out, join(dir, e.source.replace(/\.ts$/, '.d.ts'))]));
 }
 
-export default defineConfig(() => [
+let declarations: Options['dts'] | undefined;
+
+export default defineConfig([
   /** One entry per public subpath (entries.json), so a user who imports only `heatstate/units` loads nothing else. */
   {
     entry: tsupEntries(manifest),
     format: ['esm', 'cjs'],
-    // the declarations emitted above, bundled per entry into .d.ts and .d.cts
-    dts: { entry: emitDeclarations(), compilerOptions: { stripInternal: true } },
+    // the declarations emitted above, bundled per entry into .d.ts and .d.cts; emitted when tsup
+    // reads this option (once, at the start of the build), not when the config is imported
+    get dts(): Options['dts'] {
+      declarations ??= { entry: emitDeclarations(), compilerOptions: { stripInternal: true } };
+      return declarations;
+    },
     sourcemap: false,
     clean: true,
     splitting: true,
