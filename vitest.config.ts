@@ -27,13 +27,15 @@ export default defineConfig({
   },
   test: {
     testTimeout: 60_000,
+    // pool options are per pool, for all projects: the unit project is the only one on threads,
+    // the integration project the only one on forks
     poolOptions: {
       // unit files share one module graph per worker thread (no test mocks modules or relies on
       // fresh module state): importing the source tree once per worker instead of once per file
       threads: { isolate: false, maxThreads: 2, minThreads: 1 },
-      // integration files mostly wait on child processes (build, tsc, typedoc, npm, a browser):
-      // enough processes that the files which need no dist/ run while the build is going
-      forks: { maxForks: 8, minForks: 1 },
+      // integration files mostly wait on child processes (build, typedoc, npm, a browser): a process
+      // for each, so that every file is running while the build goes
+      forks: { maxForks: integration.length, minForks: 1 },
     },
     projects: [
       {
