@@ -212,6 +212,6 @@ const cpu = os.cpus()[0]?.model ?? 'unknown';
 const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
   outPath,
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, native, coldStart: cold, rows }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, rows }, null, 2)}\n`,
 );
 console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

@@ -9,6 +9,9 @@
  * `npm run docs` does (typedoc's command-line module, run by this Node), with typedoc.json, writing
  * its JSON and HTML into the run's folder for shared jobs.
  *
+ * It runs at normal priority: it is the longest single job of the run (about half a minute of one
+ * core), started at the beginning beside the build.
+ *
  * Plain Node (no vitest import): the global setup starts it; a test file passes
  * `inject('heatstateJobs')` as `dir`.
  */
@@ -34,7 +37,7 @@ function spec(dir: string): JobSpec & { json: string; html: string; typedocArgs:
   const json = join(dir, 'api.json');
   const html = join(dir, 'api-html');
   const typedocArgs = ['--json', json, '--out', html];
-  return { name: 'api-reference', file: process.execPath, args: [join(root, 'node_modules/typedoc/dist/cli.js'), ...typedocArgs], cwd: root, background: true, json, html, typedocArgs };
+  return { name: 'api-reference', file: process.execPath, args: [join(root, 'node_modules/typedoc/dist/cli.js'), ...typedocArgs], cwd: root, json, html, typedocArgs };
 }
 
 /** The run's typedoc result (started by whoever asks first); typedoc's colours are stripped from its output. */

@@ -6,14 +6,12 @@
  * started it awaits it (the setup in its teardown), so the command never outlives the run.
  *
  * The folder comes from the integration project's global setup (`inject('heatstateJobs')` in a test
- * file), which removes it at the end of the run. `background: true` lowers the command's priority
- * (nice 5) as in tests/helpers/run.ts: nothing on the build's path waits for it.
+ * file), which removes it at the end of the run.
  *
  * Plain Node (no vitest import): the global setup runs it in vitest's own process.
  */
 import { spawn } from 'node:child_process';
 import { closeSync, existsSync, openSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
-import { setPriority } from 'node:os';
 import { join } from 'node:path';
 
 export interface JobResult {
@@ -31,14 +29,13 @@ export interface JobSpec {
   file: string;
   args: string[];
   cwd: string;
-  background?: boolean;
   /** How long a waiting file waits for the status before giving up. */
   timeoutMs?: number;
 }
 
 const started = new Map<string, Promise<JobResult>>();
 
-function run({ file, args, ...options }: JobSpec, status: string): Promise<JobResult> {
+function run({ file, args, cwd }: JobSpec, status: string): Promise<JobResult> {
   const t = performance.now();
   return new Promise((resolve) => {
     const finish = (result: JobResult) => {
@@ -46,14 +43,7 @@ function run({ file, args, ...options }: JobSpec, status: string): Promise<JobRe
       renameSync(`${status}.part`, status);
       resolve(result);
     };
-    const child = spawn(file, args, { cwd: options.cwd, stdio: ['ignore', 'pipe', 'pipe'] });
-    if (options.background && child.pid !== undefined) {
-      try {
-        setPriority(child.pid, 5);
-      } catch {
-        // not permitted here: run at normal priority
-      }
-    }
+    const child = spawn(file, args, { cwd, stdio: ['ignore', 'pipe', 'pipe'] });
     let output = '';
     child.stdout.on('data', (d: Buffer) => (output += d.toString()));
     child.stderr.on('data', (d: Buffer) => (output += d.toString()));
