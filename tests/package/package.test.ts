@@ -101,8 +101,8 @@ describe('the packed package', () => {
     expect(out.trim()).toBe('2.326 copper');
   });
   it('ships types that tsc checks, dimension errors included', async () => {
-    // tsc -p on the consumer's check.ts (written in beforeAll): any error, or an unused
-    // @ts-expect-error, makes it exit non-zero, which rejects here with its report
+    // tsc -p on the consumer's check.ts (written in beforeAll): any error, or an expected error
+    // that does not occur, makes it exit non-zero, which rejects here with its report
     await consumerTypes;
   });
   it('installs the heatstate command', () => {
