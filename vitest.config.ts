@@ -14,7 +14,6 @@ const integration = [
   'tests/examples.test.ts',
   'tests/bench.test.ts',
   'tests/cli.test.ts',
-  'tests/serverless.test.ts',
   'tests/bundle.test.ts',
   'tests/docs/api.test.ts',
   'tests/errors-dual.test.ts',
@@ -34,7 +33,7 @@ export default defineConfig({
       // fresh module state): importing the source tree once per worker instead of once per file
       forks: { isolate: false, maxForks: 2, minForks: 1 },
       // integration files mostly wait on child processes (build, typedoc, npm, a browser): a worker
-      // thread for each (there are 11; a fresh thread per file, as isolated as a process, without
+      // thread for each (ten files; a fresh thread per file, as isolated as a process, without
       // starting a Node process per file), so that every file is running while the build goes
       threads: { isolate: true, maxThreads: 16, minThreads: 1 },
     },

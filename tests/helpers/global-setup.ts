@@ -1,7 +1,7 @@
 /**
  * Global setup of the `integration` project: starts the one build of dist/ (`npm run build`, i.e.
  * tsup) and returns at once, so the files that need no dist/ (type check, API reference, bundles,
- * serverless, the unit project) run while it builds. Files that read dist/ wait for it with
+ * the in-process CLI tests, the unit project) run while it builds. Files that read dist/ wait for it with
  * `await builtDist()` from tests/helpers/dist.ts; nothing else builds or cleans dist/ during a run.
  *
  * The outcome is written to a status file (renamed into place when complete, so a reader never sees
