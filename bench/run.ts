@@ -17,7 +17,7 @@
  * every cold start run and report, in a few seconds; its numbers are not figures).
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -113,7 +113,16 @@ interface Native {
 function nativeComparison(): Native {
   const compiler = ['gcc', 'cc', 'clang'].find((c) => spawnSync(c, ['--version'], { stdio: 'ignore' }).status === 0);
   if (compiler === undefined) return { skipped: 'no compiler' };
-  const exe = join(mkdtempSync(join(os.tmpdir(), 'heatstate-c-')), 'region1');
+  const dir = mkdtempSync(join(os.tmpdir(), 'heatstate-c-'));
+  try {
+    return nativeRuns(compiler, join(dir, 'region1'));
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** Builds the C program into `exe` and times it against `waterBatch` (the C build's folder is the caller's). */
+function nativeRuns(compiler: string, exe: string): Native {
   const source = fileURLToPath(new URL('./c/region1.c', import.meta.url));
   const built = spawnSync(compiler, ['-O2', '-o', exe, source, '-lm'], { encoding: 'utf8' });
   if (built.status !== 0) return { compiler, skipped: `the C build failed: ${built.stderr.trim().split('\n')[0]}` };
