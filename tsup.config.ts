@@ -1,15 +1,78 @@
-import { defineConfig } from 'tsup';
+import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
+import { createRequire } from 'node:module';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { defineConfig, type Options } from 'tsup';
+import type * as TypeScript from 'typescript';
 import { readManifest, tsupEntries } from './scripts/entries.js';
 
 const manifest = readManifest();
+const root = process.cwd();
+
+/**
+ * The declarations of every entry, emitted once by the TypeScript compiler into a temporary folder
+ * (with `noCheck`: declaration emit without a type check of the bodies; `npm run typecheck`, run by
+ * `npm test`, is the type check), for tsup to bundle into `.d.ts` and `.d.cts`. tsup's own `dts`
+ * from the sources would type-check src/ a second time inside the build.
+ *
+ * Returns tsup's dts entry map: output name → the entry's emitted declaration file. The folder is
+ * outside node_modules (the bundler leaves files there external) and removed when tsup exits.
+ */
+function emitDeclarations(): Record<string, string> {
+  // loaded here, not at the top: importing this config (tests/entries.test.ts does) compiles nothing
+  const ts = createRequire(import.meta.url)('typescript') as typeof TypeScript;
+  const dir = mkdtempSync(join(tmpdir(), 'heatstate-declarations-'));
+  process.on('exit', () => rmSync(dir, { recursive: true, force: true }));
+  const host: TypeScript.ParseConfigFileHost = {
+    ...ts.sys,
+    onUnRecoverableConfigFileDiagnostic: (d) => {
+      throw new Error(ts.flattenDiagnosticMessageText(d.messageText, '\n'));
+    },
+  };
+  const config = ts.getParsedCommandLineOfConfigFile(join(root, 'tsconfig.json'), undefined, host)!;
+  const options: TypeScript.CompilerOptions = {
+    ...config.options,
+    noEmit: false,
+    declaration: true,
+    emitDeclarationOnly: true,
+    declarationMap: false,
+    noCheck: true,
+    // members marked @internal stay out of the published types
+    stripInternal: true,
+    incremental: false,
+    rootDir: root,
+    outDir: dir,
+  };
+  const program = ts.createProgram(
+    manifest.entries.map((e) => resolve(root, e.source)),
+    options,
+  );
+  const emitted = program.emit(undefined, undefined, undefined, true);
+  const problems = [...program.getOptionsDiagnostics(), ...program.getSyntacticDiagnostics(), ...emitted.diagnostics];
+  if (problems.length > 0) {
+    throw new Error(`declaration emit failed:\n${ts.formatDiagnostics(problems, { getCanonicalFileName: (f) => f, getCurrentDirectory: () => root, getNewLine: () => '\n' })}`);
+  }
+  // a declaration that refers to a JSON module would reach the data file from the temporary folder
+  // (where it is not): refuse instead of shipping a broken reference
+  const files = (readdirSync(dir, { recursive: true }) as string[]).filter((f) => f.endsWith('.d.ts'));
+  const json = files.filter((f) => /from\s+['"][^'"]+\.json['"]|import\(\s*['"][^'"]+\.json['"]/.test(readFileSync(join(dir, f), 'utf8')));
+  if (json.length > 0) throw new Error(`declarations refer to JSON modules (type the data with an interface instead): ${json.join(', ')}`);
+  return Object.fromEntries(manifest.entries.map((e) => [e.out, join(dir, e.source.replace(/\.ts$/, '.d.ts'))]));
+}
+
+let declarations: Options['dts'] | undefined;
 
 export default defineConfig([
   /** One entry per public subpath (entries.json), so a user who imports only `heatstate/units` loads nothing else. */
   {
     entry: tsupEntries(manifest),
     format: ['esm', 'cjs'],
-    // stripInternal: members marked @internal stay out of the published types
-    dts: { compilerOptions: { stripInternal: true } },
+    // the declarations emitted above, bundled per entry into .d.ts and .d.cts; emitted when tsup
+    // reads this option (once, at the start of the build), not when the config is imported
+    get dts(): Options['dts'] {
+      declarations ??= { entry: emitDeclarations(), compilerOptions: { stripInternal: true } };
+      return declarations;
+    },
     sourcemap: false,
     clean: true,
     splitting: true,

@@ -14,7 +14,6 @@ const integration = [
   'tests/examples.test.ts',
   'tests/bench.test.ts',
   'tests/cli.test.ts',
-  'tests/serverless.test.ts',
   'tests/bundle.test.ts',
   'tests/docs/api.test.ts',
   'tests/errors-dual.test.ts',
@@ -27,13 +26,16 @@ export default defineConfig({
   },
   test: {
     testTimeout: 60_000,
+    // pool options belong to a pool, for every project on it: the unit project is the only one on
+    // forks, the integration project the only one on threads
     poolOptions: {
-      // unit files share one module graph per worker thread (no test mocks modules or relies on
+      // unit files share one module graph per worker process (no test mocks modules or relies on
       // fresh module state): importing the source tree once per worker instead of once per file
-      threads: { isolate: false, maxThreads: 2, minThreads: 1 },
-      // integration files mostly wait on child processes (build, tsc, typedoc, npm, a browser):
-      // enough processes that the files which need no dist/ run while the build is going
-      forks: { maxForks: 8, minForks: 1 },
+      forks: { isolate: false, maxForks: 2, minForks: 1 },
+      // integration files mostly wait on child processes (build, typedoc, npm, a browser): a worker
+      // thread for each (ten files; a fresh thread per file, as isolated as a process, without
+      // starting a Node process per file), so that every file is running while the build goes
+      threads: { isolate: true, maxThreads: 16, minThreads: 1 },
     },
     projects: [
       {
@@ -42,7 +44,9 @@ export default defineConfig({
           name: 'unit',
           include: ['tests/**/*.test.ts'],
           exclude: integration,
-          pool: 'threads',
+          pool: 'forks',
+          // the unit workers yield the CPU to the build and typedoc (see the file)
+          setupFiles: ['tests/helpers/unit-priority.ts'],
         },
       },
       {
@@ -50,7 +54,7 @@ export default defineConfig({
         test: {
           name: 'integration',
           include: integration,
-          pool: 'forks',
+          pool: 'threads',
           globalSetup: ['tests/helpers/global-setup.ts'],
           testTimeout: 120_000,
           hookTimeout: 300_000,

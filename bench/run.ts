@@ -11,9 +11,13 @@
  * `waterBatch` over the same region 1 states, alternating runs, process CPU time; the C results are
  * checked bit for bit against `region1`. Without a compiler it says "no compiler" and goes on.
  * Last, cold start: the import of each built entry, as the difference to a bare `node` start.
+ *
+ * Modes: the default (figures for bench/results.json), `--quick` (shorter, still figures worth a
+ * glance) and `--smoke` (tests/bench.test.ts: proves that every case, the native comparison and
+ * every cold start run and report, in a few seconds; its numbers are not figures).
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -23,8 +27,15 @@ import { region1, WaterProperties } from '../src/water/if97/index.js';
 import { waterBatch } from '../src/water/index.js';
 import { cases } from './cases.js';
 
-const quick = process.argv.includes('--quick');
-const bench = new Bench({ time: quick ? 50 : 500, warmupTime: quick ? 20 : 200, iterations: quick ? 3 : 32, warmupIterations: quick ? 1 : 8 });
+const smoke = process.argv.includes('--smoke');
+const quick = smoke || process.argv.includes('--quick');
+/** How long each part runs: figures (default), a short look (--quick), or only proof that it runs (--smoke). */
+const plan = smoke
+  ? { time: 0, warmupTime: 0, iterations: 1, warmupIterations: 0, states: 2_000, reps: 1, rounds: 1, coldRuns: 1 }
+  : quick
+    ? { time: 50, warmupTime: 20, iterations: 3, warmupIterations: 1, states: 200_000, reps: 3, rounds: 3, coldRuns: 10 }
+    : { time: 500, warmupTime: 200, iterations: 32, warmupIterations: 8, states: 1_000_000, reps: 7, rounds: 7, coldRuns: 20 };
+const bench = new Bench({ time: plan.time, warmup: !smoke, warmupTime: plan.warmupTime, iterations: plan.iterations, warmupIterations: plan.warmupIterations });
 for (const c of cases) bench.add(c.name, c.fn);
 await bench.run();
 
@@ -102,13 +113,22 @@ interface Native {
 function nativeComparison(): Native {
   const compiler = ['gcc', 'cc', 'clang'].find((c) => spawnSync(c, ['--version'], { stdio: 'ignore' }).status === 0);
   if (compiler === undefined) return { skipped: 'no compiler' };
-  const exe = join(mkdtempSync(join(os.tmpdir(), 'heatstate-c-')), 'region1');
+  const dir = mkdtempSync(join(os.tmpdir(), 'heatstate-c-'));
+  try {
+    return nativeRuns(compiler, join(dir, 'region1'));
+  } finally {
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+/** Builds the C program into `exe` and times it against `waterBatch` (the C build's folder is the caller's). */
+function nativeRuns(compiler: string, exe: string): Native {
   const source = fileURLToPath(new URL('./c/region1.c', import.meta.url));
   const built = spawnSync(compiler, ['-O2', '-o', exe, source, '-lm'], { encoding: 'utf8' });
   if (built.status !== 0) return { compiler, skipped: `the C build failed: ${built.stderr.trim().split('\n')[0]}` };
-  const n = quick ? 200_000 : 1_000_000;
-  const reps = quick ? 3 : 7;
-  const rounds = quick ? 3 : 7;
+  const n = plan.states;
+  const reps = plan.reps;
+  const rounds = plan.rounds;
   const { p, T } = region1BenchInputs(n);
   const out = { v: new Float64Array(n), h: new Float64Array(n), u: new Float64Array(n), s: new Float64Array(n), cp: new Float64Array(n), w: new Float64Array(n), status: new Uint8Array(n) };
   const props = ['v', 'h', 'u', 's', 'cp', 'w'] as const;
@@ -164,7 +184,7 @@ function processMs(args: string[]): number {
 
 /**
  * Cold start of a built entry: a fresh Node process that imports it, minus a bare `node` start,
- * alternating the two, median of the differences over `runs` (≥ 10) pairs.
+ * alternating the two, median of the differences over `runs` pairs (≥ 10 for figures; one in smoke mode).
  */
 function coldStart(entry: string, runs: number): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
   const url = new URL(`../dist/${entry}.js`, import.meta.url);
@@ -173,7 +193,7 @@ function coldStart(entry: string, runs: number): { entry: string; medianMs: numb
   const load = ['--input-type=module', '-e', `await import(${JSON.stringify(url.href)});`];
   const diffs: number[] = [];
   const bares: number[] = [];
-  processMs(load); // the file system cache
+  if (!smoke) processMs(load); // the file system cache
   for (let i = 0; i < runs; i++) {
     const b = processMs(bare);
     const l = processMs(load);
@@ -184,7 +204,7 @@ function coldStart(entry: string, runs: number): { entry: string; medianMs: numb
 }
 
 // targets: 15 ms for the root entry, 8 ms for each subpath (the difference to a bare node start)
-const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map((e) => coldStart(e, quick ? 10 : 20));
+const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map((e) => coldStart(e, plan.coldRuns));
 console.log('');
 for (const c of cold) {
   const name = c.entry === 'index' ? 'heatstate' : `heatstate/${c.entry.replace('/index', '')}`;
@@ -201,6 +221,6 @@ const cpu = os.cpus()[0]?.model ?? 'unknown';
 const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
   outPath,
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, native, coldStart: cold, rows }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, rows }, null, 2)}\n`,
 );
 console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

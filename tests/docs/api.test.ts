@@ -2,16 +2,13 @@
  * The API reference builds (typedoc, as `npm run docs` does), and every export of the documented
  * entries has a summary; every exported function also shows an example.
  *
- * typedoc runs with --skipErrorChecking: it would otherwise type-check the whole tree a second time,
- * which tests/package/typecheck.test.ts already does in the same run. Links, comments and the HTML
- * output are checked as `npm run docs` makes them.
+ * typedoc runs once per test run (tests/helpers/api-reference.ts), with its type check, whose result
+ * tests/package/typecheck.test.ts reads. Links, comments and the HTML output are checked as
+ * `npm run docs` makes them.
  */
-import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { runCommand } from '../helpers/run.js';
+import { readFileSync } from 'node:fs';
+import { beforeAll, describe, expect, inject, it } from 'vitest';
+import { apiReference } from '../helpers/api-reference.js';
 
 interface Reflection {
   name: string;
@@ -25,20 +22,14 @@ const KIND = { function: 64, class: 128, interface: 256, typeAlias: 2097152, var
 const hasSummary = (c: Reflection['comment']) => (c?.summary ?? []).some((p) => p.text.trim() !== '');
 
 describe('API reference (typedoc)', () => {
-  const root = fileURLToPath(new URL('../..', import.meta.url));
   let log = '';
   let project: Reflection = { name: '', kind: 0 };
-  let dir = '';
   beforeAll(async () => {
-    dir = mkdtempSync(join(tmpdir(), 'heatstate-docs-'));
-    const out = join(dir, 'api.json');
-    const { stdout, stderr } = await runCommand(join(root, 'node_modules/.bin/typedoc'), ['--json', out, '--out', join(dir, 'html'), '--skipErrorChecking'], { cwd: root, timeout: 240_000, background: true });
-    log = stdout + stderr;
-    project = JSON.parse(readFileSync(out, 'utf8')) as Reflection;
+    const reference = await apiReference(inject('heatstateJobs'));
+    if (reference.code !== 0) throw new Error(`typedoc ${reference.args.join(' ')} failed (exit code ${reference.code}):\n${reference.output}`);
+    log = reference.output;
+    project = JSON.parse(readFileSync(reference.json, 'utf8')) as Reflection;
   }, 300_000);
-  afterAll(() => {
-    if (dir) rmSync(dir, { recursive: true, force: true });
-  });
 
   it('builds without errors or broken links', () => {
     expect(log).not.toMatch(/\[(warning|error)\]/);

@@ -5,7 +5,8 @@
  * a font and SwiftShader) inside the npm package. It is unpacked once per package version into
  * `node_modules/.cache/heatstate-chromium/<version>/` (into a temporary folder first, then renamed,
  * so a run that is stopped half-way or a second run at the same time never sees a partial binary)
- * and driven by playwright-core.
+ * and driven by playwright-core. `HEATSTATE_CHROMIUM_CACHE=/some/folder` unpacks there instead (a
+ * read-only node_modules, or timing a run as a fresh clone makes it).
  *
  * Other browsers: `HEATSTATE_CHROMIUM=/usr/bin/chromium npm test` uses that executable instead (for
  * instance Debian's `chromium` package). Without the variable, when the npm binary cannot start (it
@@ -36,7 +37,7 @@ async function npmChromium(): Promise<{ executable: string; fontconfig: string; 
   const require = createRequire(import.meta.url);
   const pkgDir = join(dirname(require.resolve('@sparticuz/chromium')), '..', '..');
   const { version } = JSON.parse(readFileSync(join(pkgDir, 'package.json'), 'utf8')) as { version: string };
-  const cache = join(root, 'node_modules', '.cache', 'heatstate-chromium');
+  const cache = process.env.HEATSTATE_CHROMIUM_CACHE || join(root, 'node_modules', '.cache', 'heatstate-chromium');
   const target = join(cache, version);
   if (!existsSync(join(target, 'chromium'))) {
     mkdirSync(cache, { recursive: true });

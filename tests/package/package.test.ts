@@ -23,6 +23,14 @@ let files: string[] = [];
 let dir = '';
 let tarball = '';
 let consumer = '';
+/** The checks that need only the tarball or only the installed package, started as soon as they can. */
+let lint: Promise<[{ stdout: string }, { stdout: string }]>;
+let consumerTypes: Promise<unknown>;
+/** A promise whose rejection is reported by the test that awaits it, not as an unhandled rejection before. */
+const started = <T>(p: Promise<T>): Promise<T> => {
+  p.catch(() => {});
+  return p;
+};
 
 beforeAll(async () => {
   await builtDist();
@@ -30,13 +38,39 @@ beforeAll(async () => {
   const packed = JSON.parse(execFileSync('npm', ['pack', '--json', '--pack-destination', dir], { cwd: root, encoding: 'utf8' })) as { filename: string; files: { path: string }[] }[];
   files = packed[0]!.files.map((f) => f.path).sort();
   tarball = join(dir, packed[0]!.filename);
+  // publint and attw read the tarball: they run while the consumer project installs it
+  lint = started(
+    Promise.all([
+      run(process.execPath, [bin('publint', 'src/cli.js'), 'run', tarball, '--strict'], { cwd: root }),
+      run(process.execPath, [bin('@arethetypeswrong/cli', 'dist/index.js'), tarball, '--profile', 'node16', '--format', 'json'], { cwd: root }),
+    ]),
+  );
   consumer = join(dir, 'consumer');
   mkdirSync(consumer);
   writeFileSync(join(consumer, 'package.json'), JSON.stringify({ name: 'consumer', private: true, type: 'module' }));
   await run('npm', ['install', '--no-audit', '--no-fund', '--prefer-offline', '--no-package-lock', tarball], { cwd: consumer, timeout: 240_000 });
+  // the consumer's type check starts once the package is installed; its test below awaits it
+  writeFileSync(
+    join(consumer, 'check.ts'),
+    [
+      "import { quantity, water } from 'heatstate';",
+      "import { idealGas } from 'heatstate/ideal-gas';",
+      "const h: number = water.state({ p: '1 MPa', T: '500 K' }).h.in('kJ/kg');",
+      "const k: number = idealGas('air').k('300 K');",
+      '// @ts-expect-error a pressure is not a temperature',
+      "idealGas('air').cp(quantity(1, 'bar'));",
+      'export { h, k };',
+    ].join('\n'),
+  );
+  // skipLibCheck false: the package's own .d.ts/.d.cts files are checked; only TypeScript's
+  // bundled lib.*.d.ts are skipped (skipDefaultLibCheck), which say nothing about this package
+  writeFileSync(join(consumer, 'tsconfig.json'), JSON.stringify({ compilerOptions: { strict: true, module: 'node16', moduleResolution: 'node16', target: 'es2022', noEmit: true, skipLibCheck: false, skipDefaultLibCheck: true, types: [] }, files: ['check.ts'] }));
+  consumerTypes = started(run(process.execPath, [bin('typescript', 'bin/tsc'), '-p', consumer], { cwd: consumer }));
 }, 300_000);
 
-afterAll(() => {
+afterAll(async () => {
+  // the checks started above have finished before their folder goes
+  await Promise.allSettled([lint, consumerTypes]);
   if (dir) rmSync(dir, { recursive: true, force: true });
 });
 
@@ -49,11 +83,8 @@ describe('the packed package', () => {
   });
   it('passes publint --strict and @arethetypeswrong/cli (node16 profile) on the same tarball', async () => {
     // a finding makes either tool exit non-zero, which rejects here with its report
-    const [lint, types] = await Promise.all([
-      run(process.execPath, [bin('publint', 'src/cli.js'), 'run', tarball, '--strict'], { cwd: root }),
-      run(process.execPath, [bin('@arethetypeswrong/cli', 'dist/index.js'), tarball, '--profile', 'node16', '--format', 'json'], { cwd: root }),
-    ]);
-    expect(lint.stdout).toContain('All good!');
+    const [publint, types] = await lint;
+    expect(publint.stdout).toContain('All good!');
     const report = JSON.parse(types.stdout) as { analysis: { entrypoints: Record<string, unknown> }; problems?: Record<string, { entrypoint: string; resolutionKind: string }[]> };
     // every entry of the manifest, and package.json
     expect(Object.keys(report.analysis.entrypoints).sort()).toEqual([...readManifest().entries.map((e) => e.subpath), './package.json'].sort());
@@ -70,22 +101,9 @@ describe('the packed package', () => {
     expect(out.trim()).toBe('2.326 copper');
   });
   it('ships types that tsc checks, dimension errors included', async () => {
-    writeFileSync(
-      join(consumer, 'check.ts'),
-      [
-        "import { quantity, water } from 'heatstate';",
-        "import { idealGas } from 'heatstate/ideal-gas';",
-        "const h: number = water.state({ p: '1 MPa', T: '500 K' }).h.in('kJ/kg');",
-        "const k: number = idealGas('air').k('300 K');",
-        '// @ts-expect-error a pressure is not a temperature',
-        "idealGas('air').cp(quantity(1, 'bar'));",
-        'export { h, k };',
-      ].join('\n'),
-    );
-    // skipLibCheck false: the package's own .d.ts/.d.cts files are checked; only TypeScript's
-    // bundled lib.*.d.ts are skipped (skipDefaultLibCheck), which say nothing about this package
-    writeFileSync(join(consumer, 'tsconfig.json'), JSON.stringify({ compilerOptions: { strict: true, module: 'node16', moduleResolution: 'node16', target: 'es2022', noEmit: true, skipLibCheck: false, skipDefaultLibCheck: true, types: [] }, files: ['check.ts'] }));
-    await run(process.execPath, [bin('typescript', 'bin/tsc'), '-p', consumer], { cwd: consumer });
+    // tsc -p on the consumer's check.ts (written in beforeAll): any error, or an expected error
+    // that does not occur, makes it exit non-zero, which rejects here with its report
+    await consumerTypes;
   });
   it('installs the heatstate command', () => {
     const out = execFileSync(join(consumer, 'node_modules/.bin/heatstate'), ['water', 'p=1 atm', 'T=25 °C', '--json'], { cwd: consumer, encoding: 'utf8' });

@@ -1,0 +1,49 @@
+/**
+ * One typedoc run per test run, shared by two files: tests/docs/api.test.ts (the API reference builds,
+ * every export documented) and tests/package/typecheck.test.ts (the whole tree type-checks).
+ *
+ * typedoc builds one TypeScript program from tsconfig.json (the same root files and compiler options
+ * as `npm run typecheck`, i.e. src, tests, scripts, examples and bench) and, unless told to skip it,
+ * reports that program's diagnostics before it documents anything, exiting non-zero on any error. So
+ * one compiler program serves both checks instead of two (tsc, then typedoc again). It runs as
+ * `npm run docs` does (typedoc's command-line module, run by this Node), with typedoc.json, writing
+ * its JSON and HTML into the run's folder for shared jobs.
+ *
+ * It runs at normal priority: it is the longest single job of the run (about half a minute of one
+ * core), started at the beginning beside the build.
+ *
+ * Plain Node (no vitest import): the global setup starts it; a test file passes
+ * `inject('heatstateJobs')` as `dir`.
+ */
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { sharedJob, type JobResult, type JobSpec } from './shared-job.js';
+
+const root = fileURLToPath(new URL('../..', import.meta.url));
+
+/** The two test files that read the result (the global setup starts the job when a run includes them). */
+export const API_REFERENCE_READERS = ['tests/docs/api.test.ts', 'tests/package/typecheck.test.ts'];
+
+export interface ApiReference extends JobResult {
+  /** typedoc's command-line arguments. */
+  args: string[];
+  /** The project as JSON (typedoc --json). */
+  json: string;
+  /** The HTML output folder. */
+  html: string;
+}
+
+function spec(dir: string): JobSpec & { json: string; html: string; typedocArgs: string[] } {
+  const json = join(dir, 'api.json');
+  const html = join(dir, 'api-html');
+  const typedocArgs = ['--json', json, '--out', html];
+  return { name: 'api-reference', file: process.execPath, args: [join(root, 'node_modules/typedoc/dist/cli.js'), ...typedocArgs], cwd: root, json, html, typedocArgs };
+}
+
+/** The run's typedoc result (started by whoever asks first); typedoc's colours are stripped from its output. */
+export async function apiReference(dir: string): Promise<ApiReference> {
+  const { json, html, typedocArgs, ...job } = spec(dir);
+  const result = await sharedJob(dir, job);
+  // eslint-disable-next-line no-control-regex
+  return { ...result, output: result.output.replace(/\x1b\[[0-9;]*m/g, ''), args: typedocArgs, json, html };
+}
