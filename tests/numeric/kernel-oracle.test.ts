@@ -36,9 +36,16 @@ const quarter = (t: Terms): Terms => ({ I: t.I.map((i) => Math.round(4 * i)), J:
 const abs = (t: Terms): Terms => ({ I: t.I, J: t.J, n: t.n.map(Math.abs) });
 
 type Range = readonly [number, number];
-const within = (a: number, b: number, size: number) => {
-  if (!(Math.abs(a - b) <= 1e-13 * size)) expect.fail(`kernel ${a} vs loop ${b}: difference ${a - b} exceeds 1e-13 of the term size ${size}`);
+const within = (a: number, b: number, size: number, tol = 1e-13) => {
+  if (!(Math.abs(a - b) <= tol * size)) expect.fail(`kernel ${a} vs loop ${b}: difference ${a - b} exceeds ${tol} of the term size ${size}`);
 };
+/**
+ * The fluids' residual parts: near δ = 1 the IAPWS-95 non-analytic terms (Δ^b, with Δ small) have
+ * derivatives of size 1e19 and more, evaluated by different operation orders in the kernel and the
+ * loop; a difference of 1.02e-13 of the term size was seen there (δ = 0.99962, τ = 2.5415). 1e-12 of
+ * the term size still fails any wrong coefficient or exponent by many orders.
+ */
+const FLUID_TOL = 1e-12;
 
 const sumsCases: [string, Terms, Range, Range][] = [
   ['region1Sums', read('region1'), [1.05, 7.1], [1.0, 3.9]], // x = 7.1 − π (p ≤ 100 MPa), y = τ − 1.222 (273.15–623.15 K)
@@ -175,12 +182,12 @@ describe('Fluid kernels (src/fluids/kernels.generated.ts) against a plain loop',
         fc.pre(Math.abs(delta - 1) > 1e-6);
         residual(delta, tau, a);
         referenceResidual(f.data, delta, tau, b, m);
-        for (let i = 0; i < 6; i++) within(a[i]!, b[i]!, m[i]!);
+        for (let i = 0; i < 6; i++) within(a[i]!, b[i]!, m[i]!, FLUID_TOL);
         ideal(tau, ai);
         referenceIdeal(f.data, tau, b, m);
         for (let i = 0; i < 3; i++) within(ai[i]!, b[i]!, m[i]!);
       }),
-      { numRuns: 300 },
+      { numRuns: 300, examples: [[0.9996175612588436, 2.5415271816758302]] }, // the case the note on FLUID_TOL quotes
     );
   });
 
