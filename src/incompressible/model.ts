@@ -106,7 +106,7 @@ export function entropyChange(m: IncompressibleModel, T1: number, T2: number): n
 
 /**
  * Δh = h(T2, p2) − h(T1, p1) in J/kg: ∫c dT + v(T2)·(p2 − p_ref) − v(T1)·(p1 − p_ref), p_ref =
- * {@link REFERENCE_PRESSURE}; for constant density ∫c dT + v·(p2 − p1). A difference of one state
+ * `REFERENCE_PRESSURE` (1 atm); for constant density ∫c dT + v·(p2 − p1). A difference of one state
  * function (see the module comment), so it is additive and path-independent.
  * @example
  * ```ts
