@@ -13,7 +13,10 @@
 import { describeValue, readFlag, readOptions, readPair } from '../core/read.js';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
 import { heatCapacityAt } from '../incompressible/model.js';
-import { lookupIncompressible } from '../incompressible/catalogue.js';
+import { compileChecked } from '../incompressible/compile.js';
+import type { IncompressibleDefinition } from '../incompressible/schema.js';
+// the generated liquid water alone (not the whole catalogue, which would bring every substance's data into heatstate/water)
+import liquidWater from '../../data/incompressible/water.json';
 import { Quantity, readQuantity, type QuantityLike } from '../units/quantity.js';
 import { P_MAX, T_CRITICAL, T_MIN, T_TRIPLE } from './if97/constants.js';
 import { Status } from '../core/status.js';
@@ -70,10 +73,15 @@ const sat = new WaterProperties();
 const vap = new WaterProperties();
 const exact = new WaterState();
 
-/** The constant c (J/(kg·K)) and v (m³/kg) of incompressible liquid water: the catalogue's values at 25 °C. */
+let water: { c: number; v: number } | undefined;
+
+/** The constant c (J/(kg·K)) and v (m³/kg) of incompressible liquid water: the catalogue's values at 25 °C (its entry `water`, compiled on first use). */
 function incompressibleWater(): { c: number; v: number } {
-  const { model } = lookupIncompressible('water');
-  return { c: heatCapacityAt(model, 298.15), v: model.v };
+  if (water === undefined) {
+    const { model } = compileChecked(liquidWater.substance as unknown as IncompressibleDefinition);
+    water = { c: heatCapacityAt(model, 298.15), v: model.v };
+  }
+  return water;
 }
 
 function readLiquid(state: LiquidStateInput, name: string, fn: string): { T: number; p: number } {

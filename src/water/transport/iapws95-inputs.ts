@@ -8,8 +8,9 @@
  * @module
  */
 import { Status, type StatusCode } from '../../core/status.js';
-import { fluidModel } from '../../fluids/catalogue.js';
-import { FluidContext, FluidState, propertiesAt } from '../../fluids/model.js';
+// the water entry alone, not the fluid catalogue (which would bring every fluid's data into heatstate/water)
+import { water } from '../../fluids/entries/water.js';
+import { FluidContext, FluidModel, FluidState, propertiesAt } from '../../fluids/model.js';
 import { CriticalEnhancementInputs, T_REFERENCE } from './critical.js';
 
 /** Scratch of {@link iapws95EnhancementInputs}: the IAPWS-95 context and two states. Reuse one. */
@@ -20,9 +21,12 @@ export class Iapws95InputsWork {
   private context: FluidContext | undefined;
   /** The IAPWS-95 context, built on first use (loads the water equation). */
   get ctx(): FluidContext {
-    return (this.context ??= new FluidContext(fluidModel('water')!));
+    return (this.context ??= new FluidContext((iapws95 ??= new FluidModel('water', water.definition(), water.residual, water.ideal))));
   }
 }
+
+/** IAPWS-95 water, compiled on first use and shared by every work object (a model is immutable). */
+let iapws95: FluidModel | undefined;
 
 /**
  * Fills `out` with the enhancement inputs at (T [K], ρ [kg/m³]) from IAPWS-95; the state at (T, ρ) is
