@@ -18,3 +18,13 @@ export function safeParse<R>(schema: { safeParse(data: unknown): R }, data: unkn
   }
   return schema.safeParse(data);
 }
+
+/**
+ * A schema built on first use: `lazySchema(() => z.strictObject(...))` returns a function that builds
+ * the schema the first time it is called and returns the same one after, so importing a module that
+ * validates costs no zod work until something is validated.
+ */
+export function lazySchema<S>(build: () => S): () => S {
+  let schema: S | undefined;
+  return () => (schema ??= build());
+}

@@ -87,7 +87,7 @@ export class PropertyGrid<C extends string = string, X extends string = string, 
     const early: DefinitionIssue[] = [];
     checkNames((data as { columns?: unknown }).columns, ['columns'], early);
     if (early.length > 0) throw new DefinitionError(nameOf(data, 'grid table'), early);
-    const parsed = safeParse(gridSchema, data);
+    const parsed = safeParse(gridSchema(), data);
     if (!parsed.success) throw new DefinitionError('grid table', zodIssues(parsed.error));
     const def = parsed.data;
     const issues: DefinitionIssue[] = [];

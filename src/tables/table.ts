@@ -82,7 +82,7 @@ export class PropertyTable<C extends string = string> {
     const early: DefinitionIssue[] = [];
     checkNames((data as { columns?: unknown }).columns, ['columns'], early);
     if (early.length > 0) throw new DefinitionError(nameOf(data, 'table'), early);
-    const parsed = safeParse(tableSchema, data);
+    const parsed = safeParse(tableSchema(), data);
     if (!parsed.success) throw new DefinitionError('table', zodIssues(parsed.error));
     const def = parsed.data;
     const issues: DefinitionIssue[] = [];

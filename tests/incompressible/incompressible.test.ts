@@ -20,7 +20,7 @@ describe('the built-in catalogue', () => {
   });
   it('every entry passes the schema, names a source, a basis and an uncertainty of a named kind, and compiles', () => {
     for (const def of incompressibleCatalogue()) {
-      expect(incompressibleDefinitionSchema.safeParse(def).success, def.name).toBe(true);
+      expect(incompressibleDefinitionSchema().safeParse(def).success, def.name).toBe(true);
       expect(def.source?.title.length ?? 0, def.name).toBeGreaterThan(10);
       expect(def.basis, def.name).toBeDefined();
       expect(def.uncertainty, def.name).toMatch(/^(fit deviation|source|estimate): .{20,}/);
