@@ -20,7 +20,7 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Bench } from 'tinybench';
 import { checksum, region1BenchInputs } from '../scripts/generate-c-reference.js';
 import { region1, WaterProperties } from '../src/water/if97/index.js';
@@ -186,8 +186,8 @@ function processMs(args: string[]): number {
  * Cold start of a built entry: a fresh Node process that imports it, minus a bare `node` start,
  * alternating the two, median of the differences over `runs` pairs (≥ 10 for figures; one in smoke mode).
  */
-function coldStart(entry: string, runs: number): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
-  const url = new URL(`../dist/${entry}.js`, import.meta.url);
+function coldStart(entry: string, runs: number, file?: URL): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
+  const url = file ?? new URL(`../dist/${entry}.js`, import.meta.url);
   if (!existsSync(url)) return { entry, skipped: 'dist/ not built: run `npm run build` (npm run bench does)' };
   const bare = ['--input-type=module', '-e', ''];
   const load = ['--input-type=module', '-e', `await import(${JSON.stringify(url.href)});`];
@@ -205,13 +205,22 @@ function coldStart(entry: string, runs: number): { entry: string; medianMs: numb
 
 // targets: 15 ms for the root entry, 8 ms for each subpath (the difference to a bare node start)
 const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map((e) => coldStart(e, plan.coldRuns));
+// the floor: an empty ES module measured the same way (Node's own work to load any module after a
+// bare start, which no library can remove), printed beside the entries so they can be read against it
+const emptyDir = mkdtempSync(join(os.tmpdir(), 'heatstate-cold-'));
+const emptyModule = pathToFileURL(join(emptyDir, 'empty.mjs'));
+writeFileSync(emptyModule, 'export {};\n');
+const floor = coldStart('empty ES module', plan.coldRuns, emptyModule);
+rmSync(emptyDir, { recursive: true, force: true });
+const floorMs = 'medianMs' in floor ? floor.medianMs : NaN;
 console.log('');
+console.log(`cold start: import of an empty ES module, median ${floorMs.toFixed(1)} ms over a bare node start (the floor of every figure below)`);
 for (const c of cold) {
   const name = c.entry === 'index' ? 'heatstate' : `heatstate/${c.entry.replace('/index', '')}`;
   if ('medianMs' in c) {
     const target = c.entry === 'index' ? 15 : 8;
     const verdict = ` (target ${target} ms: ${c.medianMs <= target ? 'met' : `missed by ${(c.medianMs / target).toFixed(2)}×`})`;
-    console.log(`cold start: import of ${name}, median ${c.medianMs.toFixed(1)} ms over a bare node start (${c.bareMs.toFixed(1)} ms), ${c.runs.length} runs${verdict}`);
+    console.log(`cold start: import of ${name}, median ${c.medianMs.toFixed(1)} ms over a bare node start (${c.bareMs.toFixed(1)} ms), ${(c.medianMs - floorMs).toFixed(1)} ms over the empty module, ${c.runs.length} runs${verdict}`);
   } else {
     console.log(`cold start of ${name}: skipped (${c.skipped})`);
   }
@@ -221,6 +230,6 @@ const cpu = os.cpus()[0]?.model ?? 'unknown';
 const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
   outPath,
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, rows }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, coldStartFloorMs: floorMs, rows }, null, 2)}\n`,
 );
 console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

@@ -34,5 +34,7 @@ describe('bench/ (figures only: nothing here asserts a time)', () => {
     expect(results.coldStart.map((c) => c.entry)).toEqual(['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index']);
     // one pair of processes per entry: the difference is a number (it may be noise), never a skip
     for (const c of results.coldStart) expect(Number.isFinite(c.medianMs), `${c.entry}: ${c.skipped ?? ''}`).toBe(true);
+    // the floor the entries are read against: an empty ES module, measured the same way
+    expect(Number.isFinite((results as unknown as { coldStartFloorMs: number }).coldStartFloorMs)).toBe(true);
   }, 300_000);
 });
