@@ -46,9 +46,13 @@ describe('consumer bundles', () => {
     // dilute-gas transport facade every gas now carries (Lennard-Jones data, collision integral, mixing)
     expect(kB).toBeLessThan(29);
   });
-  it('heatstate/incompressible carries no decimal.js', async () => {
+  it('heatstate/incompressible: at most 64 kB gzipped, no decimal.js', async () => {
     const js = await bundle(`import { incompressible } from 'heatstate/incompressible'; console.log(incompressible('water'));`);
     expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
+    // 60.9 kB measured: the catalogue's data (with transport tables), zod for user definitions, the
+    // brine grids, and for liquid water's transport IF97 regions 1 and 4, IAPWS R12-08/R15-11 and the
+    // IAPWS-95 water equation (its entry alone, not the fluid catalogue)
+    expect(gzipSync(js).length / 1024).toBeLessThan(64);
   });
 });
 
@@ -80,9 +84,17 @@ describe('water bundle', () => {
     expect(js).not.toMatch(/DecimalError|toSignificantDigits/);
     expect(js).not.toContain('stainless steel');
     expect(js).not.toMatch(/water-saturation-by|superheated-vapor/);
-    // 67.4 kB measured: from 40 kB with the units above and the transport properties on every state
+    // the IAPWS-95 enhancement inputs take the water equation alone, not the fluid catalogue
+    expect(js).not.toMatch(/nitrogen/i);
+    // 65.8 kB measured (67.4 before the IAPWS-95 enhancement inputs stopped loading the fluid catalogue): from
+    // 40 kB with the units above and the transport properties on every state
     // (IAPWS R12-08, R15-11, R1-76 and the IAPWS-95 equation their critical enhancements need)
     expect(gzipSync(js).length / 1024).toBeLessThan(70);
+  });
+  it('heatstate/water with the liquid-water shortcuts: no incompressible catalogue, zod or nitrogen equation', async () => {
+    const js = await bundle(`import { water, approximateLiquid, compareLiquidProcess } from 'heatstate/water'; console.log(water.state({ p: '1 MPa', T: '500 K' }), approximateLiquid, compareLiquidProcess);`);
+    expect(js).not.toContain('stainless steel');
+    expect(js).not.toMatch(/ZodError|nitrogen/i);
   });
   it('heatstate/ideal-gas pulls in no water code', async () => {
     const js = await bundle(`import { idealGas } from 'heatstate/ideal-gas'; console.log(idealGas('N2').cp('300 K'));`);
