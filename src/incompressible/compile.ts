@@ -13,21 +13,13 @@ import type { Dimension } from '../units/dimensions.js';
 import { piecewiseLinear } from '../numeric/interpolate.js';
 import { heatCapacityAt, type IncompressibleModel } from './model.js';
 import type { IncompressibleDefinition } from './schema.js';
-import { compileTransport, provenanceOf, type CompiledTransport } from './transport-data.js';
+import { compileTransport, provenanceOf, type CompiledTransport, type TransportSource } from './transport-data.js';
 
 /**
- * Where a substance's numbers come from, how they were obtained, and how far to trust them
- * (the same shape as the ideal-gas species' `provenance`).
+ * Where a substance's numbers come from, how they were obtained, and how far to trust them (the same
+ * shape as the ideal-gas species' `provenance`, and the same record as each transport property's).
  */
-export interface SubstanceSource {
-  readonly title: string;
-  readonly authors?: string;
-  readonly year?: number;
-  readonly table?: string;
-  readonly basis: 'published' | 'computed' | 'from memory' | 'common practice' | 'measured' | 'user';
-  /** Starts with its kind: `fit deviation:`, `source:` or `estimate:`; `'not stated'` for a user definition without one. */
-  readonly uncertainty: string;
-}
+export type SubstanceSource = TransportSource;
 
 /** A compiled substance: the SI model plus what describes it. */
 export interface CompiledSubstance {

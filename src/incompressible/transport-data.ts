@@ -12,7 +12,7 @@ import type { Quantity } from '../units/quantity.js';
 import type { DefinitionSource, IncompressibleDefinition, TransportField } from './schema.js';
 import { missingCurve, type PropertyCurve } from './transport.js';
 
-/** Where one transport property's numbers come from (same shape as a substance's source). */
+/** Where a substance's or one of its transport properties' numbers come from: source, basis and uncertainty. */
 export interface TransportSource {
   readonly title: string;
   readonly authors?: string;
