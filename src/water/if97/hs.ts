@@ -13,13 +13,14 @@ import { Status, type StatusCode } from '../../core/status.js';
 import { region1PressureHS, region2PressureHS } from './backward-hs.js';
 import { b23Pressure } from './b23.js';
 import { b13EnthalpyHS, b23TemperatureHS, region3aPressureHS, saturatedLiquidEnthalpyHS, saturatedVaporEnthalpyHS, saturationTemperatureHS } from './backward-hs-region3.js';
-import { P_MAX, P_SEARCH_MIN, S_B13_MAX, S_B13_MIN, S_CRITICAL, S_VAPOR_MAX, T_CRITICAL, T_MIN } from './constants.js';
+import { P_MAX, P_SEARCH_MIN, S_B13_MAX, S_B13_MIN, S_CRITICAL, S_VAPOR_MAX, T_13, T_CRITICAL, T_MIN } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
 import { BY_H } from './isobar-residual.js';
 import { stateOnIsobar } from './isobar.js';
 import { saturationPressure } from './region4.js';
 import { region3bStartPressureHS } from './start-region3b-hs.js';
-import { P_SAT_MIN } from './saturation.js';
+import { mixPhases, P_SAT_MIN } from './saturation.js';
+import { evaluateForward } from './regions.js';
 import type { WaterState } from './water-state.js';
 
 /** Pressures tried, highest first, to find one where a (p, h) state exists for h. */
@@ -91,15 +92,8 @@ function pressureSpanFor(h: number, ctx: SolverContext): boolean {
  * p_B23(T_B23(h, s)) (SR4-04 Eq. 8 within its box 2.563–2.812 MJ/kg).
  */
 function startPressureHS(h: number, s: number): number {
-  if (s >= 0 && s <= S_VAPOR_MAX) {
-    const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
-    // compressed liquid at low pressure lies barely above h′(s): keep 1 kJ/kg clear of the line
-    // (the backward boundary equations are good to a few hundredths of that)
-    if (h < hSat - 1e3) {
-      const T = saturationTemperatureHS(h, s);
-      if (T >= T_MIN && T <= T_CRITICAL) return saturationPressure(T);
-    }
-  }
+  const Ts = twoPhaseStartTemperature(h, s);
+  if (!Number.isNaN(Ts)) return saturationPressure(Ts);
   if (s <= S_CRITICAL) {
     // B13 in (h, s) spans 3.397–3.778 kJ/(kg·K); below it every liquid state is in region 1
     const inRegion1 = s < S_B13_MIN || (s <= S_B13_MAX && h <= b13EnthalpyHS(s));
@@ -112,11 +106,69 @@ function startPressureHS(h: number, s: number): number {
 }
 
 /**
+ * T_sat(h, s) (SR4-04) for a state below the saturation line of the h–s plane (SR4-04 h′(s), h″(s)),
+ * NaN elsewhere. Compressed liquid at low pressure lies barely above h′(s): the test keeps 1 kJ/kg
+ * clear of the line (the backward boundary equations are good to a few hundredths of that).
+ */
+function twoPhaseStartTemperature(h: number, s: number): number {
+  if (!(s >= 0 && s <= S_VAPOR_MAX)) return NaN;
+  const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
+  if (!(h < hSat - 1e3)) return NaN;
+  const T = saturationTemperatureHS(h, s);
+  return T >= T_MIN && T <= T_CRITICAL ? T : NaN;
+}
+
+/**
+ * The difference of the qualities that h and s give on the saturation line at T ≤ 623.15 K
+ * (p_s(T) from region 4, the saturated phases from regions 1 and 2, left in ctx.scratch and
+ * ctx.scratchB): zero at the two-phase state with this h and s.
+ */
+function qualityGap(h: number, s: number, T: number, ctx: SolverContext): number {
+  const p = saturationPressure(T);
+  const liquid = evaluateForward(1, p, T, ctx.scratch);
+  const vapor = evaluateForward(2, p, T, ctx.scratchB);
+  return (h - liquid.h) / (vapor.h - liquid.h) - (s - liquid.s) / (vapor.s - liquid.s);
+}
+
+/**
+ * Two-phase (h, s) states up to 623.15 K without (p, h) flashes: the saturation temperature where the
+ * qualities from h and from s agree, by secant steps from T_sat(h, s) (SR4-04), each step one p_s(T)
+ * and the two saturated phases. Accepted only when s comes back to the Newton path's rounding level;
+ * anything else hands over to that path.
+ */
+function twoPhaseHS(h: number, s: number, T0: number, out: WaterState, ctx: SolverContext): StatusCode {
+  if (!(T0 < T_13 - 1e-3)) return Status.noConvergence;
+  let a = T0;
+  let b = T0 + 1e-4;
+  let fa = qualityGap(h, s, a, ctx);
+  let fb = qualityGap(h, s, b, ctx);
+  for (let i = 0; i < 12 && fb !== 0 && fb !== fa; i++) {
+    const next = b - (fb * (b - a)) / (fb - fa);
+    if (!(next >= T_MIN && next < T_13)) return Status.noConvergence;
+    a = b;
+    fa = fb;
+    b = next;
+    fb = qualityGap(h, s, b, ctx);
+    if (Math.abs(b - a) <= 1e-13 * b) break;
+  }
+  qualityGap(h, s, b, ctx);
+  const liquid = ctx.scratch;
+  const vapor = ctx.scratchB;
+  const x = (h - liquid.h) / (vapor.h - liquid.h);
+  if (!(x >= 0 && x <= 1)) return Status.noConvergence;
+  const sBack = liquid.s + x * (vapor.s - liquid.s);
+  if (!(Math.abs(sBack - s) <= 1e-13 * (Math.abs(s) + 1e3))) return Status.noConvergence;
+  return mixPhases(x, liquid, vapor, out);
+}
+
+/**
  * Fast path of the (h, s) flash: Newton steps on ln p from {@link startPressureHS}, with
  * (∂s/∂ln p)_h = −p·v/T, each step a (p, h) flash. Any failed step hands over to the bracketed search.
  */
 function newtonHS(h: number, s: number, out: WaterState, ctx: SolverContext): StatusCode {
-  let p = startPressureHS(h, s);
+  const Ts = twoPhaseStartTemperature(h, s);
+  if (!Number.isNaN(Ts) && twoPhaseHS(h, s, Ts, out, ctx) === Status.ok) return Status.ok;
+  let p = Number.isNaN(Ts) ? startPressureHS(h, s) : saturationPressure(Ts);
   if (!(p > P_SEARCH_MIN && p <= P_MAX)) return Status.outOfRange;
   for (let i = 0; i < 12; i++) {
     if (stateOnIsobar(p, h, BY_H, out, ctx) !== Status.ok) return Status.noConvergence;
