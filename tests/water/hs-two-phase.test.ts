@@ -1,14 +1,14 @@
 /**
- * The two-phase (h, s) flash below 623.15 K (src/water/if97/hs.ts, secant steps in T on the saturation
- * line from SR4-04's T_sat(h, s)). A consistency check against IF97's own equations, no outside
- * values: a mixture built from the (p, x) state comes back as the same pressure and quality, in
- * region 4, to the rounding of the mixture's h and s.
+ * The two-phase (h, s) flash (src/water/if97/hs.ts: below 623.15 K secant steps in T on the saturation
+ * line from SR4-04's T_sat(h, s); above, the region 3 Newton path of hs-region3.ts must hand such
+ * states over). Consistency checks against IF97's own equations, no outside values: a mixture built
+ * from a (p, x) or (T, x) state comes back two-phase with its pressure and quality.
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Status } from '../../src/core/status.js';
 import { stateFromHS } from '../../src/water/if97/hs.js';
-import { stateFromPX } from '../../src/water/if97/quality.js';
+import { stateFromPX, stateFromTX } from '../../src/water/if97/quality.js';
 import { WaterState } from '../../src/water/if97/water-state.js';
 
 describe('(h, s) flash of two-phase states up to 623.15 K', () => {
@@ -30,6 +30,25 @@ describe('(h, s) flash of two-phase states up to 623.15 K', () => {
         expect(Math.abs(out.s - mix.s)).toBeLessThanOrEqual(1e-12 * (Math.abs(mix.s) + 1e3));
       }),
       { numRuns: 2000 },
+    );
+  });
+});
+
+describe('(h, s) flash of two-phase states above 623.15 K (region 3 temperatures)', () => {
+  const mix = new WaterState();
+  const out = new WaterState();
+  // the region 3 Newton path in (ρ, T) must not take a point on the region 3 equation's loop inside
+  // the dome (metastable or unstable) for a single-phase answer: every such mixture comes back two-phase
+  it('a mixture from (T, x) comes back two-phase with its x, up to 1 mK below T_c', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 623.16, max: 647.095, noNaN: true }), fc.double({ min: 0.001, max: 0.999, noNaN: true }), (T, x) => {
+        expect(stateFromTX(T, x, mix)).toBe(Status.ok);
+        expect(stateFromHS(mix.h, mix.s, out)).toBe(Status.ok);
+        expect(out.region, `T = ${T}, x = ${x}`).toBe(4);
+        expect(Math.abs(out.x - x), `T = ${T}, x = ${x}`).toBeLessThan(1e-6);
+      }),
+      // two mixtures the region 3 path once took for single-phase vapour on the equation's loop
+      { numRuns: 3000, examples: [[645.8821909032034, 0.42227967437736863], [646.5718291529645, 0.4540293887257576]] },
     );
   });
 });

@@ -19,6 +19,7 @@ import { BY_H } from './isobar-residual.js';
 import { stateOnIsobar } from './isobar.js';
 import { saturationPressure } from './region4.js';
 import { region3bStartPressureHS } from './start-region3b-hs.js';
+import { region3HS } from './hs-region3.js';
 import { mixPhases, P_SAT_MIN } from './saturation.js';
 import { evaluateForward } from './regions.js';
 import type { WaterState } from './water-state.js';
@@ -94,15 +95,21 @@ function pressureSpanFor(h: number, ctx: SolverContext): boolean {
 function startPressureHS(h: number, s: number): number {
   const Ts = twoPhaseStartTemperature(h, s);
   if (!Number.isNaN(Ts)) return saturationPressure(Ts);
+  const p3 = region3StartPressureHS(h, s);
+  if (!Number.isNaN(p3)) return p3;
+  return s <= S_CRITICAL ? region1PressureHS(h, s) : region2PressureHS(h, s);
+}
+
+/** The starting pressure of a single-phase state the backward equations place in region 3, NaN for other states (see {@link startPressureHS}). */
+function region3StartPressureHS(h: number, s: number): number {
   if (s <= S_CRITICAL) {
     // B13 in (h, s) spans 3.397–3.778 kJ/(kg·K); below it every liquid state is in region 1
     const inRegion1 = s < S_B13_MIN || (s <= S_B13_MAX && h <= b13EnthalpyHS(s));
-    return inRegion1 ? region1PressureHS(h, s) : region3aPressureHS(h, s);
+    return inRegion1 ? NaN : region3aPressureHS(h, s);
   }
   if (s < 5.048e3 || (s <= 5.261e3 && h < 2.563e6)) return region3bStartPressureHS(h, s);
-  const p2 = region2PressureHS(h, s);
-  if (s <= 5.261e3 && h <= 2.812e6 && p2 > b23Pressure(b23TemperatureHS(h, s))) return region3bStartPressureHS(h, s);
-  return p2;
+  if (s <= 5.261e3 && h <= 2.812e6 && region2PressureHS(h, s) > b23Pressure(b23TemperatureHS(h, s))) return region3bStartPressureHS(h, s);
+  return NaN;
 }
 
 /**
@@ -168,6 +175,8 @@ function twoPhaseHS(h: number, s: number, T0: number, out: WaterState, ctx: Solv
 function newtonHS(h: number, s: number, out: WaterState, ctx: SolverContext): StatusCode {
   const Ts = twoPhaseStartTemperature(h, s);
   if (!Number.isNaN(Ts) && twoPhaseHS(h, s, Ts, out, ctx) === Status.ok) return Status.ok;
+  const p3 = Number.isNaN(Ts) ? region3StartPressureHS(h, s) : NaN;
+  if (!Number.isNaN(p3) && region3HS(h, s, p3, out, ctx) === Status.ok) return Status.ok;
   let p = Number.isNaN(Ts) ? startPressureHS(h, s) : saturationPressure(Ts);
   if (!(p > P_SEARCH_MIN && p <= P_MAX)) return Status.outOfRange;
   for (let i = 0; i < 12; i++) {
