@@ -158,7 +158,7 @@ function twoPhaseHS(h: number, s: number, T0: number, out: WaterState, ctx: Solv
     fb = qualityGap(h, s, b, ctx);
     if (Math.abs(b - a) <= 1e-13 * b) break;
   }
-  qualityGap(h, s, b, ctx);
+  // the saturated phases at b are still in the scratch objects (b was evaluated last)
   const liquid = ctx.scratch;
   const vapor = ctx.scratchB;
   const x = (h - liquid.h) / (vapor.h - liquid.h);
