@@ -57,12 +57,12 @@ describe('consumer bundles', () => {
 });
 
 describe('humid-air bundle', () => {
-  // the goal of the humid-air issue is 20 kB, not yet met: 33.4 kB measured. Leave-one-out shares of
-  // the gzipped bundle: the units layer about 12 kB (its own entry bundles to 12.2 kB), IF97 regions 1
-  // and 2 (condensate and steam enthalpies of the processes) 6.7 kB with their data, of which 0.7 kB is
-  // the metastable-vapour kernel region2 references, the humid-air facade 5.7 kB, its SI core 4.3 kB,
-  // the facade kit and errors 3.3 kB; humidAir.state alone bundles to 20.7 kB.
-  it('heatstate/humid-air: at most 35 kB gzipped, without decimal.js, zod, substance data, steam tables, IF97 regions 3 and 5 or the provenance text of its data files', async () => {
+  // the goal of the humid-air issue is 20 kB, not yet met. Leave-one-out shares of the gzipped bundle
+  // (at 33.4 kB): the units layer about 12 kB (its own entry bundles to 12.2 kB), IF97 regions 1 and 2
+  // (condensate and steam enthalpies of the processes) 6.7 kB with their data, the humid-air facade
+  // 5.7 kB, its SI core 4.3 kB, the facade kit and errors 3.3 kB; since then region 2 no longer drags
+  // the metastable-vapour kernel along, and regions 1, 2 and 4 import their data by name.
+  it('heatstate/humid-air: at most 33 kB gzipped, without decimal.js, zod, substance data, steam tables, IF97 regions 3 and 5 or the provenance text of its data files', async () => {
     const js = await bundle(`import { humidAir, humidAirBatch } from 'heatstate/humid-air';
       const s = humidAir.state({ T: '30 °C', RH: 0.5 });
       console.log(s, humidAir.coolingCoil({ inlet: s, flow: '1 kg/s', ADP: '10 °C', bypassFactor: 0.1 }), humidAirBatch);`);
@@ -73,8 +73,9 @@ describe('humid-air bundle', () => {
     expect(js).not.toMatch(/1\.0658070028513|-0\.13179983674201e2|-13\.179983674201/);
     // the humid-air data files are imported by name: their numbers ship, their source and uncertainty text does not
     expect(js).not.toMatch(/Melting and Sublimation Curves|equation numbers from memory/);
-    // 33.4 kB measured (from 33.9 kB: the data files imported by name), above the 20 kB target; this ceiling guards against growth
-    expect(gzipSync(js).length / 1024).toBeLessThan(35);
+    // 31.8 kB measured (33.9 → 33.4 kB with the humid-air data files imported by name, → 31.8 kB with
+    // the IF97 changes above), above the 20 kB target; this ceiling guards against growth
+    expect(gzipSync(js).length / 1024).toBeLessThan(33);
   });
 });
 

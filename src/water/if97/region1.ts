@@ -6,13 +6,14 @@
  *
  * @module
  */
-import data from '../../../data/if97/region1.json';
+// named imports: a bundle keeps the constants the code reads, not the coefficient arrays (held by the generated kernels)
+import { pStar, TStar } from '../../../data/if97/region1.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
 import { region1Sums } from './kernels.generated.js';
 
-const P_STAR = data.pStar;
-const T_STAR = data.TStar;
+const P_STAR = pStar;
+const T_STAR = TStar;
 const g = new Float64Array(6);
 
 /**

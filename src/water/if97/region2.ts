@@ -9,35 +9,34 @@
  *
  * @module
  */
-import data from '../../../data/if97/region2.json';
+// named imports: a bundle keeps the constants the code reads, not the coefficient arrays (held by the generated kernels)
+import { metastable, n0, pStar, TStar } from '../../../data/if97/region2.json';
 import { fillFromIdealAndResidual } from './gibbs-ideal-residual.js';
 import type { WaterProperties } from './properties.js';
 import { region2IdealSums, region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
 
-const P_STAR = data.pStar;
-const T_STAR = data.TStar;
+const P_STAR = pStar;
+const T_STAR = TStar;
 // the metastable-vapour equation replaces n°1 and n°2 (the τ⁰ and τ¹ terms) of the ideal-gas part
-const META_DN1 = data.metastable.n0_1 - data.n0[0]!;
-const META_DN2 = data.metastable.n0_2 - data.n0[1]!;
+const META_DN1 = metastable.n0_1 - n0[0]!;
+const META_DN2 = metastable.n0_2 - n0[1]!;
 const g = new Float64Array(3);
 const r = new Float64Array(6);
 
-function evaluate(p: number, T: number, out: WaterProperties, metastable: boolean): WaterProperties {
-  const pi = p / P_STAR;
-  const tau = T_STAR / T;
+/**
+ * The equation's properties from its ideal-gas sums and the residual sums in `r` (either set): split
+ * by equation so that a bundle using region 2 alone leaves out the metastable-vapour kernel.
+ */
+function fill(p: number, T: number, pi: number, tau: number, metastable: boolean, out: WaterProperties): WaterProperties {
   // ideal-gas part γ° = ln π + Σ n°ᵢ τ^J°ᵢ
   region2IdealSums(tau, g);
   let g0 = Math.log(pi) + g[0]!;
   let g0Tau = g[1]!;
-  const g0TauTau = g[2]!;
   if (metastable) {
     g0 += META_DN1 + META_DN2 * tau;
     g0Tau += META_DN2;
-    region2MetastableSums(pi, tau - 0.5, r);
-  } else {
-    region2ResidualSums(pi, tau - 0.5, r);
   }
-  return fillFromIdealAndResidual(p, T, pi, tau, g0, g0Tau, g0TauTau, r, out);
+  return fillFromIdealAndResidual(p, T, pi, tau, g0, g0Tau, g[2]!, r, out);
 }
 
 /**
@@ -48,7 +47,10 @@ function evaluate(p: number, T: number, out: WaterProperties, metastable: boolea
  * ```
  */
 export function region2(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, false);
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  region2ResidualSums(pi, tau - 0.5, r);
+  return fill(p, T, pi, tau, false, out);
 }
 
 /**
@@ -60,5 +62,8 @@ export function region2(p: number, T: number, out: WaterProperties): WaterProper
  * ```
  */
 export function region2Metastable(p: number, T: number, out: WaterProperties): WaterProperties {
-  return evaluate(p, T, out, true);
+  const pi = p / P_STAR;
+  const tau = T_STAR / T;
+  region2MetastableSums(pi, tau - 0.5, r);
+  return fill(p, T, pi, tau, true, out);
 }

@@ -6,9 +6,9 @@
  *
  * @module
  */
-import data from '../../../data/if97/region4.json';
+import { n } from '../../../data/if97/region4.json';
 
-const [n1, n2, n3, n4, n5, n6, n7, n8, n9, n10] = data.n as [number, number, number, number, number, number, number, number, number, number];
+const [n1, n2, n3, n4, n5, n6, n7, n8, n9, n10] = n as [number, number, number, number, number, number, number, number, number, number];
 
 /**
  * Saturation pressure p_s(T) in Pa, T in K (Eq. 30).
