@@ -16,6 +16,7 @@ const integration = [
   'tests/cli.test.ts',
   'tests/bundle.test.ts',
   'tests/docs/api.test.ts',
+  'tests/docs/examples-built.test.ts',
   'tests/errors-dual.test.ts',
 ];
 

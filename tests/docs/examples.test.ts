@@ -417,8 +417,22 @@ for (const f of sourceFiles) {
   if (rel(f) === 'src/cli/main.ts') continue; // runs the command line when imported
   modules.set(rel(f), (await import(pathToFileURL(f).href)) as Module);
 }
-const entryModules = manifest.entries.map((e) => [specifier(e), modules.get(e.source)!] as const);
+/**
+ * Set by tests/docs/examples-built.test.ts (integration project): the entries' names then come from
+ * the built dist/, as a user's import resolves to the published package, and only the low-level names
+ * an example uses beyond the entries come from the source tree.
+ */
+const fromDist = (globalThis as { heatstateExamplesFromDist?: boolean }).heatstateExamplesFromDist === true;
+const entryModules = await Promise.all(
+  manifest.entries.map(async (e) => [specifier(e), fromDist ? ((await import(pathToFileURL(join(root, 'dist', `${e.out}.js`)).href)) as Module) : modules.get(e.source)!] as const),
+);
 const byName = new Map(entryModules);
+if (fromDist) {
+  it('takes every entry from the built dist/, not from the source tree', () => {
+    for (const e of manifest.entries) expect(byName.get(specifier(e)), e.subpath).not.toBe(modules.get(e.source));
+    expect(Object.keys(byName.get('heatstate')!)).toEqual(expect.arrayContaining(['water', 'quantity', 'idealGas']));
+  });
+}
 const errors = modules.get('src/errors.ts')!;
 
 function scopeFor(example: Example, names: Set<string>): Module {
