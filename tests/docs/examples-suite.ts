@@ -418,9 +418,10 @@ for (const f of sourceFiles) {
   modules.set(rel(f), (await import(pathToFileURL(f).href)) as Module);
 }
 /**
- * Set by tests/docs/examples-built.test.ts (integration project): the entries' names then come from
+ * Set by tests/docs/examples-built.test.ts, which runs this suite: the entries' names then come from
  * the built dist/, as a user's import resolves to the published package, and only the low-level names
- * an example uses beyond the entries come from the source tree.
+ * an example uses beyond the entries come from the source tree. Unset (a run of this module on its
+ * own), everything comes from the source tree.
  */
 const fromDist = (globalThis as { heatstateExamplesFromDist?: boolean }).heatstateExamplesFromDist === true;
 const entryModules = await Promise.all(
