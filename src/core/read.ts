@@ -212,14 +212,24 @@ export function readOptions<T extends object>(input: unknown, parameter: string,
  * ```
  */
 export function readPair(input: unknown, fn: string, accepted: readonly (readonly string[])[]): string {
-  const list = accepted.map((set) => `{ ${set.join(', ')} }`).join(', ');
+  // the hot path (a valid pair) builds no strings and no closures: the lists are made for errors only
+  const listOf = () => accepted.map((set) => `{ ${set.join(', ')} }`).join(', ');
   if (typeof input !== 'object' || input === null || Array.isArray(input)) {
-    throw new InvalidInputError('input.invalid', 'input', `${fn} takes one of ${list}; got ${describeValue(input)}`);
+    throw new InvalidInputError('input.invalid', 'input', `${fn} takes one of ${listOf()}; got ${describeValue(input)}`);
   }
-  const given = Object.keys(input).filter((k) => (input as Record<string, unknown>)[k] !== undefined);
-  for (const set of accepted) {
-    if (set.length === given.length && set.every((k) => given.includes(k))) return set.join(',');
+  const record = input as Record<string, unknown>;
+  const keys = Object.keys(record);
+  let count = 0;
+  for (let i = 0; i < keys.length; i++) if (record[keys[i]!] !== undefined) count++;
+  for (let s = 0; s < accepted.length; s++) {
+    const set = accepted[s]!;
+    if (set.length !== count) continue;
+    let all = true;
+    for (let j = 0; j < set.length && all; j++) all = record[set[j]!] !== undefined && Object.hasOwn(record, set[j]!);
+    if (all) return pairKey(set);
   }
+  const list = listOf();
+  const given = keys.filter((k) => record[k] !== undefined);
   const unknown = given.filter((k) => !accepted.some((set) => set.includes(k)));
   const why =
     unknown.length > 0
@@ -228,6 +238,18 @@ export function readPair(input: unknown, fn: string, accepted: readonly (readonl
         ? 'that is more inputs than a state needs (over-determined): give exactly one of the sets'
         : 'that is not enough to fix a state (under-determined)';
   throw new InvalidInputError('input.invalid', 'input', `${fn} got { ${given.join(', ')} }: ${why}; it takes ${list}`);
+}
+
+const PAIR_KEYS = new WeakMap<readonly string[], string>();
+
+/** `set.join(',')`, made once per accepted set (the sets are module constants of each facade). */
+function pairKey(set: readonly string[]): string {
+  let key = PAIR_KEYS.get(set);
+  if (key === undefined) {
+    key = set.join(',');
+    PAIR_KEYS.set(set, key);
+  }
+  return key;
 }
 
 /** A short description of any value, for messages (never throws). */

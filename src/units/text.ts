@@ -28,47 +28,48 @@ export function splitQuantityText(text: string, counter?: ParseCounter): [number
   if (text.length > QUANTITY_TEXT_MAX_LENGTH) {
     throw new UnitError('unit.syntax', previewText(text), `quantity text "${previewText(text)}" is longer than ${QUANTITY_TEXT_MAX_LENGTH} characters`);
   }
-  const fail = (why: string): never => {
-    throw new UnitError('unit.syntax', text, `cannot read "${previewText(text)}" as a quantity: ${why}; write a number followed by a unit, like "500 psia" or "300 °F"`);
-  };
+  // no closures here: this runs on every quantity read from text
   const n = text.length;
   let i = 0;
-  const step = (): void => {
-    i++;
-    if (counter) counter.steps++;
-  };
-  while (i < n && isSpace(text.charCodeAt(i))) step();
+  while (i < n && isSpace(text.charCodeAt(i))) i++;
   const start = i;
-  if (text[i] === '+' || text[i] === '-') step();
-  if (text[i] === '0' && /[xXbBoO]/.test(text[i + 1] ?? '')) fail('hexadecimal, octal and binary numbers are not accepted');
+  if (text[i] === '+' || text[i] === '-') i++;
+  if (text[i] === '0' && /[xXbBoO]/.test(text[i + 1] ?? '')) failQuantity(text, 'hexadecimal, octal and binary numbers are not accepted', counter, i);
   let digits = 0;
   while (i < n && isDigitCode(text.charCodeAt(i))) {
-    step();
+    i++;
     digits++;
   }
   if (text[i] === '.') {
-    step();
+    i++;
     while (i < n && isDigitCode(text.charCodeAt(i))) {
-      step();
+      i++;
       digits++;
     }
   }
-  if (digits === 0) fail('no number');
+  if (digits === 0) failQuantity(text, 'no number', counter, i);
   if (text[i] === 'e' || text[i] === 'E') {
     let j = i + 1;
     if (text[j] === '+' || text[j] === '-') j++;
     if (isDigitCode(text.charCodeAt(j))) {
-      while (i < j) step();
-      while (i < n && isDigitCode(text.charCodeAt(i))) step();
+      i = j;
+      while (i < n && isDigitCode(text.charCodeAt(i))) i++;
     }
   }
   const numberText = text.slice(start, i);
-  if (numberText.length > 64) fail('a number of more than 64 characters');
+  if (numberText.length > 64) failQuantity(text, 'a number of more than 64 characters', counter, i);
   const unit = text.slice(i).trim();
-  if (counter) counter.steps += n - i;
+  // one step per character: the number's characters scanned, the unit's handed on
+  if (counter) counter.steps += n;
   const value = Number(numberText);
   if (value === 0 && /[1-9]/.test(numberText.split(/[eE]/)[0]!)) {
     throw new InvalidInputError('input.invalid', 'value', `${numberText} underflows to 0 in double precision; no measurement is that small`);
   }
   return [value, unit === '' ? '1' : unit];
+}
+
+/** The syntax error of {@link splitQuantityText}, after `scanned` characters. */
+function failQuantity(text: string, why: string, counter: ParseCounter | undefined, scanned: number): never {
+  if (counter) counter.steps += scanned;
+  throw new UnitError('unit.syntax', text, `cannot read "${previewText(text)}" as a quantity: ${why}; write a number followed by a unit, like "500 psia" or "300 °F"`);
 }
