@@ -117,5 +117,8 @@ export function sameShape(a: Dimension, b: Dimension): boolean {
 
 /** True for a name in {@link DIMENSIONS}. */
 export function isDimension(name: unknown): name is Dimension {
-  return typeof name === 'string' && Object.prototype.hasOwnProperty.call(DIMENSIONS, name);
+  return typeof name === 'string' && DIMENSION_NAMES.has(name);
 }
+
+/** The names of {@link DIMENSIONS}, for a fast membership test (every quantity built checks one). */
+const DIMENSION_NAMES: ReadonlySet<string> = new Set(Object.keys(DIMENSIONS));
