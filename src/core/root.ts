@@ -88,7 +88,9 @@ function done(out: RootResult, x: number, iterations: number): StatusCode {
 
 /**
  * Brent's method (inverse quadratic interpolation with bisection safeguards) on [lo, hi] where f(lo)
- * and f(hi) differ in sign. For functions without a cheap derivative.
+ * and f(hi) differ in sign. For functions without a cheap derivative. The root is located to
+ * 2ε|x| + (relTolerance·|x| + absTolerance)/2; a caller that has already evaluated f at the ends
+ * (to choose the bracket) passes those values as `fLo`, `fHi`.
  *
  * @returns {@link Status.ok} with `out.x`; {@link Status.outOfRange} when f does not change sign on
  *   the bracket; {@link Status.invalidInput} when f is not finite at an end; {@link Status.noConvergence}
@@ -100,12 +102,12 @@ function done(out: RootResult, x: number, iterations: number): StatusCode {
  * r.x;   //=> 0.739085133215161
  * ```
  */
-export function brent(f: Residual, lo: number, hi: number, relTolerance: number, out: RootResult): StatusCode {
+export function brent(f: Residual, lo: number, hi: number, relTolerance: number, out: RootResult, absTolerance = 0, fLo?: number, fHi?: number): StatusCode {
   out.iterations = 0;
   let a = lo;
   let b = hi;
-  let fa = f.value(a);
-  let fb = f.value(b);
+  let fa = fLo ?? f.value(a);
+  let fb = fHi ?? f.value(b);
   if (!Number.isFinite(fa) || !Number.isFinite(fb)) return Status.invalidInput;
   if (fa === 0) return done(out, a, 0);
   if (fb === 0) return done(out, b, 0);
@@ -129,7 +131,7 @@ export function brent(f: Residual, lo: number, hi: number, relTolerance: number,
       fb = fc;
       fc = fa;
     }
-    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * relTolerance * Math.abs(b);
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * (relTolerance * Math.abs(b) + absTolerance);
     const m = 0.5 * (c - b);
     if (Math.abs(m) <= tol || fb === 0) return done(out, b, i);
     if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {

@@ -1,7 +1,7 @@
 /**
- * The one-dimensional solves of the humid-air core: Brent's method (R. P. Brent, Algorithms for
- * Minimization without Derivatives, 1973, ch. 4) on a residual picked by a code, so that no closure
- * is created per call. Every residual takes (x, a, b, c, p) as plain numbers.
+ * The one-dimensional solves of the humid-air core: the project's Brent solver (src/core/root.ts) on a
+ * residual picked by a code, held in one reused residual object, so that no closure is created per
+ * call. Every residual takes (x, a, b, c, p) as plain numbers.
  *
  * @module
  */
@@ -14,6 +14,8 @@ import {
   vaporPressureFromHumidityRatio,
 } from './relations.js';
 import { waterSaturationPressure } from './saturation.js';
+import { brent as solveRoot, RootResult, type Residual } from '../../core/root.js';
+import { Status } from '../../core/status.js';
 
 /** Residual codes. */
 export const RESIDUAL = {
@@ -61,74 +63,33 @@ export function residual(kind: number, x: number, a: number, b: number, c: numbe
   }
 }
 
-const MACHINE_EPSILON = 2.220446049250313e-16;
+/** The residual `kind` at fixed (a, b, c, p), as the shared root finder takes it. */
+class HumidAirResidual implements Residual {
+  kind = 0;
+  a = 0;
+  b = 0;
+  c = 0;
+  p = 0;
+  value(x: number): number {
+    return residual(this.kind, x, this.a, this.b, this.c, this.p);
+  }
+}
+
+// scratch of brent below (one call at a time; the core is synchronous)
+const scratchResidual = new HumidAirResidual();
+const scratchRoot = new RootResult();
 
 /**
  * Root of residual `kind` in [x1, x2] given its values f1, f2 there (of opposite sign or zero), to
- * |Δx| ≤ xtol + 4ε|x|. Returns −1 when the bracket holds no sign change or after 100 iterations.
+ * |Δx| ≤ xtol/2 + 2ε|x|, by the project's Brent solver (src/core/root.ts). Returns −1 when the bracket
+ * holds no sign change or the solve does not settle.
  */
 export function brent(kind: number, x1: number, x2: number, f1: number, f2: number, a1: number, b1: number, c1: number, p: number, xtol: number): number {
-  if (f1 === 0) return x1;
-  if (f2 === 0) return x2;
-  if ((f1 > 0 && f2 > 0) || (f1 < 0 && f2 < 0)) return -1;
-  let a = x1;
-  let b = x2;
-  let c = x2;
-  let fa = f1;
-  let fb = f2;
-  let fc = f2;
-  let d = b - a;
-  let e = d;
-  for (let iter = 0; iter < 100; iter++) {
-    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
-      c = a;
-      fc = fa;
-      d = b - a;
-      e = d;
-    }
-    if (Math.abs(fc) < Math.abs(fb)) {
-      a = b;
-      b = c;
-      c = a;
-      fa = fb;
-      fb = fc;
-      fc = fa;
-    }
-    const tol1 = 2 * MACHINE_EPSILON * Math.abs(b) + 0.5 * xtol;
-    const xm = 0.5 * (c - b);
-    if (Math.abs(xm) <= tol1 || fb === 0) return b;
-    if (Math.abs(e) >= tol1 && Math.abs(fa) > Math.abs(fb)) {
-      const s = fb / fa;
-      let pp: number;
-      let q: number;
-      if (a === c) {
-        pp = 2 * xm * s;
-        q = 1 - s;
-      } else {
-        const qa = fa / fc;
-        const r = fb / fc;
-        pp = s * (2 * xm * qa * (qa - r) - (b - a) * (r - 1));
-        q = (qa - 1) * (r - 1) * (s - 1);
-      }
-      if (pp > 0) q = -q;
-      pp = Math.abs(pp);
-      const min1 = 3 * xm * q - Math.abs(tol1 * q);
-      const min2 = Math.abs(e * q);
-      if (2 * pp < (min1 < min2 ? min1 : min2)) {
-        e = d;
-        d = pp / q;
-      } else {
-        d = xm;
-        e = d;
-      }
-    } else {
-      d = xm;
-      e = d;
-    }
-    a = b;
-    fa = fb;
-    b += Math.abs(d) > tol1 ? d : xm >= 0 ? tol1 : -tol1;
-    fb = residual(kind, b, a1, b1, c1, p);
-  }
-  return -1;
+  const f = scratchResidual;
+  f.kind = kind;
+  f.a = a1;
+  f.b = b1;
+  f.c = c1;
+  f.p = p;
+  return solveRoot(f, x1, x2, 0, scratchRoot, xtol, f1, f2) === Status.ok ? scratchRoot.x : -1;
 }

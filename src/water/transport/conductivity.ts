@@ -17,6 +17,7 @@
  */
 import data from '../../../data/transport/water-conductivity.json';
 import { Status, type StatusCode } from '../../core/status.js';
+import { steppedPressureLimit } from './pressure-steps.js';
 import { correlationLength, CriticalEnhancementInputs, enhancementInputsValid } from './critical.js';
 import { reducedViscosityAtLength } from './viscosity.js';
 
@@ -67,9 +68,7 @@ export class ConductivityResult {
  * ```
  */
 export function conductivityPressureLimit(T: number): number {
-  if (!(T >= CONDUCTIVITY_T_MIN && T <= CONDUCTIVITY_T_MAX)) return 0;
-  for (const [Tband, p] of CONDUCTIVITY_PRESSURE_LIMITS) if (T <= Tband) return p;
-  return 0;
+  return steppedPressureLimit(T, CONDUCTIVITY_T_MIN, CONDUCTIVITY_T_MAX, CONDUCTIVITY_PRESSURE_LIMITS);
 }
 
 /** λ̄0(T̄) (Eq. 16). */

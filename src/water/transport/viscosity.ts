@@ -15,6 +15,7 @@
  */
 import data from '../../../data/transport/water-viscosity.json';
 import { Status, type StatusCode } from '../../core/status.js';
+import { steppedPressureLimit } from './pressure-steps.js';
 import { correlationLength, CriticalEnhancementInputs, enhancementInputsValid } from './critical.js';
 
 const REF = data.reference;
@@ -72,9 +73,7 @@ export class ViscosityResult {
  * ```
  */
 export function viscosityPressureLimit(T: number): number {
-  if (!(T >= VISCOSITY_T_MIN && T <= VISCOSITY_T_MAX)) return 0;
-  for (const [Tband, p] of VISCOSITY_PRESSURE_LIMITS) if (T <= Tband) return p;
-  return 0;
+  return steppedPressureLimit(T, VISCOSITY_T_MIN, VISCOSITY_T_MAX, VISCOSITY_PRESSURE_LIMITS);
 }
 
 /** μ̄0(T̄) (Eq. 11). */
