@@ -21,6 +21,7 @@ import { saturationPressure } from './region4.js';
 import { region3bStartPressureHS } from './start-region3b-hs.js';
 import { region1HS, region2HS } from './hs-region12.js';
 import { region3HS } from './hs-region3.js';
+import { twoPhaseHS } from './hs-two-phase.js';
 import { mixPhases, P_SAT_MIN } from './saturation.js';
 import { evaluateForward } from './regions.js';
 import type { WaterState } from './water-state.js';
@@ -127,46 +128,6 @@ function twoPhaseStartTemperature(h: number, s: number): number {
   return T >= T_MIN && T <= T_CRITICAL ? T : NaN;
 }
 
-/**
- * Two-phase (h, s) states up to 623.15 K without (p, h) flashes: Newton steps in T on the saturation
- * line from T_sat(h, s) (SR4-04), each step one p_s(T) (region 4) and the two saturated phases
- * (regions 1 and 2, left in ctx.scratch and ctx.scratchB). The residual is the gap between the
- * qualities that h and s give, G(T) = x_h − x_s. Where Δh = TΔs (Clausius–Clapeyron; IF97 keeps it to
- * its consistency tolerance) G = F/Δh with F(T) = h − T·s − g′(T), and along the saturation line
- * dg′ = −s′dT + v′dp_s, dp_s/dT = Δs/Δv; so at the root dG/dT = F′/Δh = −[(s − s′) + v′·Δs/Δv]/Δh,
- * from the values already evaluated. Accepted only when s comes back to the Newton path's rounding
- * level (s′ + x_h·Δs − s = Δs·G); anything else hands over to that path.
- * @returns the number of steps (saturation evaluations) taken, negative when not solved
- */
-export function twoPhaseHS(h: number, s: number, T0: number, out: WaterState, ctx: SolverContext): number {
-  if (!(T0 < T_13 - 1e-3)) return -1;
-  const liquid = ctx.scratch;
-  const vapor = ctx.scratchB;
-  const sTol = 1e-13 * (Math.abs(s) + 1e3);
-  let T = T0;
-  for (let i = 1; i <= 10; i++) {
-    const p = saturationPressure(T);
-    evaluateForward(1, p, T, liquid);
-    evaluateForward(2, p, T, vapor);
-    const dh = vapor.h - liquid.h;
-    const ds = vapor.s - liquid.s;
-    const x = (h - liquid.h) / dh;
-    const sGap = liquid.s + x * ds - s;
-    if (Math.abs(sGap) <= sTol) {
-      if (!(x >= 0 && x <= 1)) return -i;
-      mixPhases(x, liquid, vapor, out);
-      return i;
-    }
-    const slope = s - liquid.s + (liquid.v * ds) / (vapor.v - liquid.v);
-    // G = sGap/Δs; the step −G/G′ = G·Δh/[(s − s′) + v′Δs/Δv], at most 20 K
-    const step = Math.max(-20, Math.min(20, ((sGap / ds) * dh) / slope));
-    const next = T + step;
-    if (!(next >= T_MIN && next < T_13)) return -i;
-    T = next;
-  }
-  return -11;
-}
-
 /** Which path solved an (h, s) state: the returns of {@link pathHS}. */
 export const HS_PATH = { none: 0, twoPhase: 1, region3: 2, region12: 3, flashNewton: 4, bracket: 5 } as const;
 
@@ -179,7 +140,7 @@ export const HS_PATH = { none: 0, twoPhase: 1, region3: 2, region12: 3, flashNew
  */
 export function directHS(h: number, s: number, out: WaterState, ctx: SolverContext): number {
   const Ts = twoPhaseStartTemperature(h, s);
-  if (!Number.isNaN(Ts)) return twoPhaseHS(h, s, Ts, out, ctx) > 0 ? HS_PATH.twoPhase : HS_PATH.none;
+  if (!Number.isNaN(Ts)) return twoPhaseHS(h, s, out, ctx) > 0 ? HS_PATH.twoPhase : HS_PATH.none;
   const p3 = region3StartPressureHS(h, s);
   if (!Number.isNaN(p3)) return region3HS(h, s, p3, out, ctx) === Status.ok ? HS_PATH.region3 : HS_PATH.none;
   return (s <= S_CRITICAL ? region1HS(h, s, out) : region2HS(h, s, out)) > 0 ? HS_PATH.region12 : HS_PATH.none;
