@@ -142,8 +142,18 @@ export function directHS(h: number, s: number, out: WaterState, ctx: SolverConte
   const Ts = twoPhaseStartTemperature(h, s);
   if (!Number.isNaN(Ts)) return twoPhaseHS(h, s, out, ctx) > 0 ? HS_PATH.twoPhase : HS_PATH.none;
   const p3 = region3StartPressureHS(h, s);
-  if (!Number.isNaN(p3)) return region3HS(h, s, p3, out, ctx) === Status.ok ? HS_PATH.region3 : HS_PATH.none;
-  return (s <= S_CRITICAL ? region1HS(h, s, out) : region2HS(h, s, out)) > 0 ? HS_PATH.region12 : HS_PATH.none;
+  if (!Number.isNaN(p3)) {
+    if (region3HS(h, s, p3, out, ctx) === Status.ok) return HS_PATH.region3;
+  } else {
+    if ((s <= S_CRITICAL ? region1HS(h, s, out) : region2HS(h, s, out)) > 0) return HS_PATH.region12;
+  }
+  // mixtures next to the saturation line (little vapour, or little liquid) lie within 1 kJ/kg of
+  // h′(s) or h″(s), where the test above does not take them for two-phase: not a single-phase state,
+  // so try the saturation line (its answer is kept only with 0 ≤ x ≤ 1 and s at its rounding level)
+  if (!(s >= 0 && s <= S_VAPOR_MAX)) return HS_PATH.none;
+  const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
+  if (h < hSat + 1e3 && twoPhaseHS(h, s, out, ctx) > 0) return HS_PATH.twoPhase;
+  return HS_PATH.none;
 }
 
 /**
@@ -164,6 +174,16 @@ export function pathHS(h: number, s: number, out: WaterState, ctx: SolverContext
   const code = bracketHS(h, s, out, ctx);
   status[0] = code;
   return code === Status.ok ? HS_PATH.bracket : HS_PATH.none;
+}
+
+/**
+ * The (h, s) flash without its direct paths: {@link newtonHS}, then the bracketed search. For tests
+ * that compare the direct paths with it.
+ * @internal
+ */
+export function generalPathHS(h: number, s: number, out: WaterState, ctx: SolverContext): StatusCode {
+  if (newtonHS(h, s, out, ctx) === Status.ok) return Status.ok;
+  return bracketHS(h, s, out, ctx);
 }
 
 /**
