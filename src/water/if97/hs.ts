@@ -149,10 +149,11 @@ export function directHS(h: number, s: number, out: WaterState, ctx: SolverConte
   }
   // mixtures next to the saturation line (little vapour, or little liquid) lie within 1 kJ/kg of
   // h′(s) or h″(s), where the test above does not take them for two-phase: not a single-phase state,
-  // so try the saturation line (its answer is kept only with 0 ≤ x ≤ 1 and s at its rounding level)
+  // so try the saturation line (its answer is kept with s at its rounding level and x at least 1e-6
+  // from 0 and 1: the saturated states themselves stay with the general path, which labels them)
   if (!(s >= 0 && s <= S_VAPOR_MAX)) return HS_PATH.none;
   const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
-  if (h < hSat + 1e3 && twoPhaseHS(h, s, out, ctx) > 0) return HS_PATH.twoPhase;
+  if (h < hSat + 1e3 && twoPhaseHS(h, s, out, ctx) > 0 && out.x >= 1e-6 && out.x <= 1 - 1e-6) return HS_PATH.twoPhase;
   return HS_PATH.none;
 }
 
