@@ -29,9 +29,11 @@ import { PHASE, type WaterState } from './water-state.js';
  *   answer is not a stable single-phase region 3 state (the caller then decides)
  */
 export function region3HS(h: number, s: number, p0: number, out: WaterState, ctx: SolverContext): StatusCode {
-  if (!(p0 > 0 && p0 <= P_MAX)) return Status.noConvergence;
-  let T = region3TemperaturePH(p0, h);
-  let rho = 1 / region3VolumePH(p0, h);
+  // a start a little above 100 MPa (the backward equations' error near the range's top) is held at it
+  if (!(p0 > 0 && p0 <= 1.5 * P_MAX)) return Status.noConvergence;
+  const pStart = Math.min(p0, P_MAX);
+  let T = region3TemperaturePH(pStart, h);
+  let rho = 1 / region3VolumePH(pStart, h);
   if (!(T > 0 && rho > 0)) return Status.noConvergence;
   const d = ctx.d3;
   const hTol = 1e-13 * Math.abs(h) + 1e-9;

@@ -19,7 +19,9 @@ import { BY_H } from './isobar-residual.js';
 import { stateOnIsobar } from './isobar.js';
 import { saturationPressure } from './region4.js';
 import { region3bStartPressureHS } from './start-region3b-hs.js';
+import { region1HS, region2HS } from './hs-region12.js';
 import { region3HS } from './hs-region3.js';
+import { twoPhaseHS } from './hs-two-phase.js';
 import { mixPhases, P_SAT_MIN } from './saturation.js';
 import { evaluateForward } from './regions.js';
 import type { WaterState } from './water-state.js';
@@ -39,6 +41,7 @@ const PROBE_PRESSURES = [P_MAX, 1e6, P_SAT_MIN, 1e3, P_SEARCH_MIN];
  */
 export function stateFromHS(h: number, s: number, out: WaterState, ctx: SolverContext = defaultContext()): StatusCode {
   if (!Number.isFinite(h) || !Number.isFinite(s)) return Status.invalidInput;
+  if (directHS(h, s, out, ctx) !== HS_PATH.none) return Status.ok;
   if (newtonHS(h, s, out, ctx) === Status.ok) return Status.ok;
   return bracketHS(h, s, out, ctx);
 }
@@ -125,59 +128,71 @@ function twoPhaseStartTemperature(h: number, s: number): number {
   return T >= T_MIN && T <= T_CRITICAL ? T : NaN;
 }
 
-/**
- * The difference of the qualities that h and s give on the saturation line at T ≤ 623.15 K
- * (p_s(T) from region 4, the saturated phases from regions 1 and 2, left in ctx.scratch and
- * ctx.scratchB): zero at the two-phase state with this h and s.
- */
-function qualityGap(h: number, s: number, T: number, ctx: SolverContext): number {
-  const p = saturationPressure(T);
-  const liquid = evaluateForward(1, p, T, ctx.scratch);
-  const vapor = evaluateForward(2, p, T, ctx.scratchB);
-  return (h - liquid.h) / (vapor.h - liquid.h) - (s - liquid.s) / (vapor.s - liquid.s);
-}
+/** Which path solved an (h, s) state: the returns of {@link pathHS}. */
+export const HS_PATH = { none: 0, twoPhase: 1, region3: 2, region12: 3, flashNewton: 4, bracket: 5 } as const;
 
 /**
- * Two-phase (h, s) states up to 623.15 K without (p, h) flashes: the saturation temperature where the
- * qualities from h and from s agree, by secant steps from T_sat(h, s) (SR4-04), each step one p_s(T)
- * and the two saturated phases. Accepted only when s comes back to the Newton path's rounding level;
- * anything else hands over to that path.
+ * The direct paths of the (h, s) flash, none of them built on (p, h) flashes: two-phase states below
+ * 623.15 K by {@link twoPhaseHS}, region 3 by Newton in (ρ, T) ({@link region3HS}), regions 1 and 2 by
+ * Newton in (p, T) ({@link region1HS}, {@link region2HS}; region 1 at s ≤ s_c, region 2 above).
+ * @returns the {@link HS_PATH} code of the path that solved it, `HS_PATH.none` when none did
+ * @internal
  */
-function twoPhaseHS(h: number, s: number, T0: number, out: WaterState, ctx: SolverContext): StatusCode {
-  if (!(T0 < T_13 - 1e-3)) return Status.noConvergence;
-  let a = T0;
-  let b = T0 + 1e-4;
-  let fa = qualityGap(h, s, a, ctx);
-  let fb = qualityGap(h, s, b, ctx);
-  for (let i = 0; i < 12 && fb !== 0 && fb !== fa; i++) {
-    const next = b - (fb * (b - a)) / (fb - fa);
-    if (!(next >= T_MIN && next < T_13)) return Status.noConvergence;
-    a = b;
-    fa = fb;
-    b = next;
-    fb = qualityGap(h, s, b, ctx);
-    if (Math.abs(b - a) <= 1e-13 * b) break;
+export function directHS(h: number, s: number, out: WaterState, ctx: SolverContext): number {
+  const Ts = twoPhaseStartTemperature(h, s);
+  if (!Number.isNaN(Ts)) return twoPhaseHS(h, s, out, ctx) > 0 ? HS_PATH.twoPhase : HS_PATH.none;
+  const p3 = region3StartPressureHS(h, s);
+  if (!Number.isNaN(p3)) {
+    if (region3HS(h, s, p3, out, ctx) === Status.ok) return HS_PATH.region3;
+  } else {
+    if ((s <= S_CRITICAL ? region1HS(h, s, out) : region2HS(h, s, out)) > 0) return HS_PATH.region12;
   }
-  // the saturated phases at b are still in the scratch objects (b was evaluated last)
-  const liquid = ctx.scratch;
-  const vapor = ctx.scratchB;
-  const x = (h - liquid.h) / (vapor.h - liquid.h);
-  if (!(x >= 0 && x <= 1)) return Status.noConvergence;
-  const sBack = liquid.s + x * (vapor.s - liquid.s);
-  if (!(Math.abs(sBack - s) <= 1e-13 * (Math.abs(s) + 1e3))) return Status.noConvergence;
-  return mixPhases(x, liquid, vapor, out);
+  // mixtures next to the saturation line (little vapour, or little liquid) lie within 1 kJ/kg of
+  // h′(s) or h″(s), where the test above does not take them for two-phase: not a single-phase state,
+  // so try the saturation line (its answer is kept with s at its rounding level and x at least 1e-6
+  // from 0 and 1: the saturated states themselves stay with the general path, which labels them)
+  if (!(s >= 0 && s <= S_VAPOR_MAX)) return HS_PATH.none;
+  const hSat = s <= S_CRITICAL ? saturatedLiquidEnthalpyHS(s) : saturatedVaporEnthalpyHS(s);
+  if (h < hSat + 1e3 && twoPhaseHS(h, s, out, ctx) > 0 && out.x >= 1e-6 && out.x <= 1 - 1e-6) return HS_PATH.twoPhase;
+  return HS_PATH.none;
 }
 
 /**
- * Fast path of the (h, s) flash: Newton steps on ln p from {@link startPressureHS}, with
+ * The (h, s) flash with the path that solved it ({@link HS_PATH}; `HS_PATH.none` with a non-ok
+ * status in `status[0]`): {@link directHS}, then Newton steps on ln p over (p, h) flashes, then the
+ * bracketed search. For tests and measurements; {@link stateFromHS} is the public entry.
+ * @internal
+ */
+export function pathHS(h: number, s: number, out: WaterState, ctx: SolverContext, status: Int32Array): number {
+  status[0] = Status.ok;
+  if (!Number.isFinite(h) || !Number.isFinite(s)) {
+    status[0] = Status.invalidInput;
+    return HS_PATH.none;
+  }
+  const direct = directHS(h, s, out, ctx);
+  if (direct !== HS_PATH.none) return direct;
+  if (newtonHS(h, s, out, ctx) === Status.ok) return HS_PATH.flashNewton;
+  const code = bracketHS(h, s, out, ctx);
+  status[0] = code;
+  return code === Status.ok ? HS_PATH.bracket : HS_PATH.none;
+}
+
+/**
+ * The (h, s) flash without its direct paths: {@link newtonHS}, then the bracketed search. For tests
+ * that compare the direct paths with it.
+ * @internal
+ */
+export function generalPathHS(h: number, s: number, out: WaterState, ctx: SolverContext): StatusCode {
+  if (newtonHS(h, s, out, ctx) === Status.ok) return Status.ok;
+  return bracketHS(h, s, out, ctx);
+}
+
+/**
+ * The general path of the (h, s) flash: Newton steps on ln p from {@link startPressureHS}, with
  * (∂s/∂ln p)_h = −p·v/T, each step a (p, h) flash. Any failed step hands over to the bracketed search.
  */
 function newtonHS(h: number, s: number, out: WaterState, ctx: SolverContext): StatusCode {
-  const Ts = twoPhaseStartTemperature(h, s);
-  if (!Number.isNaN(Ts) && twoPhaseHS(h, s, Ts, out, ctx) === Status.ok) return Status.ok;
-  const p3 = Number.isNaN(Ts) ? region3StartPressureHS(h, s) : NaN;
-  if (!Number.isNaN(p3) && region3HS(h, s, p3, out, ctx) === Status.ok) return Status.ok;
-  let p = Number.isNaN(Ts) ? startPressureHS(h, s) : saturationPressure(Ts);
+  let p = startPressureHS(h, s);
   if (!(p > P_SEARCH_MIN && p <= P_MAX)) return Status.outOfRange;
   for (let i = 0; i < 12; i++) {
     if (stateOnIsobar(p, h, BY_H, out, ctx) !== Status.ok) return Status.noConvergence;
