@@ -29,217 +29,9 @@ import r2 from '../../../data/if97/region2.json';
 import r3 from '../../../data/if97/region3.json';
 import r5 from '../../../data/if97/region5.json';
 import { R_IF97 } from './constants.js';
+import { CompensatedTerms, weightedSums } from './compensated-sums.js';
 import { ddAdd, ddCopy, ddDiv, ddFromDecimal, ddLog, ddMul, ddMulNumber, ddNeg, ddSet, ddSqrtValue, ddSub, ddValue } from './double-double.js';
 import type { WaterProperties } from './properties.js';
-
-const SPLIT = 134217729;
-
-/**
- * One set of terms Σ nₖ xᴵᵏ yᴶᵏ prepared for double-double evaluation: the coefficients with their
- * Veltkamp halves, the integer weights of the derivative sums, and power tables for x and y.
- */
-class CompensatedTerms {
-  readonly count: number;
-  readonly I: Int32Array;
-  readonly J: Int32Array;
-  readonly n: Float64Array;
-  readonly n1: Float64Array;
-  readonly n2: Float64Array;
-  /** Weights I, I(I−1), J, J(J−1), IJ per term (5 per term). */
-  readonly weights: Float64Array;
-  readonly iMin: number;
-  readonly iMax: number;
-  readonly jMin: number;
-  readonly jMax: number;
-  /** x^i (hi, lo) at 2(i − iMin), and y^j at 2(j − jMin). */
-  readonly xPowers: Float64Array;
-  readonly yPowers: Float64Array;
-  /** Scratch: 1/x, 1/y. */
-  readonly scratch = new Float64Array(8);
-
-  constructor(I: readonly number[], J: readonly number[], n: readonly number[]) {
-    this.count = n.length;
-    this.I = Int32Array.from(I);
-    this.J = Int32Array.from(J);
-    this.n = Float64Array.from(n);
-    this.n1 = this.n.map((v) => {
-      const t = SPLIT * v;
-      return t - (t - v);
-    });
-    this.n2 = this.n.map((v, k) => v - this.n1[k]!);
-    this.weights = new Float64Array(5 * this.count);
-    for (let k = 0; k < this.count; k++) {
-      const i = I[k]!;
-      const j = J[k]!;
-      this.weights.set([i, i * (i - 1), j, j * (j - 1), i * j], 5 * k);
-    }
-    this.iMin = Math.min(0, ...I);
-    this.iMax = Math.max(0, ...I);
-    this.jMin = Math.min(0, ...J);
-    this.jMax = Math.max(0, ...J);
-    this.xPowers = new Float64Array(2 * (this.iMax - this.iMin + 1));
-    this.yPowers = new Float64Array(2 * (this.jMax - this.jMin + 1));
-  }
-}
-
-/** Fills table[2(i − min)] with base^i for i = min … max (double-double products, 1/base for i < 0). */
-function fillPowers(table: Float64Array, min: number, max: number, bh: number, bl: number, scratch: Float64Array): void {
-  const zero = -min;
-  table[2 * zero] = 1;
-  table[2 * zero + 1] = 0;
-  let ph = 1;
-  let pl = 0;
-  for (let i = 1; i <= max; i++) {
-    const idx = 2 * (zero + i);
-    mulInto(table, idx, ph, pl, bh, bl);
-    ph = table[idx]!;
-    pl = table[idx + 1]!;
-  }
-  if (min < 0) {
-    ddSet(scratch, 0, 1, 0);
-    ddSet(scratch, 1, bh, bl);
-    ddDiv(scratch, 2, 0, 1);
-    const rh = scratch[4]!;
-    const rl = scratch[5]!;
-    ph = 1;
-    pl = 0;
-    for (let i = -1; i >= min; i--) {
-      const idx = 2 * (zero + i);
-      mulInto(table, idx, ph, pl, rh, rl);
-      ph = table[idx]!;
-      pl = table[idx + 1]!;
-    }
-  }
-}
-
-/** table[idx], table[idx + 1] = (ah + al)(bh + bl), double-double. */
-function mulInto(table: Float64Array, idx: number, ah: number, al: number, bh: number, bl: number): void {
-  let t = SPLIT * ah;
-  const a1 = t - (t - ah);
-  const a2 = ah - a1;
-  t = SPLIT * bh;
-  const b1 = t - (t - bh);
-  const b2 = bh - b1;
-  const ph = ah * bh;
-  const pl = a1 * b1 - ph + a1 * b2 + a2 * b1 + a2 * b2 + (ah * bl + al * bh);
-  const zh = ph + pl;
-  table[idx] = zh;
-  table[idx + 1] = pl - (zh - ph);
-}
-
-/**
- * The six weighted sums of Σ n xᴵ yᴶ at x = slot xs, y = slot ys of `w`, written to slots d … d + 5:
- * [Σt, ΣI·t, ΣI(I−1)·t, ΣJ·t, ΣJ(J−1)·t, ΣIJ·t] with t = n xᴵ yᴶ, that is
- * [S, x·S_x, x²·S_xx, y·S_y, y²·S_yy, xy·S_xy]. Each term is formed in double-double; each sum keeps its
- * high part by TwoSum and carries every rounding error and low part in a second double (Sum2).
- */
-function weightedSums(t: CompensatedTerms, w: Float64Array, xs: number, ys: number, d: number): void {
-  fillPowers(t.xPowers, t.iMin, t.iMax, w[2 * xs]!, w[2 * xs + 1]!, t.scratch);
-  fillPowers(t.yPowers, t.jMin, t.jMax, w[2 * ys]!, w[2 * ys + 1]!, t.scratch);
-  const X = t.xPowers;
-  const Y = t.yPowers;
-  const I = t.I;
-  const J = t.J;
-  const N = t.n;
-  const N1 = t.n1;
-  const N2 = t.n2;
-  const M = t.weights;
-  const iMin = t.iMin;
-  const jMin = t.jMin;
-  let s0 = 0, c0 = 0, s1 = 0, c1 = 0, s2 = 0, c2 = 0, s3 = 0, c3 = 0, s4 = 0, c4 = 0, s5 = 0, c5 = 0;
-  for (let k = 0; k < t.count; k++) {
-    const xi = 2 * (I[k]! - iMin);
-    const yj = 2 * (J[k]! - jMin);
-    const xh = X[xi]!;
-    const xl = X[xi + 1]!;
-    const yh = Y[yj]!;
-    const yl = Y[yj + 1]!;
-    // P = xᴵ yᴶ
-    let c = SPLIT * xh;
-    const x1 = c - (c - xh);
-    const x2 = xh - x1;
-    c = SPLIT * yh;
-    const y1 = c - (c - yh);
-    const y2 = yh - y1;
-    let ph = xh * yh;
-    let pl = x1 * y1 - ph + x1 * y2 + x2 * y1 + x2 * y2 + (xh * yl + xl * yh);
-    let q = ph + pl;
-    pl -= q - ph;
-    ph = q;
-    // t = n P
-    const nh = N[k]!;
-    const n1 = N1[k]!;
-    const n2 = N2[k]!;
-    c = SPLIT * ph;
-    const p1 = c - (c - ph);
-    const p2 = ph - p1;
-    let th = nh * ph;
-    let tl = n1 * p1 - th + n1 * p2 + n2 * p1 + n2 * p2 + nh * pl;
-    q = th + tl;
-    tl -= q - th;
-    th = q;
-    c = SPLIT * th;
-    const t1 = c - (c - th);
-    const t2 = th - t1;
-    // s0 += t
-    q = s0 + th;
-    let v = q - s0;
-    c0 += s0 - (q - v) + (th - v) + tl;
-    s0 = q;
-    // s_i += m t for the integer weights m (|m| < 2²⁶: m t.hi = t1 m + t2 m exactly)
-    const o = 5 * k;
-    let m = M[o]!;
-    let mh = th * m;
-    let ml = t1 * m - mh + t2 * m + tl * m;
-    q = s1 + mh;
-    v = q - s1;
-    c1 += s1 - (q - v) + (mh - v) + ml;
-    s1 = q;
-    m = M[o + 1]!;
-    mh = th * m;
-    ml = t1 * m - mh + t2 * m + tl * m;
-    q = s2 + mh;
-    v = q - s2;
-    c2 += s2 - (q - v) + (mh - v) + ml;
-    s2 = q;
-    m = M[o + 2]!;
-    mh = th * m;
-    ml = t1 * m - mh + t2 * m + tl * m;
-    q = s3 + mh;
-    v = q - s3;
-    c3 += s3 - (q - v) + (mh - v) + ml;
-    s3 = q;
-    m = M[o + 3]!;
-    mh = th * m;
-    ml = t1 * m - mh + t2 * m + tl * m;
-    q = s4 + mh;
-    v = q - s4;
-    c4 += s4 - (q - v) + (mh - v) + ml;
-    s4 = q;
-    m = M[o + 4]!;
-    mh = th * m;
-    ml = t1 * m - mh + t2 * m + tl * m;
-    q = s5 + mh;
-    v = q - s5;
-    c5 += s5 - (q - v) + (mh - v) + ml;
-    s5 = q;
-  }
-  // normalise each (s, c) pair (Fast2Sum after a TwoSum-safe ordering)
-  store(w, d, s0, c0);
-  store(w, d + 1, s1, c1);
-  store(w, d + 2, s2, c2);
-  store(w, d + 3, s3, c3);
-  store(w, d + 4, s4, c4);
-  store(w, d + 5, s5, c5);
-}
-
-/** Slot d = s + c, normalised (TwoSum). */
-function store(w: Float64Array, d: number, s: number, c: number): void {
-  const h = s + c;
-  const v = h - s;
-  w[2 * d] = h;
-  w[2 * d + 1] = s - (h - v) + (c - v);
-}
 
 // ---------------------------------------------------------------------------------------------
 // Gibbs regions (1, 2, 5): slots of the shared relations (R7-97 Tables 3, 12, 39)
@@ -331,12 +123,15 @@ function reduced(w: Float64Array, p: number, pStar: number, T: number, tStarSlot
   ddDiv(w, G.tau, tStarSlot, G.a);
 }
 
-const terms1 = new CompensatedTerms(r1.I, r1.J, r1.n);
-const w1 = new Float64Array(2 * G.size);
-// R7-97 Eq. 7: γ = Σ nᵢ (7.1 − π)^Iᵢ (τ − 1.222)^Jᵢ; T* = 1386 K
-ddFromDecimal(w1, G.k1, '7.1');
-ddFromDecimal(w1, G.k2, '1.222');
-ddSet(w1, G.tStar, r1.TStar, 0);
+const terms1 = /* @__PURE__ */ new CompensatedTerms(r1.I, r1.J, r1.n);
+const w1 = /* @__PURE__ */ (() => {
+  const w = new Float64Array(2 * G.size);
+  // R7-97 Eq. 7: γ = Σ nᵢ (7.1 − π)^Iᵢ (τ − 1.222)^Jᵢ; T* = 1386 K
+  ddFromDecimal(w, G.k1, '7.1');
+  ddFromDecimal(w, G.k2, '1.222');
+  ddSet(w, G.tStar, r1.TStar, 0);
+  return w;
+})();
 
 /**
  * Region 1 (compressed liquid, R7-97 Eq. 7) in double-double: fills `out` at (p [Pa], T [K]) with every
@@ -402,12 +197,15 @@ function idealResidual(w: Float64Array, ideal: CompensatedTerms, residual: Compe
   ddDiv(w, G.gPiTau, G.sums + 5, G.b);
 }
 
-const ideal2 = new CompensatedTerms(r2.J0.map(() => 0), r2.J0, r2.n0);
-const terms2 = new CompensatedTerms(r2.I, r2.J, r2.n);
-const w2 = new Float64Array(2 * G.size);
-// R7-97 Eqs. 16-17: π = p/1 MPa, τ = 540 K/T, residual in (τ − 0.5)
-ddSet(w2, G.tStar, r2.TStar, 0);
-ddFromDecimal(w2, G.k2, '0.5');
+const ideal2 = /* @__PURE__ */ new CompensatedTerms(r2.J0.map(() => 0), r2.J0, r2.n0);
+const terms2 = /* @__PURE__ */ new CompensatedTerms(r2.I, r2.J, r2.n);
+const w2 = /* @__PURE__ */ (() => {
+  const w = new Float64Array(2 * G.size);
+  // R7-97 Eqs. 16-17: π = p/1 MPa, τ = 540 K/T, residual in (τ − 0.5)
+  ddSet(w, G.tStar, r2.TStar, 0);
+  ddFromDecimal(w, G.k2, '0.5');
+  return w;
+})();
 
 /**
  * Region 2 (vapour, R7-97 Eqs. 15-17) in double-double: fills `out` at (p [Pa], T [K]).
@@ -424,11 +222,14 @@ export function region2Compensated(p: number, T: number, out: WaterProperties): 
   return gibbsProperties(w, p, T, out);
 }
 
-const ideal5 = new CompensatedTerms(r5.J0.map(() => 0), r5.J0, r5.n0);
-const terms5 = new CompensatedTerms(r5.I, r5.J, r5.n);
-const w5 = new Float64Array(2 * G.size);
-// R7-97 Eqs. 32-34: π = p/1 MPa, τ = 1000 K/T, residual in τ
-ddSet(w5, G.tStar, r5.TStar, 0);
+const ideal5 = /* @__PURE__ */ new CompensatedTerms(r5.J0.map(() => 0), r5.J0, r5.n0);
+const terms5 = /* @__PURE__ */ new CompensatedTerms(r5.I, r5.J, r5.n);
+const w5 = /* @__PURE__ */ (() => {
+  const w = new Float64Array(2 * G.size);
+  // R7-97 Eqs. 32-34: π = p/1 MPa, τ = 1000 K/T, residual in τ
+  ddSet(w, G.tStar, r5.TStar, 0);
+  return w;
+})();
 
 /**
  * Region 5 (high-temperature steam, R7-97 Eqs. 32-34) in double-double: fills `out` at (p [Pa], T [K]).
@@ -471,12 +272,15 @@ const enum H {
   size = sums + 6,
 }
 
-const terms3 = new CompensatedTerms(r3.I, r3.J, r3.n);
-const w3 = new Float64Array(2 * H.size);
-// R7-97 Eq. 28: φ = n₁ ln δ + Σ nᵢ δ^Iᵢ τ^Jᵢ, δ = ρ/322 kg/m³, τ = 647.096 K/T (the decimal value)
-ddFromDecimal(w3, H.tStar, String(r3.TStar));
-ddSet(w3, H.rhoStar, r3.rhoStar, 0);
-ddSet(w3, H.n1, r3.n1, 0);
+const terms3 = /* @__PURE__ */ new CompensatedTerms(r3.I, r3.J, r3.n);
+const w3 = /* @__PURE__ */ (() => {
+  const w = new Float64Array(2 * H.size);
+  // R7-97 Eq. 28: φ = n₁ ln δ + Σ nᵢ δ^Iᵢ τ^Jᵢ, δ = ρ/322 kg/m³, τ = 647.096 K/T (the decimal value)
+  ddFromDecimal(w, H.tStar, String(r3.TStar));
+  ddSet(w, H.rhoStar, r3.rhoStar, 0);
+  ddSet(w, H.n1, r3.n1, 0);
+  return w;
+})();
 
 /**
  * Region 3 (near-critical, R7-97 Eq. 28) in double-double: fills `out` at (ρ [kg/m³], T [K]) with every
