@@ -5,7 +5,9 @@
  * coefficients in data/if97 (a private clone; dev only), at the exact binary values of the inputs.
  *
  * Reports, per region and property (v, h, u, s, cp, cv, w; p for region 3), the median, 99th
- * percentile and maximum error in ulp over random states of each region (deterministic seed).
+ * percentile and maximum error in ulp over random states of each region (deterministic seed), for the
+ * fast kernels and for the compensated double-double kernels (src/water/if97/compensated.ts), as a
+ * markdown table (docs/guide/accuracy.md quotes it).
  *
  * Run: `npx tsx scripts/ulp-report.ts [states per region, default 1000] [--write]`. With --write it
  * stores a fixed sample (40 states per region) with the 60-digit values in
