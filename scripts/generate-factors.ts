@@ -14,8 +14,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { dirname, resolve } from 'node:path';
 import Decimal from 'decimal.js';
-import { parseUnitExpression } from '../src/units/expression.js';
-import { canonicalKey, resolveTerms, type AtomLookup, type AtomRecord, type ResolvedTerm } from '../src/units/atoms.js';
+import { forEachCompoundSpelling, type AtomLookup, type AtomRecord, type ResolvedTerm } from '../src/units/atoms.js';
 import { UNIT_SPELLINGS } from '../src/units/spellings.js';
 import type { DimensionVector } from '../src/units/dimensions.js';
 
@@ -127,21 +126,20 @@ export function renderFactorsModule(): string {
   }
   lines.push('];');
   lines.push('');
+  // the compound spellings once each, in the order forEachCompoundSpelling visits them (the registry
+  // reads COMPOUND_FACTOR_LIST in that order and derives the keys itself; COMPOUND_FACTORS, the same
+  // numbers by key, is for readers and tests and is left out of bundles, since nothing in src/ imports it)
+  const compound: [string, number][] = [];
+  forEachCompoundSpelling(UNIT_SPELLINGS, data.gauge.units, lookup, (key, terms) => compound.push([key, nearestDouble(exactFactorOf(terms, data))]));
   lines.push('/** Compound units by canonical key (sorted prefixed symbols with exponents), factor to SI. */');
   lines.push('export const COMPOUND_FACTORS: Readonly<Record<string, number>> = {');
-  const seen = new Set<string>();
-  for (const spellings of Object.values(UNIT_SPELLINGS)) {
-    for (const spelling of spellings as readonly string[]) {
-      if (spelling === '1' || spelling.startsWith('Δ') || spelling.startsWith('delta ') || spelling in data.gauge.units) continue;
-      const terms = resolveTerms(parseUnitExpression(spelling), lookup, spelling);
-      if (terms.length === 1 && terms[0]!.prefix === '' && terms[0]!.exponent === 1) continue;
-      const key = canonicalKey(terms);
-      if (seen.has(key)) continue;
-      seen.add(key);
-      lines.push(`  ${JSON.stringify(key)}: ${String(nearestDouble(exactFactorOf(terms, data)))},`);
-    }
-  }
+  for (const [key, f] of compound) lines.push(`  ${JSON.stringify(key)}: ${String(f)},`);
   lines.push('};');
+  lines.push('');
+  lines.push('/** The factors of {@link COMPOUND_FACTORS} in the order of `forEachCompoundSpelling` (src/units/atoms.ts), without their keys. */');
+  lines.push('export const COMPOUND_FACTOR_LIST: readonly number[] = [');
+  for (const [key, f] of compound) lines.push(`  ${String(f)}, // ${key === '' ? '(empty key: a ratio of equal dimensions, such as kg/kg)' : key}`);
+  lines.push('];');
   lines.push('');
   lines.push('/** Offsets of the relative temperature scales, in their own degrees: T/K = t/°C + 273.15; T/°R = t/°F + 459.67 (exact). */');
   lines.push('export const TEMPERATURE_OFFSETS: Readonly<Record<string, number>> = {');

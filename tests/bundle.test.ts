@@ -30,9 +30,10 @@ describe('consumer bundles', () => {
     expect(js).not.toMatch(/ZodError|zod/i);
     expect(js).not.toContain('stainless steel');
     const kB = gzipSync(js).length / 1024;
-    // 12.2 kB measured: the budget grew from 8 kB with quantity arithmetic (the product and quotient
-    // tables), four new dimensions, the plant and HVAC units and the linear-time parser with its limits
-    expect(kB).toBeLessThan(13);
+    // 11.9 kB measured (12.2 before the compound-unit keys were derived from the spellings on first use):
+    // the budget grew from 8 kB with quantity arithmetic (the product and quotient tables), four new
+    // dimensions, the plant and HVAC units and the linear-time parser with its limits
+    expect(kB).toBeLessThan(12.2);
   });
   it('heatstate/units + heatstate/ideal-gas: at most 29 kB gzipped, no decimal.js, zod or incompressible data', async () => {
     const js = await bundle(`import { quantity } from 'heatstate/units'; import { idealGas, mixture, compressor } from 'heatstate/ideal-gas';
@@ -73,9 +74,12 @@ describe('humid-air bundle', () => {
     expect(js).not.toMatch(/1\.0658070028513|-0\.13179983674201e2|-13\.179983674201/);
     // the humid-air data files are imported by name: their numbers ship, their source and uncertainty text does not
     expect(js).not.toMatch(/Melting and Sublimation Curves|equation numbers from memory/);
-    // 31.8 kB measured (33.9 → 33.4 kB with the humid-air data files imported by name, → 31.8 kB with
-    // the IF97 changes above), above the 20 kB target; this ceiling guards against growth
-    expect(gzipSync(js).length / 1024).toBeLessThan(33);
+    // 31.7 kB measured (33.9 → 33.4 kB with the humid-air data files imported by name, → 32.1 kB with
+    // the IF97 changes above, → 31.7 kB with the compound-unit keys derived on first use and the batch
+    // sets solved by their loops alone), above the issue's 20 kB target; this ceiling guards against
+    // growth. Of the rest, IF97 regions 1 and 2 take about 5.5 kB for two enthalpies (condensate and
+    // steam): kernels of the τ-derivative sums alone would cut about 3.5 kB
+    expect(gzipSync(js).length / 1024).toBeLessThan(32);
   });
 });
 

@@ -16,22 +16,39 @@ import { Status, type StatusCode } from './status.js';
 
 /**
  * A model's own loop over a whole batch, for speed: it fills `columns[c][i]` (property `props[c]`) and
- * `status[i]` for every element i, exactly as the runner's loop over {@link BatchInputSet.solve} would
+ * `status[i]` for every element i, exactly as the runner's loop over the set's `solve` would
  * (same status codes, same values bit for bit, NaN in every column of a failed element). The runner
  * calls it only after every check of the call has passed. It returns false, before writing anything,
  * to hand the batch back to the runner's loop (for a request it does not specialise).
  */
 export type BatchLoop<P extends string> = (a: Float64Array, b: Float64Array | undefined, props: readonly P[], columns: readonly Float64Array[], status: Uint8Array) => boolean;
 
-/** One accepted set of batch inputs and the SI core that solves it. */
-export interface BatchInputSet<Out, P extends string = string> {
-  /** The input names, in the order `solve` takes them (`['p', 'T']`). */
-  readonly keys: readonly string[];
-  /** The SI core: one element's inputs (the second is 0 for a one-input set) into `out`. */
-  readonly solve: (a: number, b: number, out: Out) => StatusCode;
-  /** Optional fused loop equivalent to the runner's loop over `solve` (see {@link BatchLoop}). */
-  readonly loop?: BatchLoop<P>;
-}
+/**
+ * One accepted set of batch inputs and the SI core that solves it: a `solve` per element (with an
+ * optional fused loop), or a fused loop alone that handles every call ({@link CompleteBatchLoop}).
+ */
+export type BatchInputSet<Out, P extends string = string> =
+  | {
+      /** The input names, in the order `solve` takes them (`['p', 'T']`). */
+      readonly keys: readonly string[];
+      /** The SI core: one element's inputs (the second is 0 for a one-input set) into `out`. */
+      readonly solve: (a: number, b: number, out: Out) => StatusCode;
+      /** Optional fused loop equivalent to the runner's loop over `solve` (see {@link BatchLoop}). */
+      readonly loop?: BatchLoop<P>;
+    }
+  | {
+      /** The input names, in the order the loop takes them. */
+      readonly keys: readonly string[];
+      readonly solve?: undefined;
+      /** The fused loop, for every request of this set. */
+      readonly loop: CompleteBatchLoop<P>;
+    };
+
+/**
+ * A {@link BatchLoop} that never hands a batch back: a set of two or more inputs whose loop handles
+ * every request needs no per-element `solve` (humid air's sets: the pair and `p`).
+ */
+export type CompleteBatchLoop<P extends string> = (a: Float64Array, b: Float64Array | undefined, props: readonly P[], columns: readonly Float64Array[], status: Uint8Array) => true;
 
 /** What a model tells the runner. */
 export interface BatchModel<Out, P extends string> {
@@ -142,7 +159,8 @@ export function runBatch<Out, P extends string>(model: BatchModel<Out, P>, input
   const a = columnsIn[0]!;
   const b = columnsIn.length > 1 ? columnsIn[1]! : undefined;
   if (set.loop !== undefined && set.loop(a, b, wanted, columns, status)) return result as BatchResult<P>;
-  const solve = set.solve;
+  // a set without solve has a loop that returned true above
+  const solve = set.solve!;
   const state = model.createOutput();
   const undefinedAt = model.undefinedAt;
   const m = wanted.length;

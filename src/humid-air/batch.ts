@@ -6,8 +6,8 @@
  *
  * @module
  */
-import { runBatch, type BatchInputSet, type BatchLoop, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
-import { Status, type StatusCode } from '../core/status.js';
+import { runBatch, type BatchInputSet, type BatchModel, type BatchOut, type BatchResult, type CompleteBatchLoop } from '../core/batch.js';
+import { Status } from '../core/status.js';
 import { InvalidInputError } from '../errors.js';
 import { HumidAirState, humidAirState, PAIR, REASON } from './core/state.js';
 
@@ -56,24 +56,6 @@ const PROPERTIES: { readonly [K in HumidAirBatchProperty]: (out: HumidAirState) 
   cp: (o) => o.cp,
 };
 
-/** Properties that are NaN where not defined (the core answers Status.undefinedProperty for them). */
-function undefinedAt(out: HumidAirState, property: HumidAirBatchProperty): boolean {
-  // the core leaves reason = none when every output is defined
-  if (out.reason === REASON.none) return false;
-  switch (property) {
-    case 'Ws':
-      return out.Ws !== out.Ws;
-    case 'saturationDegree':
-      return out.mu !== out.mu;
-    case 'Tdp':
-      return out.Tdp !== out.Tdp;
-    case 'Twb':
-      return out.Twb !== out.Twb;
-    default:
-      return false;
-  }
-}
-
 /** Column codes of the fused loop, one per property (the order of {@link PROPERTIES}). */
 const COLUMN: { readonly [K in HumidAirBatchProperty]: number } = { T: 0, Twb: 1, Tdp: 2, RH: 3, W: 4, h: 5, v: 6, rho: 7, pw: 8, pws: 9, Ws: 10, saturationDegree: 11, cp: 12 };
 
@@ -109,22 +91,26 @@ function column(out: HumidAirState, code: number): number {
   }
 }
 
-/** Whether column `code` may be NaN where the core reports it undefined (Tdp, Twb, Ws, μ: see {@link undefinedAt}). */
+/**
+ * Whether column `code` may be NaN where the core reports a property undefined (Tdp, Twb, Ws, μ): the
+ * core leaves reason = none when every output is defined.
+ */
 function mayBeUndefined(code: number): boolean {
   return code === 1 || code === 2 || code === 10 || code === 11;
 }
 
 /**
- * The fused loop of one pair (see `BatchLoop` in src/core/batch.ts): the SI core per element over
- * one reused state, the columns read by code, without the runner's per-element calls. Same codes
- * and values, bit for bit, as the runner's loop over `solve` with {@link PROPERTIES} and
- * {@link undefinedAt}: undefinedProperty from the core counts as ok, a requested property that is
- * NaN where the core says it is undefined is NaN with status undefinedProperty, any other
- * non-finite value is invalidInput, and a failed element is NaN in every column.
+ * The loop of one pair (see `BatchLoop` in src/core/batch.ts): the SI core per element over one
+ * reused state, the columns read by code. undefinedProperty from the core counts as ok, a requested
+ * property that is NaN where the core says it is undefined is NaN with status undefinedProperty, any
+ * other non-finite value is invalidInput, and a failed element is NaN in every column. Every set has
+ * three inputs (the pair and p), so the runner always passes `b`, and this loop handles every request:
+ * the runner needs no per-element `solve` (tests/humid-air/batch.test.ts compares it, bit for bit, with
+ * the runner's own loop over the core).
  */
-function fusedLoop(pair: number, p: Float64Array, wetBulb: boolean): BatchLoop<HumidAirBatchProperty> {
-  return (a, b, props, columns, status) => {
-    if (b === undefined) return false;
+function pairLoop(pair: number, p: Float64Array, wetBulb: boolean): CompleteBatchLoop<HumidAirBatchProperty> {
+  return (a, second, props, columns, status) => {
+    const b = second!;
     const m = props.length;
     const codes = new Int32Array(m);
     for (let c = 0; c < m; c++) codes[c] = COLUMN[props[c]!];
@@ -155,30 +141,9 @@ function fusedLoop(pair: number, p: Float64Array, wetBulb: boolean): BatchLoop<H
   };
 }
 
-/**
- * The input sets for one call. The generic runner hands its solver two inputs per element; the
- * third, the pressure, is read from `p` at the element's index, counted here (the runner calls the
- * solver once per element, in order). Each call checks that the runner's first input is the
- * element's own (a guard against a change of that order), and answers invalidInput if not. The
- * runner uses each set's fused loop instead when it has passed the call's checks.
- */
-function inputSets(p: Float64Array, columns: Readonly<Record<string, Float64Array | undefined>>, wetBulb: boolean): BatchInputSet<HumidAirState, HumidAirBatchProperty>[] {
-  return PAIRS.map(([k1, k2, pair]) => {
-    let i = 0;
-    const first = columns[k1];
-    return {
-      keys: [k1, k2, 'p'],
-      solve: (a: number, b: number, out: HumidAirState): StatusCode => {
-        const j = i++;
-        const expected = first === undefined ? NaN : first[j]!;
-        if (!(expected === a || (expected !== expected && a !== a))) return Status.invalidInput;
-        const s = humidAirState(pair, a, b, p[j]!, wetBulb, out);
-        // a computed state is ok for the runner; a property not defined there is its NaN (undefinedAt)
-        return s === Status.undefinedProperty ? Status.ok : s;
-      },
-      loop: fusedLoop(pair, p, wetBulb),
-    };
-  });
+/** The input sets for one call: each pair with p, solved by its loop. */
+function inputSets(p: Float64Array, wetBulb: boolean): BatchInputSet<HumidAirState, HumidAirBatchProperty>[] {
+  return PAIRS.map(([k1, k2, pair]) => ({ keys: [k1, k2, 'p'], loop: pairLoop(pair, p, wetBulb) }));
 }
 
 /**
@@ -211,10 +176,9 @@ export function humidAirBatch<P extends HumidAirBatchProperty>(inputs: HumidAirB
   const wetBulb = Array.isArray(props) && props.includes('Twb' as P);
   const model: BatchModel<HumidAirState, HumidAirBatchProperty> = {
     name: 'humidAirBatch',
-    inputs: inputSets(p, record, wetBulb),
+    inputs: inputSets(p, wetBulb),
     properties: PROPERTIES,
     createOutput: () => new HumidAirState(),
-    undefinedAt,
   };
   return runBatch(model, inputs, props, out) as HumidAirBatchResult<P>;
 }

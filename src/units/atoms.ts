@@ -6,7 +6,7 @@
  */
 import { UnitError } from '../errors.js';
 import type { DimensionVector } from './dimensions.js';
-import type { UnitTerm } from './expression.js';
+import { parseUnitExpression, type UnitTerm } from './expression.js';
 
 /** A unit the registry defines directly (not by prefix or composition). */
 export interface AtomRecord {
@@ -83,4 +83,32 @@ export function combinedDims(terms: readonly ResolvedTerm[]): DimensionVector {
   const v = [0, 0, 0, 0, 0];
   for (const t of terms) for (let i = 0; i < 5; i++) v[i]! += t.atom.dims[i]! * t.exponent;
   return v as unknown as DimensionVector;
+}
+
+/**
+ * The compound spellings that carry a precomputed factor, in one fixed order: each listed spelling
+ * (dimension by dimension, as listed) that is not `1`, a difference (`Δ…`, `delta …`), a gauge unit or
+ * a single unprefixed atom, once per canonical key. `each` receives the key and the resolved terms.
+ *
+ * The factor generator stores the exact factors in this order (`COMPOUND_FACTOR_LIST`); the registry
+ * pairs them with their keys on first use, so the keys themselves do not ship in a bundle.
+ */
+export function forEachCompoundSpelling(
+  spellings: Readonly<Record<string, readonly string[]>>,
+  gaugeUnits: Readonly<Record<string, string>>,
+  lookup: AtomLookup,
+  each: (key: string, terms: readonly ResolvedTerm[]) => void,
+): void {
+  const seen = new Set<string>();
+  for (const list of Object.values(spellings)) {
+    for (const spelling of list) {
+      if (spelling === '1' || spelling.startsWith('Δ') || spelling.startsWith('delta ') || Object.hasOwn(gaugeUnits, spelling)) continue;
+      const terms = resolveTerms(parseUnitExpression(spelling), lookup, spelling);
+      if (terms.length === 1 && terms[0]!.prefix === '' && terms[0]!.exponent === 1) continue;
+      const key = canonicalKey(terms);
+      if (seen.has(key)) continue;
+      seen.add(key);
+      each(key, terms);
+    }
+  }
 }

@@ -91,20 +91,24 @@ export const SI_UNIT: Readonly<Record<Dimension, string>> = {
   humidityRatio: 'kg/kg',
 };
 
-const BY_VECTOR = new Map<string, Dimension>();
-for (const [name, vector] of Object.entries(DIMENSIONS) as [Dimension, DimensionVector][]) {
-  // the first-listed dimension of each shape wins (temperature before temperatureDifference,
-  // specificHeat before specificEntropy, dimensionless before humidityRatio, ...)
-  const key = vector.join(',');
-  if (!BY_VECTOR.has(key)) BY_VECTOR.set(key, name);
-}
+let byVector: Map<string, Dimension> | undefined;
 
 /**
  * The named dimension with these exponents, or `undefined`. Where several share the exponents,
  * the first listed in {@link DIMENSIONS} (a bare temperature vector is `temperature`).
  */
 export function dimensionOfVector(vector: DimensionVector): Dimension | undefined {
-  return BY_VECTOR.get(vector.join(','));
+  if (byVector === undefined) {
+    // built on first use, not at import
+    byVector = new Map();
+    for (const [name, v] of Object.entries(DIMENSIONS) as [Dimension, DimensionVector][]) {
+      // the first-listed dimension of each shape wins (temperature before temperatureDifference,
+      // specificHeat before specificEntropy, dimensionless before humidityRatio, ...)
+      const key = v.join(',');
+      if (!byVector.has(key)) byVector.set(key, name);
+    }
+  }
+  return byVector.get(vector.join(','));
 }
 
 /** True when two dimensions have the same base-quantity exponents (specificHeat and specificEntropy). */

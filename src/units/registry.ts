@@ -18,11 +18,11 @@
  * @module
  */
 import { DimensionError, UnitError } from '../errors.js';
-import { canonicalKey, combinedDims, resolveTerms, type AtomLookup, type AtomRecord, type ResolvedTerm } from './atoms.js';
+import { canonicalKey, combinedDims, forEachCompoundSpelling, resolveTerms, type AtomLookup, type AtomRecord, type ResolvedTerm } from './atoms.js';
 import { checkString } from './check.js';
 import { DIMENSIONS, dimensionOfVector, sameShape, type Dimension, type DimensionVector } from './dimensions.js';
 import { parseUnitExpression, previewText, UNIT_TEXT_MAX_LENGTH } from './expression.js';
-import { AMBIGUOUS_NAMES, ATOMS, COMPOUND_FACTORS, DEFAULT_AMBIENT_PA, GAUGE_UNITS, PREFIX_FACTORS, TEMPERATURE_OFFSETS } from './factors.generated.js';
+import { AMBIGUOUS_NAMES, ATOMS, COMPOUND_FACTOR_LIST, DEFAULT_AMBIENT_PA, GAUGE_UNITS, PREFIX_FACTORS, TEMPERATURE_OFFSETS } from './factors.generated.js';
 import { UNIT_SPELLINGS } from './spellings.js';
 
 /** How values in a unit convert to SI. */
@@ -51,18 +51,63 @@ export interface ResolvedExpression {
 
 export { DEFAULT_AMBIENT_PA };
 
-const atomsByName = new Map<string, AtomRecord>();
-const atomFactor = new Map<string, number>();
-for (const [symbol, aliases, dims, factor, prefixable, scale] of ATOMS) {
-  const rec: AtomRecord = { symbol, dims, prefixable, scale };
-  atomFactor.set(symbol, factor);
-  for (const name of [symbol, ...aliases]) atomsByName.set(name, rec);
+// The tables below are built on first use, not at import: loading the module does no work beyond
+// defining it (a cold start pays only for parsing), and the first unit resolved pays well under a
+// millisecond once.
+
+interface AtomTables {
+  /** Every symbol and alias → its atom. */
+  readonly byName: Map<string, AtomRecord>;
+  /** Symbol → factor to SI. */
+  readonly factor: Map<string, number>;
 }
 
+let atomTables: AtomTables | undefined;
+
+function atoms(): AtomTables {
+  if (atomTables !== undefined) return atomTables;
+  const byName = new Map<string, AtomRecord>();
+  const factor = new Map<string, number>();
+  for (const [symbol, aliases, dims, f, prefixable, scale] of ATOMS) {
+    const rec: AtomRecord = { symbol, dims, prefixable, scale };
+    factor.set(symbol, f);
+    for (const name of [symbol, ...aliases]) byName.set(name, rec);
+  }
+  return (atomTables = { byName, factor });
+}
+
+/** The SI factor of an atom's symbol. */
+function atomFactor(symbol: string): number {
+  return atoms().factor.get(symbol)!;
+}
+
+let spellingDimensions: Map<string, Dimension> | undefined;
+
 /** The dimension each listed spelling reads as when none is expected: the first that lists it. */
-const spellingDimension = new Map<string, Dimension>();
-for (const [dimension, list] of Object.entries(UNIT_SPELLINGS) as [Dimension, readonly string[]][]) {
-  for (const s of list) if (!spellingDimension.has(s)) spellingDimension.set(s, dimension);
+function spellingDimension(spelling: string): Dimension | undefined {
+  if (spellingDimensions === undefined) {
+    spellingDimensions = new Map();
+    for (const [dimension, list] of Object.entries(UNIT_SPELLINGS) as [Dimension, readonly string[]][]) {
+      for (const s of list) if (!spellingDimensions.has(s)) spellingDimensions.set(s, dimension);
+    }
+  }
+  return spellingDimensions.get(spelling);
+}
+
+let compoundFactors: Map<string, number> | undefined;
+
+/**
+ * The exact factor of a listed compound spelling by canonical key: the generated factors paired with
+ * the keys of the spellings, visited in the generator's order (`forEachCompoundSpelling`).
+ */
+function compoundFactor(key: string): number | undefined {
+  if (compoundFactors === undefined) {
+    const map = new Map<string, number>();
+    let i = 0;
+    forEachCompoundSpelling(UNIT_SPELLINGS, GAUGE_UNITS, lookup, (k) => map.set(k, COMPOUND_FACTOR_LIST[i++]!));
+    compoundFactors = map;
+  }
+  return compoundFactors.get(key);
 }
 
 let suggestionPool: string[] | undefined;
@@ -94,7 +139,7 @@ function distance(a: string, b: string, limit: number): number {
  */
 export function suggestUnits(name: string): string[] {
   if (name.length === 0 || name.length > 40) return [];
-  suggestionPool ??= [...new Set([...atomsByName.keys(), ...Object.values(UNIT_SPELLINGS).flat(), ...Object.keys(GAUGE_UNITS)])];
+  suggestionPool ??= [...new Set([...atoms().byName.keys(), ...Object.values(UNIT_SPELLINGS).flat(), ...Object.keys(GAUGE_UNITS)])];
   const key = foldKey(name);
   const limit = key.length <= 3 ? 1 : 2;
   const scored: { s: string; score: number }[] = [];
@@ -109,9 +154,13 @@ export function suggestUnits(name: string): string[] {
   return best.slice(0, 3).map((x) => x.s);
 }
 
+let prefixesLongestFirst: string[] | undefined;
+
 const lookup: AtomLookup = {
-  atom: (name) => atomsByName.get(name),
-  prefixes: Object.keys(PREFIX_FACTORS).sort((a, b) => b.length - a.length),
+  atom: (name) => atoms().byName.get(name),
+  get prefixes() {
+    return (prefixesLongestFirst ??= Object.keys(PREFIX_FACTORS).sort((a, b) => b.length - a.length));
+  },
   suggest: suggestUnits,
 };
 
@@ -132,7 +181,7 @@ function analyse(text: string, body: string): { terms: ResolvedTerm[]; dims: Dim
   const terms = resolveTerms(parseUnitExpression(body), lookup, text);
   const single = terms.length === 1 && terms[0]!.exponent === 1 && terms[0]!.prefix === '' ? terms[0]!.atom : undefined;
   const dims = combinedDims(terms);
-  if (single?.scale) return { terms, dims, factor: atomFactor.get(single.symbol)!, single };
+  if (single?.scale) return { terms, dims, factor: atomFactor(single.symbol), single };
   if (dims[0] === 0 && dims[1] === 0 && dims[2] === 0 && dims[3] === 1 && dims[4] === 0) {
     throw new UnitError(
       'unit.syntax',
@@ -141,7 +190,7 @@ function analyse(text: string, body: string): { terms: ResolvedTerm[]; dims: Dim
     );
   }
   const key = canonicalKey(terms);
-  let factor = single ? atomFactor.get(single.symbol)! : COMPOUND_FACTORS[key];
+  let factor = single ? atomFactor(single.symbol) : compoundFactor(key);
   if (factor === undefined) {
     // combine exponents per prefixed name first (kPa^3/kPa^2 is kPa), then multiply out
     const exps = new Map<string, { f: number; e: number }>();
@@ -149,7 +198,7 @@ function analyse(text: string, body: string): { terms: ResolvedTerm[]; dims: Dim
       const name = t.prefix + t.atom.symbol;
       const hit = exps.get(name);
       if (hit) hit.e += t.exponent;
-      else exps.set(name, { f: atomFactor.get(t.atom.symbol)! * (t.prefix === '' ? 1 : PREFIX_FACTORS[t.prefix]!), e: t.exponent });
+      else exps.set(name, { f: atomFactor(t.atom.symbol) * (t.prefix === '' ? 1 : PREFIX_FACTORS[t.prefix]!), e: t.exponent });
     }
     factor = 1;
     for (const { f, e } of exps.values()) if (e !== 0) factor *= e === 1 ? f : f ** e;
@@ -188,7 +237,7 @@ function resolveUncached(text: string): ResolvedUnit {
   if (single?.scale) {
     return { text, kind: 'temperature', dimension: 'temperature', factor, offset: TEMPERATURE_OFFSETS[single.symbol] ?? 0 };
   }
-  const listed = spellingDimension.get(trimmed);
+  const listed = spellingDimension(trimmed);
   const dimension = listed !== undefined && sameVector(DIMENSIONS[listed], dims) ? listed : dimensionOfVector(dims);
   if (dimension === undefined) {
     throw new UnitError('unit.unknown', text, `"${previewText(text)}" is a valid unit expression but not of a dimension heatstate names (exponents of M, L, T, Θ, N: ${dims.join(', ')})`);
@@ -306,5 +355,5 @@ export function fromSI(si: number, u: ResolvedUnit, ambientPa: number): number {
 
 /** Every unit name in the registry (symbols and aliases), for error hints and invariants. */
 export function registryNames(): string[] {
-  return [...atomsByName.keys()];
+  return [...atoms().byName.keys()];
 }
