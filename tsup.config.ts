@@ -5,6 +5,7 @@ import { join, resolve } from 'node:path';
 import { defineConfig, type Options } from 'tsup';
 import type * as TypeScript from 'typescript';
 import { readManifest, tsupEntries } from './scripts/entries.js';
+import { mergeChunks } from './scripts/merge-chunks.js';
 
 const manifest = readManifest();
 const root = process.cwd();
@@ -82,6 +83,12 @@ export default defineConfig([
     // bundle the (tree-shaken) validation code instead of loading the zod package at run time:
     // importing the whole package costs over 100 ms of cold start
     noExternal: ['zod'],
+    // fewer, larger shared chunks and ASCII-only files for the ES module output: each file costs a
+    // cold start about as much as 20 kB of code (scripts/merge-chunks.ts)
+    async onSuccess() {
+      const plan = await mergeChunks(join(root, 'dist'), manifest.entries.map((e) => `${e.out}.js`));
+      console.log(`ESM merged ${plan.reduce((n, g) => n + g.length, 0)} shared chunks into ${plan.length}`);
+    },
   },
   /** The command-line tool (ESM, with its shebang). */
   {
