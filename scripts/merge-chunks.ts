@@ -44,6 +44,8 @@ export const defaultMergeOptions: MergeOptions = { fileMs: 1.5, kBMs: 0.08, maxG
 interface FileNode {
   readonly size: number;
   readonly deps: readonly string[];
+  /** The names it exports (two chunks that export the same name are never merged: `export *` of both would drop it). */
+  readonly exports?: readonly string[];
 }
 
 const importPattern = /(?:^|\n|;)\s*(?:import|export)\s*(?:[\w$*{][^;]*?from\s*)?["'](\.{1,2}\/[^"']+)["']/g;
@@ -61,7 +63,7 @@ export function readGraph(dist: string, entries: readonly string[]): Map<string,
     if (files.has(file)) return;
     const code = readFileSync(join(dist, file), 'utf8');
     const deps = importsOf(dist, file, code);
-    files.set(file, { size: Buffer.byteLength(code), deps });
+    files.set(file, { size: Buffer.byteLength(code), deps, exports: exportedNames(code) });
     for (const d of deps) visit(d);
   };
   for (const e of entries) visit(e);
@@ -82,6 +84,7 @@ export function planMerges(files: ReadonlyMap<string, FileNode>, entries: readon
   }
   const isEntry = new Set(entries);
   const alive = (): number[] => members.map((m, i) => (m.length > 0 ? i : -1)).filter((i) => i >= 0);
+  const namesOf = (g: number): string[] => members[g]!.flatMap((f) => files.get(f)!.exports ?? []);
   const sizeOf = (g: number): number => members[g]!.reduce((s, f) => s + files.get(f)!.size, 0);
   const edgesOf = (g: number, assign: (f: string) => number): Set<number> => {
     const out = new Set<number>();
@@ -141,6 +144,7 @@ export function planMerges(files: ReadonlyMap<string, FileNode>, entries: readon
       for (let j = i + 1; j < chunks.length; j++) {
         const a = chunks[i]!;
         const b = chunks[j]!;
+        if (namesOf(a).some((n) => namesOf(b).includes(n))) continue;
         const assign = (f: string): number => (groupOf.get(f) === b ? a : groupOf.get(f)!);
         const { reach, acyclic } = evaluate(
           assign,

@@ -56,7 +56,7 @@ export function bracketedNewton(f: ResidualWithSlope, lo: number, hi: number, x0
   if (!Number.isFinite(fa) || !Number.isFinite(fb)) return Status.invalidInput;
   if (fa === 0) return done(out, a, 0);
   if (fb === 0) return done(out, b, 0);
-  if (fa * fb > 0) return Status.outOfRange;
+  if ((fa > 0) === (fb > 0)) return Status.outOfRange; // signs compared: a product of tiny values underflows
   let x = x0 > a && x0 < b ? x0 : 0.5 * (a + b);
   for (let i = 1; i <= 100; i++) {
     const fx = f.value(x);
@@ -65,7 +65,7 @@ export function bracketedNewton(f: ResidualWithSlope, lo: number, hi: number, x0
       return Status.noConvergence;
     }
     if (fx === 0) return done(out, x, i);
-    if (fx * fa < 0) b = x;
+    if ((fx > 0) !== (fa > 0)) b = x;
     else {
       a = x;
       fa = fx;
@@ -111,13 +111,14 @@ export function brent(f: Residual, lo: number, hi: number, relTolerance: number,
   if (!Number.isFinite(fa) || !Number.isFinite(fb)) return Status.invalidInput;
   if (fa === 0) return done(out, a, 0);
   if (fb === 0) return done(out, b, 0);
-  if (!(fa * fb < 0)) return Status.outOfRange;
+  // signs compared, not multiplied: the product of two tiny values underflows to 0
+  if (!((fa < 0 && fb > 0) || (fa > 0 && fb < 0))) return Status.outOfRange;
   let c = a;
   let fc = fa;
   let d = b - a;
   let e = d;
   for (let i = 0; i < 200; i++) {
-    if (fb * fc > 0) {
+    if ((fb > 0 && fc > 0) || (fb < 0 && fc < 0)) {
       c = a;
       fc = fa;
       d = b - a;

@@ -350,3 +350,14 @@ describe('the (T, RH, p) path of the batch', () => {
     );
   });
 });
+
+describe('a relative humidity in the subnormal doubles', () => {
+  // found by the random bad-pair test above (seed 794920222): RH·p_ws(T) is subnormal there, and the
+  // root finder's bracket test multiplied two residuals, one of them subnormal: the product
+  // underflowed to 0 and the solve stopped. An identity: at a residual this small the answer is the
+  // dry-air limit, which RH = 1e-300 (always solved) gives to the last digit
+  it('solves (RH, Twb) as the limit of dry air, like RH = 1e-300', () => {
+    const at = (RH: number) => humidAir.state({ RH, Twb: '330.6085757337247 K', p: '435865.84490137507 Pa' }).T.in('K');
+    expect(at(1e-323)).toBe(at(1e-300));
+  });
+});
