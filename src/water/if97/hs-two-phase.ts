@@ -6,7 +6,7 @@
  * With Δh = h″ − h′, Δs = s″ − s′, the qualities agree where (h − h′)Δs = (s − s′)Δh, that is where
  * f(T) = h − s·τ(T) − γ(T) = 0 with τ = Δh/Δs (equal to T where IF97 keeps Clausius–Clapeyron, to
  * within its consistency tolerance) and γ = h′ − s′·τ: linear in h and s, so a table of τ and γ over
- * the saturation line, computed once from the same equations at import (every 5 K from 273.15 K to
+ * the saturation line, computed once from the same equations on first use (every 5 K from 273.15 K to
  * 623.15 K, with their T-derivatives), gives the start by a cubic Hermite interpolation of f. The
  * start lands within a few µK, and one or two Newton steps finish.
  *
@@ -64,17 +64,18 @@ function buildTable(): Float64Array {
   }
   return table;
 }
-const TABLE = /* @__PURE__ */ buildTable();
+/** Built on the first two-phase (h, s) flash, not at import (no work at module scope). */
+let TABLE: Float64Array | undefined;
 
 /** f at node i for (h, s): h − s·τᵢ − γᵢ. */
-function fAt(i: number, h: number, s: number): number {
+function fAt(table: Float64Array, i: number, h: number, s: number): number {
   const k = i * W;
-  return h - s * TABLE[k]! - TABLE[k + 2]!;
+  return h - s * table[k]! - table[k + 2]!;
 }
 
 /** Node i lies below the root for (h, s): s′ < s there and f > 0. */
-function below(i: number, h: number, s: number): boolean {
-  return TABLE[i * W + 4]! < s && fAt(i, h, s) > 0;
+function below(table: Float64Array, i: number, h: number, s: number): boolean {
+  return table[i * W + 4]! < s && fAt(table, i, h, s) > 0;
 }
 
 /**
@@ -85,20 +86,21 @@ function below(i: number, h: number, s: number): boolean {
  * no node pair brackets a root.
  */
 export function twoPhaseStartTemperatureTable(h: number, s: number): number {
-  if (!below(0, h, s)) return NaN;
+  const table = (TABLE ??= buildTable());
+  if (!below(table, 0, h, s)) return NaN;
   let lo = 0;
   let hi = NODES - 1;
-  if (below(hi, h, s)) return NaN;
+  if (below(table, hi, h, s)) return NaN;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    if (below(mid, h, s)) lo = mid;
+    if (below(table, mid, h, s)) lo = mid;
     else hi = mid;
   }
-  const f0 = fAt(lo, h, s);
-  const f1 = fAt(hi, h, s);
+  const f0 = fAt(table, lo, h, s);
+  const f1 = fAt(table, hi, h, s);
   // slopes per unit of the local variable u ∈ [0, 1]
-  const d0 = -(s * TABLE[lo * W + 1]! + TABLE[lo * W + 3]!) * STEP;
-  const d1 = -(s * TABLE[hi * W + 1]! + TABLE[hi * W + 3]!) * STEP;
+  const d0 = -(s * table[lo * W + 1]! + table[lo * W + 3]!) * STEP;
+  const d1 = -(s * table[hi * W + 1]! + table[hi * W + 3]!) * STEP;
   // f is convex (f″ ≈ cp′/T), so Newton steps from the chord's root (f1 ≤ 0 and f still falling at the
   // upper node) or else from the node below (the interval may hold f's minimum and both roots) close
   // in on the first root from below
