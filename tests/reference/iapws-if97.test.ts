@@ -12,32 +12,12 @@ import { region5 } from '../../src/water/if97/region5.js';
 import { b23Pressure, b23Temperature } from '../../src/water/if97/b23.js';
 import { b2bcEnthalpy, b2bcPressure, region1TemperaturePH, region2TemperaturePH } from '../../src/water/if97/backward-ph.js';
 import { region1TemperaturePS, region2TemperaturePS } from '../../src/water/if97/backward-ps.js';
-import { WaterProperties } from '../../src/water/if97/properties.js';
 import { expectClose } from '../helpers/tolerance.js';
+import { checkGibbs, checkRegion3, nine, TABLE_15, TABLE_33, TABLE_42, TABLE_5 } from './if97-verification.js';
 
-/** Printed to 9 significant digits: agree within half a unit in the 9th digit. */
-const nine = (actual: number, printed: number) => expectClose(actual, printed, { rel: 5.0001e-9 });
-const out = new WaterProperties();
-type Row = [number, number, number, number, number, number, number, number];
-
-function checkGibbs(f: (p: number, T: number, o: WaterProperties) => WaterProperties, rows: Row[]) {
-  it.each(rows)('T = %d K, p = %d MPa', (T, p, v, h, u, s, cp, w) => {
-    f(p * 1e6, T, out);
-    nine(out.v, v);
-    nine(out.h / 1e3, h);
-    nine(out.u / 1e3, u);
-    nine(out.s / 1e3, s);
-    nine(out.cp / 1e3, cp);
-    nine(out.w, w);
-  });
-}
 
 describe('Table 5: region 1', () => {
-  checkGibbs(region1, [
-    [300, 3, 0.100215168e-2, 0.115331273e3, 0.112324818e3, 0.392294792, 0.417301218e1, 0.150773921e4],
-    [300, 80, 0.971180894e-3, 0.184142828e3, 0.106448356e3, 0.368563852, 0.401008987e1, 0.163469054e4],
-    [500, 3, 0.120241800e-2, 0.975542239e3, 0.971934985e3, 0.258041912e1, 0.465580682e1, 0.124071337e4],
-  ]);
+  checkGibbs(region1, TABLE_5);
 });
 
 describe('Table 7: region 1 backward T(p, h)', () => {
@@ -57,11 +37,7 @@ describe('Table 9: region 1 backward T(p, s)', () => {
 });
 
 describe('Table 15: region 2', () => {
-  checkGibbs(region2, [
-    [300, 0.0035, 0.394913866e2, 0.254991145e4, 0.241169160e4, 0.852238967e1, 0.191300162e1, 0.427920172e3],
-    [700, 0.0035, 0.923015898e2, 0.333568375e4, 0.301262819e4, 0.101749996e2, 0.208141274e1, 0.644289068e3],
-    [700, 30, 0.542946619e-2, 0.263149474e4, 0.246861076e4, 0.517540298e1, 0.103505092e2, 0.480386523e3],
-  ]);
+  checkGibbs(region2, TABLE_15);
 });
 
 describe('Table 18: metastable-vapour region', () => {
@@ -110,19 +86,7 @@ describe('Table 29: region 2 backward T(p, s)', () => {
 });
 
 describe('Table 33: region 3', () => {
-  it.each([
-    [650, 500, 0.255837018e2, 0.186343019e4, 0.181226279e4, 0.405427273e1, 0.138935717e2, 0.502005554e3],
-    [650, 200, 0.222930643e2, 0.237512401e4, 0.226365868e4, 0.485438792e1, 0.446579342e2, 0.383444594e3],
-    [750, 500, 0.783095639e2, 0.225868845e4, 0.210206932e4, 0.446971906e1, 0.634165359e1, 0.760696041e3],
-  ])('T = %d K, ρ = %d kg/m³', (T, rho, p, h, u, s, cp, w) => {
-    region3(rho, T, out);
-    nine(out.p / 1e6, p);
-    nine(out.h / 1e3, h);
-    nine(out.u / 1e3, u);
-    nine(out.s / 1e3, s);
-    nine(out.cp / 1e3, cp);
-    nine(out.w, w);
-  });
+  checkRegion3(region3, TABLE_33);
 });
 
 describe('Tables 35 and 36: region 4 saturation pressure and temperature', () => {
@@ -139,11 +103,7 @@ describe('Tables 35 and 36: region 4 saturation pressure and temperature', () =>
 });
 
 describe('Table 42: region 5', () => {
-  checkGibbs(region5, [
-    [1500, 0.5, 0.138455090e1, 0.521976855e4, 0.452749310e4, 0.965408875e1, 0.261609445e1, 0.917068690e3],
-    [1500, 30, 0.230761299e-1, 0.516723514e4, 0.447495124e4, 0.772970133e1, 0.272724317e1, 0.928548002e3],
-    [2000, 30, 0.311385219e-1, 0.657122604e4, 0.563707038e4, 0.853640523e1, 0.288569882e1, 0.106736948e4],
-  ]);
+  checkGibbs(region5, TABLE_42);
 });
 
 describe('Section 4: the B23 check value', () => {
