@@ -63,43 +63,49 @@ function emitDeclarations(): Record<string, string> {
 
 let declarations: Options['dts'] | undefined;
 
+/** What every JavaScript build shares. */
+const common = {
+  sourcemap: false,
+  splitting: true,
+  treeshake: true,
+  target: 'node20',
+  outDir: 'dist',
+  // bundle the (tree-shaken) validation code instead of loading the zod package at run time:
+  // importing the whole package costs over 100 ms of cold start
+  noExternal: ['zod'],
+} satisfies Options;
+
+/**
+ * Three builds, run side by side in one tsup process: the ES modules, the CommonJS modules and the
+ * declarations. The command-line tool (with its shebang) is one more entry of the ES module build,
+ * so it shares that build's chunks instead of bundling every model a second time; CommonJS has no
+ * `bin`, so it builds only the public entries.
+ */
 export default defineConfig([
   /** One entry per public subpath (entries.json), so a user who imports only `heatstate/units` loads nothing else. */
   {
-    entry: tsupEntries(manifest),
-    format: ['esm', 'cjs'],
-    // the declarations emitted above, bundled per entry into .d.ts and .d.cts; emitted when tsup
-    // reads this option (once, at the start of the build), not when the config is imported
-    get dts(): Options['dts'] {
-      declarations ??= { entry: emitDeclarations(), compilerOptions: { stripInternal: true } };
-      return declarations;
-    },
-    sourcemap: false,
+    ...common,
+    entry: { ...tsupEntries(manifest), [manifest.cli.out]: manifest.cli.source },
+    format: ['esm'],
     clean: true,
-    splitting: true,
-    treeshake: true,
-    target: 'node20',
-    outDir: 'dist',
-    // bundle the (tree-shaken) validation code instead of loading the zod package at run time:
-    // importing the whole package costs over 100 ms of cold start
-    noExternal: ['zod'],
     // fewer, larger shared chunks and ASCII-only files for the ES module output: each file costs a
     // cold start about as much as 20 kB of code (scripts/merge-chunks.ts)
     async onSuccess() {
-      const plan = await mergeChunks(join(root, 'dist'), manifest.entries.map((e) => `${e.out}.js`));
+      const plan = await mergeChunks(join(root, 'dist'), [...manifest.entries.map((e) => `${e.out}.js`), `${manifest.cli.out}.js`]);
       console.log(`ESM merged ${plan.reduce((n, g) => n + g.length, 0)} shared chunks into ${plan.length}`);
     },
   },
-  /** The command-line tool (ESM, with its shebang). */
+  { ...common, entry: tsupEntries(manifest), format: ['cjs'], clean: false },
+  /** The declarations emitted above, bundled per entry into .d.ts and .d.cts. */
   {
-    entry: { [manifest.cli.out]: manifest.cli.source },
-    format: ['esm'],
-    sourcemap: false,
-    clean: false,
-    splitting: false,
-    treeshake: true,
-    target: 'node20',
+    entry: tsupEntries(manifest),
+    format: ['esm', 'cjs'],
     outDir: 'dist',
-    noExternal: ['zod'],
+    clean: false,
+    // emitted when tsup reads this option (once, at the start of the build), not when the config is imported
+    get dts(): Options['dts'] {
+      declarations ??= { entry: emitDeclarations(), compilerOptions: { stripInternal: true }, only: true };
+      return declarations;
+    },
   },
 ]);

@@ -29,9 +29,13 @@ describe('entries.json drives the public surface', () => {
   it('src/index.ts re-exports exactly the root entries', () => {
     expect(readFileSync(resolve(ROOT, 'src/index.ts'), 'utf8')).toBe(rootIndex(manifest));
   });
-  it("tsup builds every entry and the CLI", () => {
-    const configs = tsupConfig as unknown as { entry: Record<string, string> }[];
-    expect(configs[0]!.entry).toEqual(tsupEntries(manifest));
-    expect(configs[1]!.entry).toEqual({ [manifest.cli.out]: manifest.cli.source });
+  it('tsup builds every entry in both formats with their declarations, and the CLI as an ES module', () => {
+    const configs = tsupConfig as unknown as { entry: Record<string, string>; format: string[] }[];
+    // `dts` is a getter that emits the declarations: ask whether a config has it without reading it
+    const declares = (c: object) => Object.getOwnPropertyDescriptor(c, 'dts') !== undefined;
+    const built = (format: string) => configs.filter((c) => c.format.includes(format) && !declares(c)).map((c) => c.entry);
+    expect(built('esm')).toEqual([{ ...tsupEntries(manifest), [manifest.cli.out]: manifest.cli.source }]);
+    expect(built('cjs')).toEqual([tsupEntries(manifest)]);
+    expect(configs.filter(declares).map((c) => c.entry)).toEqual([tsupEntries(manifest)]);
   });
 });
