@@ -5,7 +5,7 @@
  * @module
  */
 import { formatNumber } from '../errors.js';
-import { fluid } from '../fluids/index.js';
+import { fluid, type FluidPairInput } from '../fluids/index.js';
 import { idealGas, type GasStateResult, type IdealGas } from '../ideal-gas/gas.js';
 import { gasTransportIds } from '../ideal-gas/transport.js';
 import { incompressible } from '../incompressible/index.js';
@@ -182,7 +182,7 @@ export function fluidCommand(args: Args): Row[] {
     ];
   }
   const set = chooseSet(args.values, [...args.values.keys()], `fluid ${words[0]}`, STATE_PAIRS);
-  const st = f.state(readInputs(args.values, set) as unknown as Parameters<typeof f.state>[0]);
+  const st = f.state(readInputs(args.values, set) as unknown as FluidPairInput);
   return [
     ...head, ['T', st.T], ['p', st.p], ['phase', st.phase], ['x', st.x],
     ['v', st.v], ['rho', st.rho], ['u', st.u], ['h', st.h], ['s', st.s], ['cp', st.cp], ['cv', st.cv], ['w', st.w], ['k', st.k],
