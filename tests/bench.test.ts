@@ -17,7 +17,7 @@ describe('bench/ (figures only: nothing here asserts a time)', () => {
   it('runs to completion in smoke mode and reports every case, the cold starts, the machine and Node version', async () => {
     const dir = mkdtempSync(join(tmpdir(), 'heatstate-bench-'));
     const out = join(dir, 'results.json');
-    await runCommand(join(root, 'node_modules/.bin/tsx'), ['bench/run.ts', '--smoke'], { cwd: root, env: { ...process.env, HEATSTATE_BENCH_OUT: out }, timeout: 240_000 });
+    await runCommand(process.execPath, ['--import', 'tsx', 'bench/run.ts', '--smoke'], { cwd: root, env: { ...process.env, HEATSTATE_BENCH_OUT: out }, timeout: 240_000 });
     const text = readFileSync(out, 'utf8');
     rmSync(dir, { recursive: true, force: true });
     const results = JSON.parse(text) as { node: string; cores: number; smoke: boolean; cases: string[]; rows: { name: string; medianNs: number }[]; coldStart: { entry: string; medianMs?: number; skipped?: string }[] };

@@ -6,8 +6,9 @@ import { builtDist } from './helpers/dist.js';
 import { expectClose } from './helpers/tolerance.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const tsx = fileURLToPath(new URL('../node_modules/.bin/tsx', import.meta.url));
-const run = (file: string, env: Record<string, string> = {}) => execFileSync(file.endsWith('.ts') ? tsx : process.execPath, [file], { cwd: root, encoding: 'utf8', timeout: 120_000, env: { ...process.env, ...env } });
+// a TypeScript example runs in one Node process with tsx's loader (`node --import tsx`, as `npm start`
+// runs it through tsx's bin, which starts a second process for the same)
+const run = (file: string, env: Record<string, string> = {}) => execFileSync(process.execPath, file.endsWith('.ts') ? ['--import', 'tsx', file] : [file], { cwd: root, encoding: 'utf8', timeout: 120_000, env: { ...process.env, ...env } });
 
 // examples import the built package ('heatstate/...') as users do: they need this run's dist/
 beforeAll(() => builtDist(), 300_000);

@@ -5,11 +5,10 @@ import { describe, expect, it } from 'vitest';
 import { humidAir } from '../../src/humid-air/index.js';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
-const tsx = fileURLToPath(new URL('../../node_modules/.bin/tsx', import.meta.url));
 
 describe('examples/air-handler.ts', () => {
   it('prints the coil and reheat loads that the facade computes, and the caution', () => {
-    const out = execFileSync(tsx, ['examples/air-handler.ts'], { cwd: root, encoding: 'utf8', timeout: 120_000 });
+    const out = execFileSync(process.execPath, ['--import', 'tsx', 'examples/air-handler.ts'], { cwd: root, encoding: 'utf8', timeout: 120_000 });
     const mixed = humidAir.mix([
       { state: humidAir.state({ T: '33 °C', RH: 0.4 }), flow: '1.2 kg/s' },
       { state: humidAir.state({ T: '24 °C', RH: 0.5 }), flow: '3.6 kg/s' },
