@@ -144,7 +144,7 @@ describe('humidAirBatch fused loop', () => {
           }
         },
       ),
-      { numRuns: 60, endOnFailure: true }, // no shrinking: a failing array of states shrinks for minutes
+      { numRuns: 30, endOnFailure: true }, // no shrinking: a failing array of states shrinks for minutes
     );
   });
 });

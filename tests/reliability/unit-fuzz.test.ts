@@ -54,7 +54,7 @@ describe('fuzzed unit text through the public paths', () => {
         }
         expect(parseSteps(u)).toBeLessThanOrEqual(linear(u));
       }),
-      { numRuns: 4000 },
+      { numRuns: 2000 },
     );
   });
 
@@ -64,7 +64,7 @@ describe('fuzzed unit text through the public paths', () => {
         const r = answer(() => readQuantity(`${n} ${u}` as never, d, 'x'));
         if (!(r instanceof HeatstateError)) expect(Number.isFinite(r)).toBe(true);
       }),
-      { numRuns: 3000 },
+      { numRuns: 1500 },
     );
   });
 
@@ -75,7 +75,7 @@ describe('fuzzed unit text through the public paths', () => {
         if (!(r instanceof HeatstateError)) expect(Number.isFinite(r.factor) && r.factor > 0, u).toBe(true);
         expect(parseSteps(u)).toBeLessThanOrEqual(linear(u));
       }),
-      { numRuns: 4000 },
+      { numRuns: 2000 },
     );
   });
 
@@ -90,7 +90,7 @@ describe('fuzzed unit text through the public paths', () => {
           expect(Number.isFinite(v), u).toBe(true);
         }
       }),
-      { numRuns: 1500 },
+      { numRuns: 800 },
     );
   });
 });

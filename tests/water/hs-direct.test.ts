@@ -65,7 +65,7 @@ describe('(h, s) flash, direct paths', () => {
         expect(stateFromPT(p, T, src)).toBe(Status.ok);
         expectDirect(HS_PATH.region12, `p = ${p}, T = ${T}`);
       }),
-      { numRuns: 2000 },
+      { numRuns: 1000 },
     );
   });
 
@@ -77,7 +77,7 @@ describe('(h, s) flash, direct paths', () => {
         expect(stateFromPT(p, T, src)).toBe(Status.ok);
         expectDirect(HS_PATH.region12, `p = ${p}, T = ${T}`);
       }),
-      { numRuns: 2000 },
+      { numRuns: 1000 },
     );
   });
 
@@ -90,7 +90,7 @@ describe('(h, s) flash, direct paths', () => {
         fc.pre(stateFromPT(p, T, src) === Status.ok && src.region === 3);
         expectDirect(HS_PATH.region3, `p = ${p}, T = ${T}`);
       }),
-      { numRuns: 1000 },
+      { numRuns: 500 },
     );
   });
 
@@ -102,7 +102,7 @@ describe('(h, s) flash, direct paths', () => {
         expectDirect(HS_PATH.twoPhase, `p = ${p}, x = ${x}`);
         expect(Math.abs(out.x - x)).toBeLessThan(1e-9);
       }),
-      { numRuns: 2000 },
+      { numRuns: 1000 },
     );
   });
 
