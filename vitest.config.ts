@@ -13,7 +13,7 @@ const integration = [
   'tests/browser.test.ts',
   'tests/examples.test.ts',
   'tests/bench.test.ts',
-  'tests/cli.test.ts',
+  'tests/cli-bin.test.ts',
   'tests/bundle.test.ts',
   'tests/docs/api.test.ts',
   'tests/docs/examples-built.test.ts',

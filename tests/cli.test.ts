@@ -3,11 +3,8 @@
  * library's own functions, never hard-coded), JSON output, the help text's examples, and a
  * catalogue of malformed command lines with their exit codes and one-line messages.
  */
-import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import fc from 'fast-check';
-import { beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { run } from '../src/cli/run.js';
 import { helpText } from '../src/cli/help.js';
 import { formatNumber } from '../src/errors.js';
@@ -18,9 +15,7 @@ import { incompressible } from '../src/incompressible/index.js';
 import { Quantity, quantity } from '../src/units/quantity.js';
 import { water } from '../src/water/index.js';
 import { expectClose } from './helpers/tolerance.js';
-import { builtDist } from './helpers/dist.js';
 
-const root = fileURLToPath(new URL('..', import.meta.url));
 function cli(...args: string[]): { code: number; out: string; err: string } {
   let out = '';
   let err = '';
@@ -405,20 +400,5 @@ describe('random command lines (fast-check)', () => {
       }),
       { numRuns: 1500 },
     );
-  });
-});
-
-describe('the built bin (dist/cli.js)', () => {
-  beforeAll(() => builtDist(), 300_000);
-  it('runs from the shell with exit codes', () => {
-    const ok = spawnSync(process.execPath, ['dist/cli.js', 'water', 'p=1 atm', 'T=25 °C'], { cwd: root, encoding: 'utf8' });
-    expect(ok.status).toBe(0);
-    expect(ok.stdout).toMatch(/^phase\s+liquid$/m);
-    const bad = spawnSync(process.execPath, ['dist/cli.js', 'water', 'p=1 atm', 'T=-500 K'], { cwd: root, encoding: 'utf8' });
-    expect(bad.status).toBe(1);
-    expect(bad.stderr.trim().split('\n')).toHaveLength(1);
-    const usage = spawnSync(process.execPath, ['dist/cli.js', 'water', 'p=1 atm', '--units', 'imperial'], { cwd: root, encoding: 'utf8' });
-    expect(usage.status).toBe(2);
-    expect(usage.stderr.trim().split('\n')).toHaveLength(1);
   });
 });
