@@ -4,11 +4,11 @@
  *
  * @module
  */
-import { formatNumber } from '../errors.js';
+import { formatNumber, OutOfRangeError } from '../errors.js';
 import { fluid, type FluidPairInput } from '../fluids/index.js';
 import { idealGas, type GasStateResult, type IdealGas } from '../ideal-gas/gas.js';
 import { gasTransportIds } from '../ideal-gas/transport.js';
-import { incompressible } from '../incompressible/index.js';
+import { incompressible, type IncompressibleSubstance } from '../incompressible/index.js';
 import type { Dimension } from '../units/dimensions.js';
 import { Quantity } from '../units/quantity.js';
 import { water, type WaterPair } from '../water/state.js';
@@ -138,7 +138,7 @@ function gasTransportRows(gas: IdealGas, T: number, st?: GasStateResult): Row[] 
   return rows;
 }
 
-/** `heatstate liquid <substance> T1=… T2=… [p1=…] [p2=…]`. */
+/** `heatstate liquid <substance> T1=… T2=… [p1=…] [p2=…] [--transport]`. */
 export function liquidCommand(args: Args): Row[] {
   const names = args.positional.slice(1);
   if (names.length === 0) throw new UsageError('heatstate liquid needs a substance, for example: heatstate liquid copper T1="20 °C" T2="120 °C"');
@@ -150,10 +150,35 @@ export function liquidCommand(args: Args): Row[] {
   const T2 = inputs.T2 as `${number} K`;
   const p1 = (inputs.p1 ?? '101.325 kPa') as `${number} Pa`;
   const p2 = (inputs.p2 ?? p1) as `${number} Pa`;
-  return [
+  const rows: Row[] = [
     ['substance', sub.name], ['c (mean)', sub.averageC(T1, T2)], ['rho', sub.rho],
     ['delta u', sub.deltaU(T1, T2)], ['delta h', sub.deltaH({ T: T1, p: p1 }, { T: T2, p: p2 })], ['delta s', sub.deltaS(T1, T2)],
   ];
+  if (args.transport) rows.push(...liquidTransportRows(sub, T1, p1, '1'), ...liquidTransportRows(sub, T2, p2, '2'));
+  return rows;
+}
+
+/**
+ * The transport rows of `heatstate liquid … --transport` at one of the two states: μ, λ, ν, α and Pr
+ * of a liquid (λ and α of a solid) as the substance's state gives them, and a `transport` row with
+ * the facade's reason where its data leave a value out or do not reach T.
+ */
+function liquidTransportRows(sub: IncompressibleSubstance, T: `${number} K`, p: `${number} Pa`, suffix: string): Row[] {
+  const st = sub.state({ T, p });
+  const liquid = 'mu' in st;
+  const rows: Row[] = liquid ? transportRows(st, suffix) : [[`lambda${suffix}`, st.lambda], [`alpha${suffix}`, st.alpha]];
+  // the facade's message, without the library option it suggests for going outside the data
+  const why = (read: () => unknown): string[] => {
+    try {
+      read();
+      return [];
+    } catch (e) {
+      return [e instanceof OutOfRangeError ? new OutOfRangeError(e.range).message : (e as Error).message];
+    }
+  };
+  const reasons = [...(liquid && st.mu === undefined ? why(() => sub.viscosity(T)) : []), ...(st.lambda === undefined ? why(() => sub.thermalConductivity(T)) : [])];
+  if (reasons.length > 0) rows.push([`transport${suffix}`, reasons.join('; ')]);
+  return rows;
 }
 
 /** The Joule–Thomson coefficient (K/Pa) in K/MPa or °F/psi, by the library's conversions. */

@@ -20,8 +20,9 @@ usage:
   heatstate gas <species> T=<value> [p=<value>] | h=<value> p=<value> | s=<value> p=<value> [--transport]
         ideal-gas properties (NASA polynomials); one species; --transport adds the dilute-gas
         mu, lambda and Pr (with nu and alpha when p is given) where the species has transport data
-  heatstate liquid <substance> T1=<value> T2=<value> [p1=<value>] [p2=<value>]
-        incompressible mean c, Δu, Δh and Δs between two states (p1, p2 default 1 atm)
+  heatstate liquid <substance> T1=<value> T2=<value> [p1=<value>] [p2=<value>] [--transport]
+        incompressible mean c, Δu, Δh and Δs between two states (p1, p2 default 1 atm);
+        --transport adds mu, lambda, nu, alpha and Pr at both states (lambda and alpha of a solid)
   heatstate air <two of T, Twb, Tdp, RH, W, h> [p=<value> | altitude=<value>]
         a humid-air state (default 101.325 kPa); RH as 0.5 or 50%, W as 0.01, "10 g/kg" or
         "70 gr/lbm"; W, h, v and cp are per kg of dry air
@@ -69,6 +70,7 @@ examples:
   heatstate gas air h="500 kJ/kg" p="1 atm"
   heatstate gas N2 T=80degF p=14.7psia --transport --units us
   heatstate liquid copper T1="20 °C" T2="120 °C"
+  heatstate liquid "engine oil" T1="20 °C" T2="60 °C" --transport
   heatstate liquid water T1=25degC T2=25degC p1="1 atm" p2="500 psia" --units us
   heatstate air T="30 °C" RH=50%
   heatstate air T=86degF Twb=70degF altitude="5000 ft" --units us

@@ -22,7 +22,7 @@ const COMMANDS: Readonly<Record<string, { run: (args: Args) => Row[]; transport?
   sat: { run: saturationCommand, transport: true },
   saturation: { run: saturationCommand, transport: true },
   gas: { run: gasCommand, transport: true },
-  liquid: { run: liquidCommand },
+  liquid: { run: liquidCommand, transport: true },
   air: { run: airCommand },
   'air-mix': { run: airMixCommand },
   coil: { run: coilCommand },
@@ -54,7 +54,7 @@ export function run(argv: readonly string[], stdout: (s: string) => void, stderr
     if (command === undefined) throw new UsageError(`no command: use ${COMMAND_LIST} (see heatstate --help)`);
     const spec = Object.hasOwn(COMMANDS, command) ? COMMANDS[command]! : undefined;
     if (spec === undefined) throw new UsageError(`unknown command "${command}": use ${COMMAND_LIST} (see heatstate --help)`);
-    if (args.transport && spec.transport !== true) throw new UsageError(`--transport applies to heatstate water, sat and gas, not to ${command}`);
+    if (args.transport && spec.transport !== true) throw new UsageError(`--transport applies to heatstate water, sat, gas and liquid, not to ${command}`);
     const rows = spec.run(args);
     stdout(format(rows, args.units, args.json));
     return 0;
