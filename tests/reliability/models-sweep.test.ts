@@ -30,7 +30,7 @@ function noNaN(record: object, label: string, fail: Failures): void {
 
 describe('ideal gases: random states of every species', () => {
   const gases: IdealGas[] = [...speciesNames().map((n) => idealGas(n)), dryAir(), idealGas('air', { model: 'constant-cp' }), idealGas('CO2', { basis: 'molar' } as never) as unknown as IdealGas];
-  const perGas = 350;
+  const perGas = 700;
   it(`${perGas} states per gas (${gases.length} gases) from (T, p), back from (h, p) and (s, p) to 1e-9`, () => {
     const r = new Random(8314);
     const fail = new Failures();
