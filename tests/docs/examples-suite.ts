@@ -44,9 +44,14 @@ import { dirname, join, relative, sep } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import Decimal from 'decimal.js';
 import { transformSync } from 'esbuild';
-import ts from 'typescript';
+import { createRequire } from 'node:module';
+import type * as TypeScript from 'typescript';
 import { describe, expect, it } from 'vitest';
 import { readManifest, specifier } from '../../scripts/entries.js';
+
+// TypeScript's parser (the export index below) by require: an ES import of the CommonJS compiler
+// would first have Node scan its 9 MB for export names (about 0.7 s of a core)
+const ts = createRequire(import.meta.url)('typescript') as typeof TypeScript;
 
 const root = fileURLToPath(new URL('../../', import.meta.url));
 const rel = (p: string) => relative(root, p).split(sep).join('/');
@@ -463,8 +468,8 @@ function exportsOf(file: string): Map<string, string> {
     }
   }
   /** Interfaces and type aliases declared here: no run-time value (a local `export { T }` of one exports nothing at run time). */
-  const localTypes = new Set(source.statements.filter((st) => ts.isInterfaceDeclaration(st) || ts.isTypeAliasDeclaration(st)).map((st) => (st as ts.InterfaceDeclaration).name.text));
-  const bind = (b: ts.BindingName) => {
+  const localTypes = new Set(source.statements.filter((st) => ts.isInterfaceDeclaration(st) || ts.isTypeAliasDeclaration(st)).map((st) => (st as TypeScript.InterfaceDeclaration).name.text));
+  const bind = (b: TypeScript.BindingName) => {
     if (ts.isIdentifier(b)) names.set(b.text, file);
     else for (const e of b.elements) if (!ts.isOmittedExpression(e)) bind(e.name);
   };
@@ -532,7 +537,8 @@ async function scopeFor(example: Example, names: Set<string>): Promise<Module> {
   const dir = dirname(example.file);
   const own = candidates.filter((f) => f === example.file);
   const folder = candidates.filter((f) => f !== example.file && dirname(f) === dir);
-  const rest = [...candidates].sort((a, b) => distance(a, example.file) - distance(b, example.file) || a.localeCompare(b));
+  const away = new Map(candidates.map((f) => [f, distance(f, example.file)]));
+  const rest = [...candidates].sort((a, b) => away.get(a)! - away.get(b)! || a.localeCompare(b));
   type Place = { entry: (typeof entryModules)[number] } | { file: string };
   const order: Place[] = [...[...own, ...folder].map((file) => ({ file })), ...entryModules.map((entry) => ({ entry })), ...rest.map((file) => ({ file }))];
   const has = (m: Module, name: string) => Object.prototype.hasOwnProperty.call(m, name);
