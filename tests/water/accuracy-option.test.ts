@@ -14,6 +14,7 @@ import sample from './data/if97-high-precision.json';
 import { ulps, type Property } from '../../scripts/ulp-report.js';
 import { InvalidInputError, OutOfRangeError } from '../../src/errors.js';
 import { Quantity, quantity } from '../../src/units/index.js';
+import { waterBatch } from '../../src/water/batch.js';
 import { water, type WaterStateResult } from '../../src/water/state.js';
 import { region1Compensated, region2Compensated, region3Compensated, region5Compensated } from '../../src/water/if97/compensated.js';
 import { P_SAT_13, saturationAtP, saturationAtT, stateFromHS, stateFromPH, stateFromPS, stateFromPT, stateFromPX, stateFromTV, stateFromTX, WaterState } from '../../src/water/if97/index.js';
@@ -276,5 +277,61 @@ describe('the accuracy option is checked', () => {
       for (const prop of GIBBS) if (a[prop] !== b[prop]) differ++;
     }
     expect(differ).toBeGreaterThan(100);
+  });
+});
+
+describe("waterBatch(inputs, props, out, { accuracy: 'compensated' })", () => {
+  const props = ['T', 'p', 'v', 'rho', 'u', 'h', 's', 'cp', 'cv', 'w', 'x'] as const;
+  // regions 1, 2, 3, 5, two-phase below and above 623.15 K, and a bad element
+  const pts: [number, number][] = [[3e6, 300], [80e6, 500], [3500, 700], [25e6, 650], [20e6, 640], [30e6, 1500], [101325, 450]];
+  const p = Float64Array.from(pts, ([q]) => q);
+  const T = Float64Array.from(pts, ([, t]) => t);
+
+  it('(p, T), (p, h), (p, s): every element equals water.state with the option, bit for bit; the default batch is unchanged', () => {
+    const fastRef = waterBatch({ p, T }, props);
+    const h = fastRef.h;
+    const mixP = Float64Array.of(...p, 1e6, 19e6, NaN);
+    const mixH = Float64Array.of(...h, water.state({ p: Pa(1e6), x: 0.4 }).h.si, water.state({ p: Pa(19e6), x: 0.6 }).h.si, 1e6);
+    const s = Float64Array.of(...fastRef.s, water.state({ p: Pa(1e6), x: 0.4 }).s.si, water.state({ p: Pa(19e6), x: 0.6 }).s.si, 1e3);
+    const runs = [
+      { inputs: { p, T }, pair: (i: number) => ({ p: Pa(p[i]!), T: K(T[i]!) }) },
+      { inputs: { p: mixP, h: mixH }, pair: (i: number) => ({ p: Pa(mixP[i]!), h: quantity(mixH[i]!, 'J/kg') }) },
+      { inputs: { p: mixP, s }, pair: (i: number) => ({ p: Pa(mixP[i]!), s: Quantity.fromSI(s[i]!, 'specificEntropy') }) },
+    ];
+    for (const run of runs) {
+      const fast = waterBatch(run.inputs, props);
+      const comp = waterBatch(run.inputs, props, undefined, C);
+      expect(comp.status).toEqual(fast.status);
+      const n = run.inputs.p.length;
+      for (let i = 0; i < n; i++) {
+        if (comp.status[i] !== 0 && comp.status[i] !== 4) {
+          for (const prop of props) expect(comp[prop][i]).toBeNaN();
+          continue;
+        }
+        const a = si(water.state(run.pair(i) as never));
+        const b = si(water.state(run.pair(i) as never, C));
+        for (const prop of ALL) {
+          expect(Object.is(fast[prop][i], a[prop]), `fast ${prop}[${i}]`).toBe(true);
+          expect(Object.is(comp[prop][i], b[prop]), `compensated ${prop}[${i}]`).toBe(true);
+        }
+      }
+    }
+  });
+
+  it('with transport properties: μ and λ at the compensated state, as water.state gives them', () => {
+    const r = waterBatch({ p, T }, ['rho', 'mu', 'lambda'], undefined, C);
+    expect(Array.from(r.status)).toEqual([0, 0, 0, 0, 0, 1, 0]); // 1500 K is above the transport releases' 1173.15 K
+    for (let i = 0; i < p.length; i++) {
+      if (r.status[i] !== 0) continue;
+      const st = water.state({ p: Pa(p[i]!), T: K(T[i]!) }, C);
+      expect(r.rho[i]).toBe(st.rho.si);
+      expect(r.mu[i]).toBe(st.mu?.si ?? NaN);
+      expect(r.lambda[i]).toBe(st.lambda?.si ?? NaN);
+    }
+  });
+
+  it('a bad option is an InvalidInputError naming the valid values', () => {
+    expect(() => waterBatch({ p, T }, ['h'], undefined, { accuracy: 'double' } as never)).toThrow('options.accuracy must be one of "fast", "compensated"; got "double"');
+    expect(() => waterBatch({ p, T }, ['h'], undefined, { fast: true } as never)).toThrow(InvalidInputError);
   });
 });
