@@ -52,9 +52,9 @@ function region3Again(out: WaterProperties, keepPressure: boolean): void {
  * ```ts
  * const out = new WaterState();
  * stateFromPT(3e6, 300, out);                                 //=> 0
- * out.w;                                                      //=> 1507.7391938190232
+ * out.h;                                                      //=> 115331.27302143878 (J/kg, fast)
  * compensateState(out, HELD.pressure, defaultContext());      //=> 0
- * out.w;                                                      //=> 1507.7391938190236
+ * out.h;                                                      //=> 115331.27302143894 (J/kg, compensated)
  * ```
  */
 export function compensateState(out: WaterState, held: Held, ctx: SolverContext): StatusCode {
