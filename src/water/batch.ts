@@ -8,7 +8,9 @@
  * @module
  */
 import { runBatch, type BatchLoop, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
+import { readChoice, readOptions } from '../core/read.js';
 import { Status, type StatusCode } from '../core/status.js';
+import { compensateState, HELD } from './if97/compensated-state.js';
 import { SolverContext } from './if97/context.js';
 import { stateFromPH } from './if97/ph.js';
 import { stateFromPS } from './if97/ps.js';
@@ -273,15 +275,37 @@ function withTransport(code: StatusCode, st: WaterTransportState, t: TransportWo
   return code === Status.ok ? addTransport(st, t) : code;
 }
 
-function model(transport?: TransportWork): BatchModel<WaterTransportState, WaterBatchProperty> {
+/** After the IF97 solve's `code`, the compensated kernels at the solved state (every batch pair gives p). */
+function compensatedAfter(code: StatusCode, st: WaterState, ctx: SolverContext): StatusCode {
+  return code === Status.ok ? compensateState(st, HELD.pressure, ctx) : code;
+}
+
+/** The solve of each pair with the compensated kernels after it, and the transport values when wanted. */
+function compensatedInputs(ctx: SolverContext, t: TransportWork | undefined): BatchModel<WaterTransportState, WaterBatchProperty>['inputs'] {
+  if (t === undefined) {
+    return [
+      { keys: ['p', 'T'], solve: (p, T, out) => compensatedAfter(stateFromPT(p, T, out, ctx), out, ctx) },
+      { keys: ['p', 'h'], solve: (p, h, out) => compensatedAfter(stateFromPH(p, h, out, ctx), out, ctx) },
+      { keys: ['p', 's'], solve: (p, s, out) => compensatedAfter(stateFromPS(p, s, out, ctx), out, ctx) },
+    ];
+  }
+  return [
+    { keys: ['p', 'T'], solve: (p, T, out) => withTransport(compensatedAfter(stateFromPT(p, T, out, ctx), out, ctx), out, t) },
+    { keys: ['p', 'h'], solve: (p, h, out) => withTransport(compensatedAfter(stateFromPH(p, h, out, ctx), out, ctx), out, t) },
+    { keys: ['p', 's'], solve: (p, s, out) => withTransport(compensatedAfter(stateFromPS(p, s, out, ctx), out, ctx), out, t) },
+  ];
+}
+
+function model(transport: TransportWork | undefined, compensated: boolean): BatchModel<WaterTransportState, WaterBatchProperty> {
   const ctx = new SolverContext();
   const t = transport;
   const undefinedTransport = (st: WaterTransportState, prop: string): boolean =>
     ((prop === 'mu' || prop === 'nu' || prop === 'Pr') && Number.isNaN(st.mu)) || ((prop === 'lambda' || prop === 'alpha' || prop === 'Pr') && Number.isNaN(st.lambda));
   return {
     name: 'waterBatch',
-    inputs:
-      t === undefined
+    inputs: compensated
+      ? compensatedInputs(ctx, t)
+      : t === undefined
         ? [
             { keys: ['p', 'T'], solve: (p, T, out) => stateFromPT(p, T, out, ctx), loop: loopFor(PAIR_PT, ctx) },
             { keys: ['p', 'h'], solve: (p, h, out) => stateFromPH(p, h, out, ctx), loop: loopFor(PAIR_PH, ctx) },
@@ -319,6 +343,19 @@ function model(transport?: TransportWork): BatchModel<WaterTransportState, Water
   };
 }
 
+/** Options of {@link waterBatch}. */
+export interface WaterBatchOptions {
+  /**
+   * `'fast'` (the default) or `'compensated'`: each element solved as by default, then its properties
+   * evaluated once more by the compensated kernel of its region, as `water.state(pair, { accuracy })`
+   * does (the same values bit for bit). A compensated batch runs element by element through the
+   * generic runner, not the fused loop.
+   */
+  readonly accuracy?: 'fast' | 'compensated';
+}
+
+const ACCURACIES: readonly ('fast' | 'compensated')[] = ['fast', 'compensated'];
+
 /**
  * Water properties for many states at once, by IAPWS-IF97, with the transport properties of IAPWS
  * R12-08 (viscosity) and R15-11 (thermal conductivity) on request. Inputs and outputs are SI typed
@@ -338,9 +375,11 @@ function model(transport?: TransportWork): BatchModel<WaterTransportState, Water
  * @param props the properties wanted, for example `['h', 's', 'rho']` or `['mu', 'lambda', 'Pr']`
  * @param out optional arrays to fill in place (reuse memory between calls), each exactly as long as
  *   the inputs; missing ones are allocated
+ * @param options `{ accuracy: 'compensated' }` for the compensated kernels at each solved state
+ *   (`WaterBatchOptions`; default `'fast'`)
  * @returns one Float64Array per property, and `status` (see {@link WATER_BATCH_STATUS})
  * @throws {@link InvalidInputError} only for a malformed call (unequal lengths, an unknown or extra
- *   input, an unknown property, an `out` array of the wrong length); never for a bad element
+ *   input, an unknown property, an `out` array of the wrong length, a bad option); never for a bad element
  * @example
  * ```ts
  * const p = Float64Array.of(1e6, 1e6, NaN, -5);
@@ -352,11 +391,14 @@ function model(transport?: TransportWork): BatchModel<WaterTransportState, Water
  * t.mu[0];       //=> 890.0e-6 (Pa·s, liquid at 25 °C)
  * t.Pr[1];       //=> 1.034 (steam at 100 °C, 1 atm)
  * t.status;      //=> Uint8Array [0, 0, 1]  (1200 K is above the transport releases' 1173.15 K)
+ * const c = waterBatch({ p: Float64Array.of(3e6), T: Float64Array.of(300) }, ['h'], undefined, { accuracy: 'compensated' });
+ * c.h[0];        //=> 115331.27302143894 (J/kg, compensated; the fast kernel gives 115331.27302143878)
  * ```
  */
-export function waterBatch<P extends WaterBatchProperty>(inputs: WaterBatchInputs, props: readonly P[], out?: BatchOut<P>): WaterBatchResult<P> {
+export function waterBatch<P extends WaterBatchProperty>(inputs: WaterBatchInputs, props: readonly P[], out?: BatchOut<P>, options?: WaterBatchOptions): WaterBatchResult<P> {
+  const compensated = options !== undefined && readChoice(readOptions<WaterBatchOptions>(options, 'options', ['accuracy']).accuracy, 'options.accuracy', ACCURACIES, 'fast') === 'compensated';
   const list: readonly unknown[] = Array.isArray(props) ? props : [];
   const wantMu = list.some((q) => q === 'mu' || q === 'nu' || q === 'Pr');
   const wantLambda = list.some((q) => q === 'lambda' || q === 'alpha' || q === 'Pr');
-  return runBatch(model(wantMu || wantLambda ? new TransportWork(wantMu, wantLambda) : undefined), inputs, props, out);
+  return runBatch(model(wantMu || wantLambda ? new TransportWork(wantMu, wantLambda) : undefined, compensated), inputs, props, out);
 }

@@ -7,14 +7,15 @@
  */
 import { CallUnits } from '../core/call-units.js';
 import { throwForStatus } from '../core/fail.js';
-import { rangeError, readAbsolutePressure, readInput, readPair, readPositiveDensity, readQuality, readTemperature, type Bounds } from '../core/read.js';
+import { rangeError, readAbsolutePressure, readChoice, readInput, readOptions, readPair, readPositiveDensity, readQuality, readTemperature, type Bounds } from '../core/read.js';
 import { optionalQuantity, resultQuantity } from '../core/result.js';
 import { Status } from '../core/status.js';
 import { formatNumber, InvalidInputError } from '../errors.js';
 import { Quantity, type QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, LooseQuantity } from '../core/inputs.js';
 import { P_CRITICAL, P_MAX, P_MAX_5, P_SEARCH_MIN, T_CRITICAL, T_MAX_2, T_MAX_5, T_MIN } from './if97/constants.js';
-import { defaultContext } from './if97/context.js';
+import { compensateState, HELD, type Held } from './if97/compensated-state.js';
+import { defaultContext, type SolverContext } from './if97/context.js';
 import { stateFromHS } from './if97/hs.js';
 import { stateFromPH } from './if97/ph.js';
 import { stateFromPS } from './if97/ps.js';
@@ -150,6 +151,30 @@ export interface WaterInputDimensions {
 /** A pair with its literal unit texts checked against {@link WaterInputDimensions}. */
 export type CheckedWaterPair<P> = P & CheckedInputs<P, WaterInputDimensions>;
 
+/** How the properties of a state are evaluated: see {@link WaterStateOptions}. */
+export type WaterAccuracy = 'fast' | 'compensated';
+
+/** Options of {@link waterState}. */
+export interface WaterStateOptions {
+  /**
+   * `'fast'` (the default): the IF97 kernels in double arithmetic, a few ulp off the exact equations
+   * (up to thousands of ulp in region 3 and near the zeros of u and s). `'compensated'`: the same
+   * solve, then the state's properties evaluated once more with the compensated (double-double)
+   * kernel of its region (two-phase: of both saturated phases, then mixed), within 16 ulp of the exact
+   * equations, for about 1 to 4 µs more per call (docs/guide/accuracy.md).
+   */
+  readonly accuracy?: WaterAccuracy;
+}
+
+const ACCURACIES: readonly WaterAccuracy[] = ['fast', 'compensated'];
+
+/** True when `options` asks for the compensated kernels; checks the options (known keys, a known accuracy). */
+function wantsCompensated(options: unknown): boolean {
+  if (options === undefined) return false;
+  const o = readOptions<WaterStateOptions>(options, 'options', ['accuracy']);
+  return readChoice(o.accuracy, 'options.accuracy', ACCURACIES, 'fast') === 'compensated';
+}
+
 const PHASES: readonly WaterPhase[] = ['liquid', 'vapor', 'two-phase', 'supercritical'];
 const IF97 = 'IAPWS-IF97';
 const PAIRS: readonly (readonly string[])[] = [['T', 'p'], ['p', 'h'], ['p', 's'], ['h', 's'], ['T', 'x'], ['p', 'x'], ['T', 'v'], ['T', 'rho']];
@@ -197,6 +222,24 @@ function toResult(st: WaterState): WaterStateResult {
   return new WaterStateRecord(base, st.T, st.rho, st.p, st.cp, !two);
 }
 
+/**
+ * The result of a solved state `st`; with `compensated`, its properties are first evaluated again by
+ * the compensated kernels (the solve is not repeated).
+ */
+function finish(st: WaterState, compensated: boolean, held: Held, ctx: SolverContext, units: CallUnits): WaterStateResult {
+  if (compensated) {
+    const status = compensateState(st, held, ctx);
+    if (status !== Status.ok) {
+      throwForStatus(status, {
+        what: `the compensated evaluation of the ${IF97} state`,
+        inputs: `p = ${units.describe(st.p, 'pressure', 'Pa')}, T = ${units.describe(st.T, 'temperature', 'K')}`,
+        range: () => rangeError('T', st.T, 'temperature', T_RANGE, units),
+      });
+    }
+  }
+  return toResult(st);
+}
+
 /** Range checks of (p, T) with the limits of the standard, in the caller's units. */
 function checkPT(p: number, T: number, units: CallUnits): void {
   if (T <= T_MAX_2 && p > P_MAX) throw rangeError('p', p, 'pressure', { min: 0, max: P_MAX, scope: `${IF97} (100 MPa for T ≤ 1073.15 K)` }, units);
@@ -237,6 +280,15 @@ function enthalpyRange(): [number, number] {
  * (below the critical pressure) and its superheat (vapour) or subcooling (liquid). Errors name the
  * input and the limit in the caller's units, with SI beside them.
  *
+ * With `{ accuracy: 'compensated' }` the solve is the same, and the state's properties are evaluated
+ * once more with the compensated (double-double) kernel of its region: within 16 ulp of the exact
+ * IF97 equations, where the default (`'fast'`) misses by a few ulp, and by up to thousands in region
+ * 3; about 1 to 4 µs more per call. The solve itself (T of a flash, ρ in region 3, p_s and T_s) and
+ * values combined afterwards (k, superheat, subcooling, transport) are not compensated
+ * (docs/guide/accuracy.md).
+ *
+ * @param pair the two inputs
+ * @param options `{ accuracy: 'fast' | 'compensated' }` (default `'fast'`)
  * @throws {@link OutOfRangeError} outside IF97's range (the message names the limit), x outside [0, 1],
  *   (T, x) or (p, x) above the critical point, pairs with no state in range
  * @throws {@link InvalidInputError} NaN or infinite inputs, an unsupported or over-determined pair
@@ -252,10 +304,15 @@ function enthalpyRange(): [number, number] {
  * water.state({ p: '150 psia', T: '400 °F' }).h.in('Btu/lbm');
  * water.state({ T: '4500 °F', p: '150 psia' });
  * // throws OutOfRangeError: T = 4500 °F (2755.3722 K) is above the upper limit of IAPWS-IF97 region 5 (3632 °F (2273.15 K))
+ * water.state({ p: '3 MPa', T: '300 K' }).h.si;                               //=> 115331.27302143878 (J/kg, fast)
+ * water.state({ p: '3 MPa', T: '300 K' }, { accuracy: 'compensated' }).h.si;  //=> 115331.27302143894 (J/kg, compensated)
+ * water.state({ p: '3 MPa', T: '300 K' }, { accuracy: 'exact' });
+ * // throws InvalidInputError: options.accuracy must be one of "fast", "compensated"; got "exact"
  * ```
  */
-export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>): WaterStateResult {
+export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>, options?: WaterStateOptions): WaterStateResult {
   const key = readPair(pair, 'water.state', PAIRS);
+  const compensated = wantsCompensated(options);
   // readPair has checked which keys are present
   const a = pair as unknown as Record<string, unknown>;
   const units = new CallUnits();
@@ -268,7 +325,7 @@ export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>)
       checkPT(p, T, units);
       const st = stateFromPT(p, T, out, ctx);
       if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} (p, T) state`, inputs: `p = ${units.describe(p, 'pressure', 'Pa')}, T = ${units.describe(T, 'temperature', 'K')}`, range: () => rangeError('p', p, 'pressure', { min: 0, max: P_MAX, scope: IF97 }, units) });
-      return toResult(out);
+      return finish(out, compensated, HELD.pressure, ctx, units);
     }
     case 'p,h':
     case 'p,s': {
@@ -288,7 +345,7 @@ export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>)
           },
         });
       }
-      return toResult(out);
+      return finish(out, compensated, HELD.pressure, ctx, units);
     }
     case 'h,s': {
       const h = readInput(a.h as QuantityLike<'specificEnergy'>, 'specificEnergy', 'h', undefined, units);
@@ -308,21 +365,21 @@ export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>)
           },
         });
       }
-      return toResult(out);
+      return finish(out, compensated, HELD.neither, ctx, units);
     }
     case 'T,x': {
       const T = readTemperature(a.T as QuantityLike<'temperature'>, 'T', T_SATURATION, units);
       const x = readQuality(a.x);
       const st = stateFromTX(T, x, out, ctx);
       if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} saturation`, inputs: `T = ${units.describe(T, 'temperature', 'K')}, x = ${x}`, range: () => rangeError('T', T, 'temperature', T_SATURATION, units) });
-      return toResult(out);
+      return finish(out, compensated, HELD.temperature, ctx, units);
     }
     case 'p,x': {
       const p = readInput(a.p as QuantityLike<'pressure'>, 'pressure', 'p', P_SATURATION, units);
       const x = readQuality(a.x);
       const st = stateFromPX(p, x, out, ctx);
       if (st !== Status.ok) throwForStatus(st, { what: `the ${IF97} saturation`, inputs: `p = ${units.describe(p, 'pressure', 'Pa')}, x = ${x}`, range: () => rangeError('p', p, 'pressure', P_SATURATION, units) });
-      return toResult(out);
+      return finish(out, compensated, HELD.pressure, ctx, units);
     }
     default: {
       // 'T,v' or 'T,rho'
@@ -346,7 +403,7 @@ export function waterState<const P extends WaterPair>(pair: CheckedWaterPair<P>)
           },
         });
       }
-      return toResult(out);
+      return finish(out, compensated, HELD.temperature, ctx, units);
     }
   }
 }
