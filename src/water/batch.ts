@@ -376,7 +376,7 @@ const ACCURACIES: readonly ('fast' | 'compensated')[] = ['fast', 'compensated'];
  * @param out optional arrays to fill in place (reuse memory between calls), each exactly as long as
  *   the inputs; missing ones are allocated
  * @param options `{ accuracy: 'compensated' }` for the compensated kernels at each solved state
- *   (`WaterBatchOptions`; default `'fast'`)
+ *   ({@link WaterBatchOptions}; default `'fast'`)
  * @returns one Float64Array per property, and `status` (see {@link WATER_BATCH_STATUS})
  * @throws {@link InvalidInputError} only for a malformed call (unequal lengths, an unknown or extra
  *   input, an unknown property, an `out` array of the wrong length, a bad option); never for a bad element

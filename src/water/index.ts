@@ -12,9 +12,9 @@
  * @packageDocumentation
  */
 export { water, waterState, waterSaturation, waterDeltaH, waterDeltaU, waterDeltaS, WATER_RANGE } from './state.js';
-export type { WaterStateResult, SaturationResult, SaturatedPhase, WaterPair, WaterPhase } from './state.js';
+export type { WaterStateResult, WaterStateOptions, WaterAccuracy, SaturationResult, SaturatedPhase, WaterPair, WaterPhase } from './state.js';
 export { waterBatch, WATER_BATCH_STATUS } from './batch.js';
-export type { WaterBatchProperty, WaterBatchInputs, WaterBatchResult } from './batch.js';
+export type { WaterBatchProperty, WaterBatchInputs, WaterBatchResult, WaterBatchOptions } from './batch.js';
 export { approximateLiquid, compareLiquidProcess, LIQUID_APPROXIMATIONS } from './approximations.js';
 export type { LiquidApproximation, LiquidStateInput, ApproximateLiquid, Deviation, ProcessEstimate } from './approximations.js';
 export { Status } from '../core/status.js';

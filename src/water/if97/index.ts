@@ -31,6 +31,8 @@ export { region3, region3Pressure, region3Derivatives } from './region3.js';
 export { region5 } from './region5.js';
 // the compensated (double-double) basic equations: within 0.5 ulp of the exact equations, 20-40× the cost (docs/guide/accuracy.md)
 export { region1Compensated, region2Compensated, region3Compensated, region5Compensated } from './compensated.js';
+// a solved state re-evaluated by them in place (what `water.state(pair, { accuracy: 'compensated' })` does after its solve)
+export { compensateState, HELD, type Held } from './compensated-state.js';
 export { saturationPressure, saturationTemperature } from './region4.js';
 export { b23Pressure, b23Temperature } from './b23.js';
 export { region1TemperaturePH, region2TemperaturePH, b2bcEnthalpy, b2bcPressure } from './backward-ph.js';
