@@ -16,7 +16,7 @@ import { FluidState } from '../fluids/model.js';
 import { saturationAtT as fluidSaturationAtT } from '../fluids/saturation.js';
 import type { Quantity, QuantityLike } from '../units/quantity.js';
 import type { CheckedInputs, LooseQuantity } from '../core/inputs.js';
-import type { WaterInputDimensions } from './state.js';
+import type { WaterInputDimensions } from './state-types.js';
 import { T_CRITICAL } from './if97/constants.js';
 import { ConductivityResult, conductivityPressureLimit, CONDUCTIVITY_T_MAX, CONDUCTIVITY_T_MIN, thermalConductivity } from './transport/conductivity.js';
 import { CriticalEnhancementInputs } from './transport/critical.js';

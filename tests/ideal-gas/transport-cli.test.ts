@@ -41,8 +41,8 @@ describe('heatstate gas --transport', () => {
   });
   it('without --transport nothing changes; other commands still refuse it', () => {
     expect('mu' in json('gas', 'N2', 'T=300 K', 'p=1 atm')).toBe(false);
-    const r = cli('liquid', 'copper', 'T1=20degC', 'T2=30degC', '--transport');
+    const r = cli('air', 'T=30degC', 'RH=0.5', '--transport');
     expect(r.code).toBe(2);
-    expect(r.err).toContain('--transport applies to heatstate water, sat and gas');
+    expect(r.err).toContain('--transport applies to heatstate water, sat, gas and liquid');
   });
 });
