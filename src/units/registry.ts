@@ -110,7 +110,8 @@ function compoundFactor(key: string): number | undefined {
   return compoundFactors.get(key);
 }
 
-let suggestionPool: string[] | undefined;
+/** The spellings suggestions are drawn from, with their folded keys (built on the first unknown name). */
+let suggestionPool: { readonly s: string; readonly k: string }[] | undefined;
 
 function foldKey(name: string): string {
   return name.toLowerCase().replace(/μ/g, 'µ').replace(/°|deg|[\s_·*.]/g, '');
@@ -128,6 +129,10 @@ function distance(a: string, b: string, limit: number): number {
       prev[j] = Math.min(up + 1, prev[j - 1]! + 1, diag + (a[i - 1] === b[j - 1] ? 0 : 1));
       diag = up;
     }
+    // every later row is at least this row's minimum: past the limit, stop
+    let least = prev[0]!;
+    for (let j = 1; j <= b.length; j++) if (prev[j]! < least) least = prev[j]!;
+    if (least > limit) return limit + 1;
   }
   return prev[b.length]!;
 }
@@ -139,13 +144,12 @@ function distance(a: string, b: string, limit: number): number {
  */
 export function suggestUnits(name: string): string[] {
   if (name.length === 0 || name.length > 40) return [];
-  suggestionPool ??= [...new Set([...atoms().byName.keys(), ...Object.values(UNIT_SPELLINGS).flat(), ...Object.keys(GAUGE_UNITS)])];
+  suggestionPool ??= [...new Set([...atoms().byName.keys(), ...Object.values(UNIT_SPELLINGS).flat(), ...Object.keys(GAUGE_UNITS)])].map((s) => ({ s, k: foldKey(s) }));
   const key = foldKey(name);
   const limit = key.length <= 3 ? 1 : 2;
   const scored: { s: string; score: number }[] = [];
-  for (const s of suggestionPool) {
+  for (const { s, k } of suggestionPool) {
     if (s === name) continue;
-    const k = foldKey(s);
     const score = k === key ? 0 : distance(key, k, limit);
     if (score <= limit) scored.push({ s, score });
   }
