@@ -2,7 +2,8 @@
  * Generates src/ideal-gas/species.generated.ts: the run-time form of the species data in
  * data/ideal-gas/janaf-fits.json and data/ideal-gas/nasa7.json, with only what the models need
  * (constants in the 9-constant form, intervals, molar mass, a short source line). Keeps notes and
- * file metadata out of users' bundles.
+ * file metadata out of users' bundles. The rows ship as JSON text (`SPECIES_JSON`), parsed on first
+ * use: nothing is built at import.
  *
  * Run: `npm run species`. tests/ideal-gas/data.test.ts fails if the committed module drifts.
  */
@@ -39,9 +40,9 @@ const seven = (c: number[]) => [0, 0, ...c];
 export function renderSpeciesModule(): string {
   const fitted = read<Fitted>('janaf-fits.json');
   const recalled = read<Recalled>('nasa7.json');
-  const rows: string[] = [];
+  const rows: unknown[] = [];
   const row = (id: string, formula: string | undefined, names: string[], T: { min: number; mid: number; max: number }, low: number[], high: number[], M: number, source: number, note: string, table: string, uncertainty: string) =>
-    `  [${JSON.stringify(id)}, ${JSON.stringify(formula ?? '')}, ${JSON.stringify(names)}, ${T.min}, ${T.mid}, ${T.max}, [${low.join(', ')}], [${high.join(', ')}], ${M}, ${source}, ${JSON.stringify(note)}, ${JSON.stringify(table)}, ${JSON.stringify(uncertainty)}],`;
+    [id, formula ?? '', names, T.min, T.mid, T.max, low, high, M, source, note, table, uncertainty];
   for (const s of fitted.species) {
     const e = s.fitError;
     const uncertainty = `fit deviation: largest deviation from JANAF table ${s.janafTable} over ${s.T.min}–${s.T.max} K in cp° ${pct(e.cpRelative)}, S° ${pct(e.sRelative)}, H° − H°(298.15 K) ${pct(e.hMinusH298Relative)} (${e.hMinusH298kJPerMol} kJ/mol)${s.finding ? `; finding: ${s.finding}` : ''}`;
@@ -60,10 +61,12 @@ export function renderSpeciesModule(): string {
     `export const SOURCES: readonly string[] = ${JSON.stringify(['NIST-JANAF Thermochemical Tables (Chase 1998), fitted in the NASA Glenn 9-constant form', `NASA 7-coefficient polynomials (Burcat & Ruscic compilation; McBride, Gordon & Reno, NASA TM-4513), ${recalled.basis}`])};`,
     `export const CITATIONS: readonly { readonly title: string; readonly authors: string; readonly year: number; readonly basis: 'published' | 'from memory' | 'computed' }[] = ${JSON.stringify([citation(fitted.source, fitted.basis, fitted.source.title), citation(recalled.source, recalled.basis, recalled.source.title)])};`,
     '',
-    '/** [id, formula, names, Tmin, Tmid, Tmax, low [a1..a7, b1, b2], high [a1..a7, b1, b2], M (kg/mol), source index, note, table, uncertainty]. */',
-    'export const SPECIES: readonly (readonly [string, string, readonly string[], number, number, number, readonly number[], readonly number[], number, number, string, string, string])[] = [',
-    ...rows,
-    '];',
+    '/**',
+    ' * The species as JSON text, parsed on first use (src/ideal-gas/species.ts): V8 only scans a string',
+    ' * at import, where an array literal of this size is compiled and built on every start.',
+    ' * Each row: [id, formula, names, Tmin, Tmid, Tmax, low [a1..a7, b1, b2], high [a1..a7, b1, b2], M (kg/mol), source index, note, table, uncertainty].',
+    ' */',
+    `export const SPECIES_JSON: string = ${JSON.stringify(JSON.stringify(rows))};`,
     '',
   ].join('\n');
 }

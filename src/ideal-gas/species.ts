@@ -1,5 +1,5 @@
 /**
- * The built-in ideal-gas species, compiled on first use. The run-time data are generated
+ * The built-in ideal-gas species, read (from JSON text) and compiled on first use. The run-time data are generated
  * (scripts/generate-species.ts) from two data files:
  * - data/ideal-gas/janaf-fits.json: every species with a NIST-JANAF table in the repository (N2, O2,
  *   Ar, H2, CO, CO2, H2O, CH4, NH3, He, C2H4, C2H2, NO2, N2O, H2S, O3, OH, H, O, N), fitted to it in
@@ -12,7 +12,7 @@
 import { UnknownNameError } from '../errors.js';
 import { closestNames, normaliseName } from '../lookup.js';
 import { NasaPolynomialModel } from './model.js';
-import { CITATIONS, SOURCES, SPECIES } from './species.generated.js';
+import { CITATIONS, SOURCES, SPECIES_JSON } from './species.generated.js';
 
 /**
  * Where a data set comes from, how it was obtained, and how far to trust it.
@@ -53,28 +53,44 @@ export interface SpeciesRecord {
   readonly note?: string;
 }
 
-const RECORDS: readonly SpeciesRecord[] = SPECIES.map(([id, formula, names, min, mid, max, low, high, M, source, note, table, uncertainty]) => ({
-  id,
-  ...(formula === '' ? {} : { formula }),
-  names,
-  T: { min, mid, max },
-  low,
-  high,
-  M,
-  source: SOURCES[source]!,
-  provenance: { ...CITATIONS[source]!, table, uncertainty },
-  ...(note === '' ? {} : { note }),
-}));
+/** One row of `SPECIES_JSON` (scripts/generate-species.ts). */
+type SpeciesRow = readonly [string, string, readonly string[], number, number, number, readonly number[], readonly number[], number, number, string, string, string];
 
-const byKey = new Map<string, SpeciesRecord>();
-const byFormula = new Map<string, SpeciesRecord>();
-for (const r of RECORDS) {
-  byFormula.set(r.id, r);
-  if (r.formula !== undefined && !byFormula.has(r.formula)) byFormula.set(r.formula, r);
-  // ids that are formulas match by exact case only (CO is carbon monoxide; Co, cobalt, is not a gas
-  // here); ids that are names (air) and the common names match in any case
-  const idIsFormula = r.formula !== undefined && r.formula !== '' && r.id === r.formula;
-  for (const n of idIsFormula ? r.names : [r.id, ...r.names]) byKey.set(normaliseName(n), r);
+/** The records and their lookup maps, built from the JSON text on the first call that needs them. */
+interface SpeciesIndex {
+  readonly records: readonly SpeciesRecord[];
+  readonly byKey: ReadonlyMap<string, SpeciesRecord>;
+  readonly byFormula: ReadonlyMap<string, SpeciesRecord>;
+}
+let index: SpeciesIndex | undefined;
+
+function speciesIndex(): SpeciesIndex {
+  if (index) return index;
+  const rows = JSON.parse(SPECIES_JSON) as readonly SpeciesRow[];
+  const records: readonly SpeciesRecord[] = rows.map(([id, formula, names, min, mid, max, low, high, M, source, note, table, uncertainty]) => ({
+    id,
+    ...(formula === '' ? {} : { formula }),
+    names,
+    T: { min, mid, max },
+    low,
+    high,
+    M,
+    source: SOURCES[source]!,
+    provenance: { ...CITATIONS[source]!, table, uncertainty },
+    ...(note === '' ? {} : { note }),
+  }));
+  const byKey = new Map<string, SpeciesRecord>();
+  const byFormula = new Map<string, SpeciesRecord>();
+  for (const r of records) {
+    byFormula.set(r.id, r);
+    if (r.formula !== undefined && !byFormula.has(r.formula)) byFormula.set(r.formula, r);
+    // ids that are formulas match by exact case only (CO is carbon monoxide; Co, cobalt, is not a gas
+    // here); ids that are names (air) and the common names match in any case
+    const idIsFormula = r.formula !== undefined && r.formula !== '' && r.id === r.formula;
+    for (const n of idIsFormula ? r.names : [r.id, ...r.names]) byKey.set(normaliseName(n), r);
+  }
+  index = { records, byKey, byFormula };
+  return index;
 }
 const compiled = new Map<SpeciesRecord, NasaPolynomialModel>();
 
@@ -86,7 +102,7 @@ const compiled = new Map<SpeciesRecord, NasaPolynomialModel>();
  * ```
  */
 export function speciesRecords(): readonly SpeciesRecord[] {
-  return RECORDS;
+  return speciesIndex().records;
 }
 
 /**
@@ -97,7 +113,7 @@ export function speciesRecords(): readonly SpeciesRecord[] {
  * ```
  */
 export function speciesNames(): string[] {
-  return RECORDS.map((r) => r.id);
+  return speciesIndex().records.map((r) => r.id);
 }
 
 /**
@@ -109,6 +125,7 @@ export function speciesNames(): string[] {
  * ```
  */
 export function findSpecies(nameOrFormula: string): SpeciesRecord | undefined {
+  const { byFormula, byKey } = speciesIndex();
   return byFormula.get(nameOrFormula.trim()) ?? byKey.get(normaliseName(nameOrFormula));
 }
 
@@ -119,7 +136,7 @@ export function findSpecies(nameOrFormula: string): SpeciesRecord | undefined {
 export function speciesModel(nameOrFormula: string): { record: SpeciesRecord; model: NasaPolynomialModel } {
   const record = findSpecies(nameOrFormula);
   if (!record) {
-    const all = RECORDS.flatMap((r) => [r.id, ...r.names]);
+    const all = speciesIndex().records.flatMap((r) => [r.id, ...r.names]);
     throw new UnknownNameError(nameOrFormula, 'ideal-gas species', closestNames(nameOrFormula, all));
   }
   let model = compiled.get(record);
