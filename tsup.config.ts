@@ -1,7 +1,8 @@
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
-import { join, resolve } from 'node:path';
+import { dirname, join, relative, resolve } from 'node:path';
+import type { Plugin } from 'esbuild';
 import { defineConfig, type Options } from 'tsup';
 import type * as TypeScript from 'typescript';
 import { readManifest, tsupEntries } from './scripts/entries.js';
@@ -61,6 +62,42 @@ function emitDeclarations(): Record<string, string> {
   return Object.fromEntries(manifest.entries.map((e) => [e.out, join(dir, e.source.replace(/\.ts$/, '.d.ts'))]));
 }
 
+/**
+ * Data files the build ships as JSON text, each with the one module allowed to import it (paths from
+ * the repository root). That module's default import is then a string, which it parses with
+ * `JSON.parse` on first use (src/incompressible/data-files.ts): V8 only scans a string at import,
+ * where a large object literal is compiled and built on every start. Any other importer stops the
+ * build (it would get text where it expects an object).
+ */
+export const jsonAsText: Readonly<Record<string, string>> = {
+  'data/incompressible.json': 'src/incompressible/data-files.ts',
+  'data/incompressible/brines.json': 'src/incompressible/data-files.ts',
+};
+
+/** The esbuild plugin that applies {@link jsonAsText}: the file's JSON, re-serialised without spaces, as a string export. */
+export function jsonAsTextPlugin(base: string = root): Plugin {
+  const files = new Map(Object.entries(jsonAsText).map(([file, importer]) => [resolve(base, file), resolve(base, importer)]));
+  return {
+    name: 'heatstate-json-as-text',
+    setup(b) {
+      b.onResolve({ filter: /\.json$/ }, (args) => {
+        const path = resolve(args.resolveDir, args.path);
+        const importer = files.get(path);
+        if (importer === undefined) return undefined;
+        if (resolve(args.importer) !== importer) {
+          return { errors: [{ text: `${relative(base, path)} ships as JSON text: import it through ${relative(base, importer)}, not from ${relative(base, args.importer)}` }] };
+        }
+        return { path, namespace: 'heatstate-json-text' };
+      });
+      b.onLoad({ filter: /.*/, namespace: 'heatstate-json-text' }, (args) => ({
+        contents: `export default ${JSON.stringify(JSON.stringify(JSON.parse(readFileSync(args.path, 'utf8'))))};\n`,
+        loader: 'js',
+        resolveDir: dirname(args.path),
+      }));
+    },
+  };
+}
+
 let declarations: Options['dts'] | undefined;
 
 /** What every JavaScript build shares. */
@@ -73,6 +110,7 @@ const common = {
   // bundle the (tree-shaken) validation code instead of loading the zod package at run time:
   // importing the whole package costs over 100 ms of cold start
   noExternal: ['zod'],
+  esbuildPlugins: [jsonAsTextPlugin()],
 } satisfies Options;
 
 /**

@@ -14,7 +14,6 @@
  */
 import { Status } from '../core/status.js';
 import { GridValue } from '../tables/core.js';
-import data from '../../data/incompressible/brines.json';
 import { InvalidInputError, OutOfRangeError } from '../errors.js';
 import { normaliseName } from '../lookup.js';
 import { piecewiseLinear } from '../numeric/interpolate.js';
@@ -22,6 +21,7 @@ import { PropertyGrid } from '../tables/table.js';
 import type { GridData } from '../tables/schema.js';
 import { quantity } from '../units/quantity.js';
 import { compileChecked, type CompiledSubstance } from './compile.js';
+import { brinesData } from './data-files.js';
 import type { IncompressibleDefinition } from './schema.js';
 
 /** The concentration of a solution: one of the two. */
@@ -49,19 +49,20 @@ interface Solution {
   readonly grid: GridData;
 }
 
-const SOLUTIONS = data.solutions as unknown as readonly Solution[];
+/** The solutions of data/incompressible/brines.json, read on first use. */
+const solutions = (): readonly Solution[] => brinesData().solutions as readonly Solution[];
 const grids = new Map<Solution, PropertyGrid<'c' | 'rho', 'massFraction', 'T'>>();
 const compiled = new Map<string, CompiledSubstance>();
 
 /** The names of the built-in solutions. */
 export function solutionNames(): string[] {
-  return SOLUTIONS.map((s) => s.name);
+  return solutions().map((s) => s.name);
 }
 
 /** The raw data of a solution (source, freezing points, grid), or undefined. */
 export function findSolution(name: string): Solution | undefined {
   const key = normaliseName(name);
-  return SOLUTIONS.find((s) => normaliseName(s.name) === key);
+  return solutions().find((s) => normaliseName(s.name) === key);
 }
 
 const fmt = (x: number, digits = 4) => String(Number(x.toPrecision(digits)));

@@ -10,33 +10,45 @@
  *
  * @module
  */
-import catalogue from '../../data/incompressible.json';
 import liquidWater from '../../data/incompressible/water.json';
 import { UnknownNameError } from '../errors.js';
 import { closestNames, normaliseName } from '../lookup.js';
 import { findSolution, solution, solutionNames, type SolutionOptions } from './brines.js';
 import { compileChecked, type CompiledSubstance } from './compile.js';
+import { catalogueData } from './data-files.js';
 import type { IncompressibleDefinition } from './schema.js';
 
-/**
- * The generated liquid water (its generator owns water.json) with its transport properties from the
- * catalogue: IAPWS R12-08 and R15-11 at the IF97 saturated-liquid density.
- */
-const water = { ...liquidWater.substance, viscosity: catalogue.liquidWaterTransport.viscosity, thermalConductivity: catalogue.liquidWaterTransport.thermalConductivity };
-const ENTRIES = [water, ...catalogue.substances] as unknown as readonly IncompressibleDefinition[];
-const byName = new Map<string, IncompressibleDefinition>();
-/** Aliases given by more than one entry: they resolve to none of them. */
-const shared = new Map<string, string[]>();
-for (const entry of ENTRIES) {
-  for (const name of [entry.name, ...(entry.aliases ?? [])]) {
-    const key = normaliseName(name);
-    const other = byName.get(key);
-    if (shared.has(key)) shared.get(key)!.push(entry.name);
-    else if (other !== undefined && other !== entry) {
-      shared.set(key, [other.name, entry.name]);
-      byName.delete(key);
-    } else byName.set(key, entry);
+/** The entries and their names, built on the first call that needs them (nothing is read at import). */
+interface CatalogueIndex {
+  readonly entries: readonly IncompressibleDefinition[];
+  readonly byName: ReadonlyMap<string, IncompressibleDefinition>;
+  /** Aliases given by more than one entry: they resolve to none of them. */
+  readonly shared: ReadonlyMap<string, string[]>;
+}
+let index: CatalogueIndex | undefined;
+
+function catalogueIndex(): CatalogueIndex {
+  if (index) return index;
+  const catalogue = catalogueData();
+  // the generated liquid water (its generator owns water.json) with its transport properties from the
+  // catalogue: IAPWS R12-08 and R15-11 at the IF97 saturated-liquid density
+  const water = { ...liquidWater.substance, viscosity: catalogue.liquidWaterTransport.viscosity, thermalConductivity: catalogue.liquidWaterTransport.thermalConductivity };
+  const entries = [water, ...catalogue.substances] as unknown as readonly IncompressibleDefinition[];
+  const byName = new Map<string, IncompressibleDefinition>();
+  const shared = new Map<string, string[]>();
+  for (const entry of entries) {
+    for (const name of [entry.name, ...(entry.aliases ?? [])]) {
+      const key = normaliseName(name);
+      const other = byName.get(key);
+      if (shared.has(key)) shared.get(key)!.push(entry.name);
+      else if (other !== undefined && other !== entry) {
+        shared.set(key, [other.name, entry.name]);
+        byName.delete(key);
+      } else byName.set(key, entry);
+    }
   }
+  index = { entries, byName, shared };
+  return index;
 }
 const compiled = new Map<IncompressibleDefinition, CompiledSubstance>();
 const compiledSupercooled = new Map<IncompressibleDefinition, CompiledSubstance>();
@@ -56,7 +68,7 @@ export interface CatalogueOptions extends SolutionOptions {
  * ```
  */
 export function incompressibleNames(): string[] {
-  return [...ENTRIES.map((e) => e.name), ...solutionNames()];
+  return [...catalogueIndex().entries.map((e) => e.name), ...solutionNames()];
 }
 
 /**
@@ -67,15 +79,16 @@ export function incompressibleNames(): string[] {
  * ```
  */
 export function incompressibleCatalogue(): readonly IncompressibleDefinition[] {
-  return ENTRIES;
+  return catalogueIndex().entries;
 }
 
 /** The catalogue names a word or a shared alias could mean: every name containing it as a word. */
 function candidates(name: string): string[] {
+  const { entries, shared } = catalogueIndex();
   const key = normaliseName(name);
   const fromAlias = shared.get(key) ?? [];
   const words = name.toLowerCase().trim();
-  const all = [...ENTRIES.map((e) => [e.name, ...(e.aliases ?? [])]), ...solutionNames().map((n) => [n])];
+  const all = [...entries.map((e) => [e.name, ...(e.aliases ?? [])]), ...solutionNames().map((n) => [n])];
   const fromWord = words.length >= 3 ? all.filter((names) => names.some((n) => n.toLowerCase().split(/[\s,()\-]+/).includes(words))).map((names) => names[0]!) : [];
   return [...new Set([...fromAlias, ...fromWord])];
 }
@@ -93,11 +106,11 @@ function candidates(name: string): string[] {
 export function lookupIncompressible(name: string, options: CatalogueOptions = {}): CompiledSubstance {
   const brine = findSolution(name);
   if (brine) return solution(brine, options);
-  const entry = byName.get(normaliseName(name));
+  const entry = catalogueIndex().byName.get(normaliseName(name));
   if (!entry) {
     const meant = candidates(name);
     if (meant.length >= 1) throw new UnknownNameError(name, 'incompressible substance', meant);
-    const all = ENTRIES.flatMap((e) => [e.name, ...(e.aliases ?? [])]);
+    const all = catalogueIndex().entries.flatMap((e) => [e.name, ...(e.aliases ?? [])]);
     throw new UnknownNameError(name, 'incompressible substance', closestNames(name, all));
   }
   const cache = options.supercooled === true ? compiledSupercooled : compiled;
