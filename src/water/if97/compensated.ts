@@ -123,15 +123,23 @@ function reduced(w: Float64Array, p: number, pStar: number, T: number, tStarSlot
   ddDiv(w, G.tau, tStarSlot, G.a);
 }
 
-const terms1 = /* @__PURE__ */ new CompensatedTerms(r1.I, r1.J, r1.n);
-const w1 = /* @__PURE__ */ (() => {
+/** A region's compensated terms and its double-double workspace with the constants set. */
+interface Kit {
+  readonly terms: CompensatedTerms;
+  readonly ideal?: CompensatedTerms;
+  readonly w: Float64Array;
+}
+
+// each region's kit is built on its first call (no work at import)
+let kit1: Kit | undefined;
+function region1Kit(): Kit {
   const w = new Float64Array(2 * G.size);
   // R7-97 Eq. 7: γ = Σ nᵢ (7.1 − π)^Iᵢ (τ − 1.222)^Jᵢ; T* = 1386 K
   ddFromDecimal(w, G.k1, '7.1');
   ddFromDecimal(w, G.k2, '1.222');
   ddSet(w, G.tStar, r1.TStar, 0);
-  return w;
-})();
+  return (kit1 = { terms: new CompensatedTerms(r1.I, r1.J, r1.n), w });
+}
 
 /**
  * Region 1 (compressed liquid, R7-97 Eq. 7) in double-double: fills `out` at (p [Pa], T [K]) with every
@@ -143,11 +151,11 @@ const w1 = /* @__PURE__ */ (() => {
  * ```
  */
 export function region1Compensated(p: number, T: number, out: WaterProperties): WaterProperties {
-  const w = w1;
+  const { w, terms } = kit1 ?? region1Kit();
   reduced(w, p, r1.pStar, T, G.tStar);
   ddSub(w, G.x, G.k1, G.pi);
   ddSub(w, G.y, G.tau, G.k2);
-  weightedSums(terms1, w, G.x, G.y, G.sums);
+  weightedSums(terms, w, G.x, G.y, G.sums);
   ddCopy(w, G.gamma, G.sums);
   // γπ = −S_x, γππ = S_xx, γτ = S_y, γττ = S_yy, γπτ = −S_xy (x = 7.1 − π, y = τ − 1.222)
   ddDiv(w, G.gPi, G.sums + 1, G.x);
@@ -197,15 +205,14 @@ function idealResidual(w: Float64Array, ideal: CompensatedTerms, residual: Compe
   ddDiv(w, G.gPiTau, G.sums + 5, G.b);
 }
 
-const ideal2 = /* @__PURE__ */ new CompensatedTerms(r2.J0.map(() => 0), r2.J0, r2.n0);
-const terms2 = /* @__PURE__ */ new CompensatedTerms(r2.I, r2.J, r2.n);
-const w2 = /* @__PURE__ */ (() => {
+let kit2: Kit | undefined;
+function region2Kit(): Kit {
   const w = new Float64Array(2 * G.size);
   // R7-97 Eqs. 16-17: π = p/1 MPa, τ = 540 K/T, residual in (τ − 0.5)
   ddSet(w, G.tStar, r2.TStar, 0);
   ddFromDecimal(w, G.k2, '0.5');
-  return w;
-})();
+  return (kit2 = { ideal: new CompensatedTerms(r2.J0.map(() => 0), r2.J0, r2.n0), terms: new CompensatedTerms(r2.I, r2.J, r2.n), w });
+}
 
 /**
  * Region 2 (vapour, R7-97 Eqs. 15-17) in double-double: fills `out` at (p [Pa], T [K]).
@@ -215,21 +222,20 @@ const w2 = /* @__PURE__ */ (() => {
  * ```
  */
 export function region2Compensated(p: number, T: number, out: WaterProperties): WaterProperties {
-  const w = w2;
+  const { w, ideal, terms } = kit2 ?? region2Kit();
   reduced(w, p, r2.pStar, T, G.tStar);
   ddSub(w, G.y, G.tau, G.k2);
-  idealResidual(w, ideal2, terms2);
+  idealResidual(w, ideal!, terms);
   return gibbsProperties(w, p, T, out);
 }
 
-const ideal5 = /* @__PURE__ */ new CompensatedTerms(r5.J0.map(() => 0), r5.J0, r5.n0);
-const terms5 = /* @__PURE__ */ new CompensatedTerms(r5.I, r5.J, r5.n);
-const w5 = /* @__PURE__ */ (() => {
+let kit5: Kit | undefined;
+function region5Kit(): Kit {
   const w = new Float64Array(2 * G.size);
   // R7-97 Eqs. 32-34: π = p/1 MPa, τ = 1000 K/T, residual in τ
   ddSet(w, G.tStar, r5.TStar, 0);
-  return w;
-})();
+  return (kit5 = { ideal: new CompensatedTerms(r5.J0.map(() => 0), r5.J0, r5.n0), terms: new CompensatedTerms(r5.I, r5.J, r5.n), w });
+}
 
 /**
  * Region 5 (high-temperature steam, R7-97 Eqs. 32-34) in double-double: fills `out` at (p [Pa], T [K]).
@@ -239,10 +245,10 @@ const w5 = /* @__PURE__ */ (() => {
  * ```
  */
 export function region5Compensated(p: number, T: number, out: WaterProperties): WaterProperties {
-  const w = w5;
+  const { w, ideal, terms } = kit5 ?? region5Kit();
   reduced(w, p, r5.pStar, T, G.tStar);
   ddCopy(w, G.y, G.tau);
-  idealResidual(w, ideal5, terms5);
+  idealResidual(w, ideal!, terms);
   return gibbsProperties(w, p, T, out);
 }
 
@@ -272,15 +278,15 @@ const enum H {
   size = sums + 6,
 }
 
-const terms3 = /* @__PURE__ */ new CompensatedTerms(r3.I, r3.J, r3.n);
-const w3 = /* @__PURE__ */ (() => {
+let kit3: Kit | undefined;
+function region3Kit(): Kit {
   const w = new Float64Array(2 * H.size);
   // R7-97 Eq. 28: φ = n₁ ln δ + Σ nᵢ δ^Iᵢ τ^Jᵢ, δ = ρ/322 kg/m³, τ = 647.096 K/T (the decimal value)
   ddFromDecimal(w, H.tStar, String(r3.TStar));
   ddSet(w, H.rhoStar, r3.rhoStar, 0);
   ddSet(w, H.n1, r3.n1, 0);
-  return w;
-})();
+  return (kit3 = { terms: new CompensatedTerms(r3.I, r3.J, r3.n), w });
+}
 
 /**
  * Region 3 (near-critical, R7-97 Eq. 28) in double-double: fills `out` at (ρ [kg/m³], T [K]) with every
@@ -291,12 +297,12 @@ const w3 = /* @__PURE__ */ (() => {
  * ```
  */
 export function region3Compensated(rho: number, T: number, out: WaterProperties): WaterProperties {
-  const w = w3;
+  const { w, terms } = kit3 ?? region3Kit();
   ddSet(w, H.a, rho, 0);
   ddDiv(w, H.delta, H.a, H.rhoStar);
   ddSet(w, H.a, T, 0);
   ddDiv(w, H.tau, H.tStar, H.a);
-  weightedSums(terms3, w, H.delta, H.tau, H.sums);
+  weightedSums(terms, w, H.delta, H.tau, H.sums);
   // φ = n₁ ln δ + S, δφδ = n₁ + ΣI t, δ²φδδ = −n₁ + ΣI(I−1) t; the τ sums directly
   ddLog(w, H.phi, H.delta);
   ddMul(w, H.phi, H.phi, H.n1);

@@ -168,7 +168,7 @@ export function ddFromDecimal(w: Float64Array, d: number, text: string): void {
 
 /**
  * ln c for c > 0 by the series ln c = 2 Σ z^(2i+1)/(2i+1), z = (c − 1)/(c + 1), in double-double with
- * `terms` terms (Horner): slow, used once at load for the constants of {@link ddLog}. Writes slot d of w
+ * `terms` terms (Horner): slow, used once, on the first {@link ddLog}, for its table. Writes slot d of w
  * and uses slots d + 1 … d + 3 as scratch.
  */
 function logSeries(w: Float64Array, d: number, c: number, terms: number): void {
@@ -193,15 +193,17 @@ function logSeries(w: Float64Array, d: number, c: number, terms: number): void {
 
 /** ln c_j for c_j = 1 + j/64 (j = 0 … 64, the last being ln 2), as double-double pairs: the table of {@link ddLog}. */
 const LOG_TABLE_SIZE = 64;
-const LOG_TABLE = /* @__PURE__ */ (() => {
+/** Built on the first {@link ddLog} (about 7 ms of a cold start if it were built at import). */
+let LOG_TABLE: Float64Array | undefined;
+function logTable(): Float64Array {
   const w = new Float64Array(2 * (LOG_TABLE_SIZE + 6));
   // |z| ≤ 1/3 for c in [1, 2]: 3^−77 < 2^−120, so 38 terms leave no error above the double-double rounding
   for (let j = 0; j <= LOG_TABLE_SIZE; j++) {
     logSeries(w, LOG_TABLE_SIZE + 1, 1 + j / LOG_TABLE_SIZE, 38);
     ddCopy(w, j, LOG_TABLE_SIZE + 1);
   }
-  return w.subarray(0, 2 * (LOG_TABLE_SIZE + 1));
-})();
+  return (LOG_TABLE = w.subarray(0, 2 * (LOG_TABLE_SIZE + 1)));
+}
 /** Scratch of ddLog. */
 const logW = /* @__PURE__ */ new Float64Array(8);
 
@@ -246,11 +248,12 @@ export function ddLog(w: Float64Array, d: number, a: number): void {
   ddSet(logW, 1, tail, 0);
   ddAdd(logW, 0, 0, 1);
   // + ln c_j + k ln 2
-  logW[6] = LOG_TABLE[2 * j]!;
-  logW[7] = LOG_TABLE[2 * j + 1]!;
+  const table = LOG_TABLE ?? logTable();
+  logW[6] = table[2 * j]!;
+  logW[7] = table[2 * j + 1]!;
   ddAdd(logW, 0, 0, 3);
-  logW[2] = LOG_TABLE[2 * LOG_TABLE_SIZE]!;
-  logW[3] = LOG_TABLE[2 * LOG_TABLE_SIZE + 1]!;
+  logW[2] = table[2 * LOG_TABLE_SIZE]!;
+  logW[3] = table[2 * LOG_TABLE_SIZE + 1]!;
   ddMulNumber(logW, 1, 1, k);
   ddAdd(logW, 0, 0, 1);
   w[2 * d] = logW[0]!;
