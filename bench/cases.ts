@@ -17,7 +17,7 @@ import { idealGasBatch } from '../src/ideal-gas/index.js';
 import { waterTables } from '../src/tables/water.js';
 import { GridValue, TableValue } from '../src/tables/index.js';
 
-import { consume, type BenchCase } from './kit.js';
+import { BATCH_STATES, consume, type BenchCase } from './kit.js';
 
 export { consume, sinkValue, type BenchCase } from './kit.js';
 
@@ -99,7 +99,7 @@ const tableKeys = Float64Array.from({ length: N }, (_, i) => 280 + ((i * 7919) %
 const gridT = Float64Array.from({ length: N }, (_, i) => 700 + ((i * 7919) % 5000) / 10);
 const gridP = Float64Array.from({ length: N }, (_, i) => 1e5 + ((i * 104729) % 9000) * 1e3);
 
-const BATCH = 1_000_000;
+const BATCH = BATCH_STATES;
 const batchP = new Float64Array(BATCH);
 const batchT = new Float64Array(BATCH);
 for (let i = 0; i < BATCH; i++) {

@@ -11,6 +11,12 @@ export interface BenchCase {
   baselinePerCall?: number;
 }
 
+/**
+ * States per call of the batch cases: a million for figures; a few thousand in smoke mode
+ * (tests/bench.test.ts), which only proves that every case runs. Figures are per state either way.
+ */
+export const BATCH_STATES = process.argv.includes('--smoke') ? 2_000 : 1_000_000;
+
 let sink = 0;
 /** Keeps results alive so the optimiser cannot drop the work. */
 export function consume(x: number): void {

@@ -4,13 +4,13 @@
  * single call; (p, T) in region 3 ≤ 1 µs; region 3 (p, h), (p, s) ≤ 3 µs; (h, s) ≤ 1.5 µs everywhere.
  * The comparison with the C build of region 1 is printed by bench/run.ts (bench/c/region1.c).
  */
-import { consume, type BenchCase } from '../kit.js';
+import { BATCH_STATES, consume, type BenchCase } from '../kit.js';
 import { region1BenchInputs } from '../../scripts/generate-c-reference.js';
 import { b23Pressure, stateFromHS, stateFromPH, stateFromPS, stateFromPT, stateFromPX, WaterState } from '../../src/water/if97/index.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { waterBatch } from '../../src/water/index.js';
 
-const BN = 1_000_000;
+const BN = BATCH_STATES;
 const r1 = region1BenchInputs(BN);
 const cols = () => ({ v: new Float64Array(BN), h: new Float64Array(BN), u: new Float64Array(BN), s: new Float64Array(BN), cp: new Float64Array(BN), w: new Float64Array(BN), status: new Uint8Array(BN) });
 const batchOut = cols();
