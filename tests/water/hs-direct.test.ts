@@ -11,7 +11,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Status } from '../../src/core/status.js';
 import { b23Pressure } from '../../src/water/if97/b23.js';
-import { T_CRITICAL } from '../../src/water/if97/constants.js';
+import { P_CRITICAL, T_CRITICAL } from '../../src/water/if97/constants.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { generalPathHS, HS_PATH, pathHS } from '../../src/water/if97/hs.js';
 import { T_MARGIN_13, T_MARGIN_B23 } from '../../src/water/if97/hs-region12.js';
@@ -81,17 +81,30 @@ describe('(h, s) flash, direct paths', () => {
     );
   });
 
-  it('region 3 (above B23 up to 99.9 MPa, 623.16 K … 850 K, 1 % of the span clear of B23, clear of T_c by 2 mK): Newton in (ρ, T)', () => {
+  it('region 3 (above B23 up to 99.9 MPa, 623.16 K … 850 K, 1 % of the span clear of B23, clear of T_c by 2 mK and of p_c by 2e-4 p_c: region3HS hands over to the general path within 1 mK and 1e-4 p_c): Newton in (ρ, T)', () => {
     fc.assert(
       fc.property(fc.double({ min: 623.16, max: 850, noNaN: true }), fc.double({ min: 0.01, max: 1, noNaN: true }), (T, f) => {
         fc.pre(Math.abs(T - T_CRITICAL) > 2e-3);
         const pB = Math.max(b23Pressure(T), T < T_CRITICAL ? saturationPressure(T) : 0);
         const p = pB + f * (99.9e6 - pB);
+        // a random state at p = 22.0618 MPa, T = 641.92 K came back by the general path, as region3HS
+        // is written to do within 1e-4 p_c of the critical pressure
+        fc.pre(Math.abs(p - P_CRITICAL) > 2e-4 * P_CRITICAL);
         fc.pre(stateFromPT(p, T, src) === Status.ok && src.region === 3);
         expectDirect(HS_PATH.region3, `p = ${p}, T = ${T}`);
       }),
       { numRuns: 500 },
     );
+  });
+
+  it('region 3 within 1e-4 p_c of the critical pressure: the general path, and the state comes back', () => {
+    // the random state that found the handover (p = 22.0618 MPa, T = 641.92 K)
+    expect(stateFromPT(22061793.599998966, 641.9191662661196, src)).toBe(Status.ok);
+    expect(src.region).toBe(3);
+    expect(pathHS(src.h, src.s, out, ctx, status)).toBe(HS_PATH.flashNewton);
+    expect(Math.abs(out.p / src.p - 1)).toBeLessThanOrEqual(1e-9);
+    expect(Math.abs(out.T / src.T - 1)).toBeLessThanOrEqual(1e-9);
+    expect(out.phase).toBe(src.phase);
   });
 
   it('two-phase (611.7 Pa … 16.4 MPa, x = 0.001 … 0.999): Newton in T on the saturation line', () => {

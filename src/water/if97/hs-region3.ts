@@ -25,8 +25,9 @@ import { PHASE, type WaterState } from './water-state.js';
 
 /**
  * The region 3 state with enthalpy h (J/kg) and entropy s (J/(kg·K)), from a starting pressure p0 (Pa).
- * @returns `Status.ok` with `out` filled; `Status.noConvergence` when the steps do not settle or the
- *   answer is not a stable single-phase region 3 state (the caller then decides)
+ * @returns `Status.ok` with `out` filled; `Status.noConvergence` when the steps do not settle, the
+ *   answer is not a stable single-phase region 3 state, or it lies within 1 mK of T_c or 1e-4 p_c
+ *   of p_c, where the general path labels the phase (the caller then decides)
  */
 export function region3HS(h: number, s: number, p0: number, out: WaterState, ctx: SolverContext): StatusCode {
   // a start a little above 100 MPa (the backward equations' error near the range's top) is held at it
