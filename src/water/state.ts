@@ -148,8 +148,9 @@ function enthalpyRange(): [number, number] {
  *
  * With `{ accuracy: 'compensated' }` the solve is the same, and the state's properties are evaluated
  * once more with the compensated (double-double) kernel of its region: within 16 ulp of the exact
- * IF97 equations, where the default (`'fast'`) misses by a few ulp, and by up to thousands in region
- * 3; about 1 to 4 µs more per call. The solve itself (T of a flash, ρ in region 3, p_s and T_s) and
+ * IF97 equations, where the default (`'fast'`) misses by a few ulp typically, by thousands at the
+ * 99th percentile in region 3 and by up to about 8e5 ulp (cp near the critical point); about 1 to 4 µs
+ * more per call. The solve itself (T of a flash, ρ in region 3, p_s and T_s) and
  * values combined afterwards (k, superheat, subcooling, transport) are not compensated
  * (docs/guide/accuracy.md).
  *
