@@ -137,8 +137,9 @@ export interface WaterStateOptions {
   /**
    * `'fast'` (the default): the IF97 kernels in double arithmetic, a few ulp off the exact equations
    * typically (thousands at the 99th percentile in region 3, up to about 8e5 ulp for cp near the
-   * critical point, tens of thousands near the zeros of u and s). `'compensated'`: the same solve, then the state's properties evaluated once more with the compensated (double-double)
-   * kernel of its region (two-phase: of both saturated phases, then mixed), within 16 ulp of the exact
+   * critical point, tens of thousands near the zeros of u and s). `'compensated'`: the same solve,
+   * then the state's properties evaluated once more with the compensated (double-double) kernel of
+   * its region (two-phase: of both saturated phases, then mixed), within 16 ulp of the exact
    * equations, for about 1 to 4 µs more per call (docs/guide/accuracy.md).
    */
   readonly accuracy?: WaterAccuracy;
