@@ -8,8 +8,8 @@
  * @module
  */
 import { runBatch, type BatchLoop, type BatchModel, type BatchOut, type BatchResult } from '../core/batch.js';
-import { readChoice, readOptions } from '../core/read.js';
 import { Status, type StatusCode } from '../core/status.js';
+import { wantsCompensated } from './accuracy.js';
 import { compensateState, HELD } from './if97/compensated-state.js';
 import { SolverContext } from './if97/context.js';
 import { stateFromPH } from './if97/ph.js';
@@ -20,6 +20,7 @@ import { ConductivityResult, conductivityPressureLimit, thermalConductivity } fr
 import { CriticalEnhancementInputs } from './transport/critical.js';
 import { iapws95EnhancementInputs, Iapws95InputsWork } from './transport/iapws95-inputs.js';
 import { viscosity, viscosityPressureLimit, ViscosityResult, VISCOSITY_T_MAX, VISCOSITY_T_MIN } from './transport/viscosity.js';
+import type { WaterAccuracy } from './state-types.js';
 
 /**
  * Properties a water batch can return, in SI (K, Pa, m³/kg, kg/m³, J/kg, J/(kg·K), m/s, Pa·s, W/(m·K),
@@ -351,10 +352,8 @@ export interface WaterBatchOptions {
    * does (the same values bit for bit). A compensated batch runs element by element through the
    * generic runner, not the fused loop.
    */
-  readonly accuracy?: 'fast' | 'compensated';
+  readonly accuracy?: WaterAccuracy;
 }
-
-const ACCURACIES: readonly ('fast' | 'compensated')[] = ['fast', 'compensated'];
 
 /**
  * Water properties for many states at once, by IAPWS-IF97, with the transport properties of IAPWS
@@ -392,11 +391,11 @@ const ACCURACIES: readonly ('fast' | 'compensated')[] = ['fast', 'compensated'];
  * t.Pr[1];       //=> 1.034 (steam at 100 °C, 1 atm)
  * t.status;      //=> Uint8Array [0, 0, 1]  (1200 K is above the transport releases' 1173.15 K)
  * const c = waterBatch({ p: Float64Array.of(3e6), T: Float64Array.of(300) }, ['h'], undefined, { accuracy: 'compensated' });
- * c.h[0];        //=> 115331.27302143894 (J/kg, compensated; the fast kernel gives 115331.27302143878)
+ * c.h[0];        //=> 115331.27302143894 (J/kg, compensated; the fast kernel gives 115331.27302143878; R7-97 Table 5 prints 0.115331273e3 kJ/kg)
  * ```
  */
 export function waterBatch<P extends WaterBatchProperty>(inputs: WaterBatchInputs, props: readonly P[], out?: BatchOut<P>, options?: WaterBatchOptions): WaterBatchResult<P> {
-  const compensated = options !== undefined && readChoice(readOptions<WaterBatchOptions>(options, 'options', ['accuracy']).accuracy, 'options.accuracy', ACCURACIES, 'fast') === 'compensated';
+  const compensated = wantsCompensated(options);
   const list: readonly unknown[] = Array.isArray(props) ? props : [];
   const wantMu = list.some((q) => q === 'mu' || q === 'nu' || q === 'Pr');
   const wantLambda = list.some((q) => q === 'lambda' || q === 'alpha' || q === 'Pr');

@@ -6,10 +6,7 @@
  *
  * @module
  */
-import { ddDiv, ddSet } from './double-double.js';
-
-/** Veltkamp's splitting constant 2²⁷ + 1. */
-const SPLIT = 134217729;
+import { ddDiv, ddProduct, ddSet, SPLIT } from './double-double.js';
 
 /**
  * A plan that builds every exponent in `needed` from x¹ (and x⁻¹ when a negative exponent is needed):
@@ -115,23 +112,8 @@ function fillPowers(table: Float64Array, plan: Int32Array, min: number, inverse:
   for (let k = 0; k < plan.length; k += 3) {
     const a = 2 * (plan[k + 1]! - min);
     const b = 2 * (plan[k + 2]! - min);
-    mulInto(table, 2 * (plan[k]! - min), table[a]!, table[a + 1]!, table[b]!, table[b + 1]!);
+    ddProduct(table, 2 * (plan[k]! - min), table[a]!, table[a + 1]!, table[b]!, table[b + 1]!);
   }
-}
-
-/** table[idx], table[idx + 1] = (ah + al)(bh + bl), double-double. */
-function mulInto(table: Float64Array, idx: number, ah: number, al: number, bh: number, bl: number): void {
-  let t = SPLIT * ah;
-  const a1 = t - (t - ah);
-  const a2 = ah - a1;
-  t = SPLIT * bh;
-  const b1 = t - (t - bh);
-  const b2 = bh - b1;
-  const ph = ah * bh;
-  const pl = a1 * b1 - ph + a1 * b2 + a2 * b1 + a2 * b2 + (ah * bl + al * bh);
-  const zh = ph + pl;
-  table[idx] = zh;
-  table[idx + 1] = pl - (zh - ph);
 }
 
 /**

@@ -127,8 +127,12 @@ function reduced(w: Float64Array, p: number, pStar: number, T: number, tStarSlot
 /** A region's compensated terms and its double-double workspace with the constants set. */
 interface Kit {
   readonly terms: CompensatedTerms;
-  readonly ideal?: CompensatedTerms;
   readonly w: Float64Array;
+}
+
+/** A region 2 or 5 kit: the residual terms and the ideal-gas part's terms. */
+interface IdealKit extends Kit {
+  readonly ideal: CompensatedTerms;
 }
 
 // each region's kit is built on its first call (no work at import)
@@ -206,8 +210,8 @@ function idealResidual(w: Float64Array, ideal: CompensatedTerms, residual: Compe
   ddDiv(w, G.gPiTau, G.sums + 5, G.b);
 }
 
-let kit2: Kit | undefined;
-function region2Kit(): Kit {
+let kit2: IdealKit | undefined;
+function region2Kit(): IdealKit {
   const w = new Float64Array(2 * G.size);
   // R7-97 Eqs. 16-17: π = p/1 MPa, τ = 540 K/T, residual in (τ − 0.5)
   ddSet(w, G.tStar, r2.TStar, 0);
@@ -226,12 +230,12 @@ export function region2Compensated(p: number, T: number, out: WaterProperties): 
   const { w, ideal, terms } = kit2 ?? region2Kit();
   reduced(w, p, r2.pStar, T, G.tStar);
   ddSub(w, G.y, G.tau, G.k2);
-  idealResidual(w, ideal!, terms);
+  idealResidual(w, ideal, terms);
   return gibbsProperties(w, p, T, out);
 }
 
-let kit5: Kit | undefined;
-function region5Kit(): Kit {
+let kit5: IdealKit | undefined;
+function region5Kit(): IdealKit {
   const w = new Float64Array(2 * G.size);
   // R7-97 Eqs. 32-34: π = p/1 MPa, τ = 1000 K/T, residual in τ
   ddSet(w, G.tStar, r5.TStar, 0);
@@ -249,7 +253,7 @@ export function region5Compensated(p: number, T: number, out: WaterProperties): 
   const { w, ideal, terms } = kit5 ?? region5Kit();
   reduced(w, p, r5.pStar, T, G.tStar);
   ddCopy(w, G.y, G.tau);
-  idealResidual(w, ideal!, terms);
+  idealResidual(w, ideal, terms);
   return gibbsProperties(w, p, T, out);
 }
 

@@ -17,7 +17,7 @@
  */
 
 /** Veltkamp's splitting constant 2²⁷ + 1: splits a double into two halves of 26 bits. */
-const SPLIT = 134217729;
+export const SPLIT = 134217729;
 
 /** Sets slot d to hi + lo (hi + lo must already be normalised: |lo| ≤ ulp(hi)/2, or lo = 0). */
 export function ddSet(w: Float64Array, d: number, hi: number, lo: number): void {
@@ -66,10 +66,11 @@ function addParts(w: Float64Array, d: number, ah: number, al: number, bh: number
 
 /** Slot d = slot a × slot b (TwoProduct of the high parts by Veltkamp splitting, plus the cross terms). */
 export function ddMul(w: Float64Array, d: number, a: number, b: number): void {
-  const ah = w[2 * a]!;
-  const al = w[2 * a + 1]!;
-  const bh = w[2 * b]!;
-  const bl = w[2 * b + 1]!;
+  ddProduct(w, 2 * d, w[2 * a]!, w[2 * a + 1]!, w[2 * b]!, w[2 * b + 1]!);
+}
+
+/** out[i], out[i + 1] = (ah + al)(bh + bl), the product of {@link ddMul} for pairs held anywhere. */
+export function ddProduct(out: Float64Array, i: number, ah: number, al: number, bh: number, bl: number): void {
   let t = SPLIT * ah;
   const a1 = t - (t - ah);
   const a2 = ah - a1;
@@ -79,8 +80,8 @@ export function ddMul(w: Float64Array, d: number, a: number, b: number): void {
   const ph = ah * bh;
   const pl = a1 * b1 - ph + a1 * b2 + a2 * b1 + a2 * b2 + (ah * bl + al * bh);
   const zh = ph + pl;
-  w[2 * d] = zh;
-  w[2 * d + 1] = pl - (zh - ph);
+  out[i] = zh;
+  out[i + 1] = pl - (zh - ph);
 }
 
 /** Slot d = slot a × b for a double b (DWTimesFP1). */
