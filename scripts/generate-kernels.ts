@@ -115,6 +115,28 @@ export function sumsFunction(fn: string, doc: string, t: Terms): string {
   return lines.join('\n');
 }
 
+/**
+ * A function returning Sy alone (out[3] of {@link sumsFunction}): the same power chains, term products
+ * and operation order, so its value is bit for bit that of the full kernel. For callers that need
+ * one derivative (the enthalpy, h = RTτγ_τ) and would otherwise ship all six sums.
+ */
+function tauSumFunction(fn: string, doc: string, t: Terms): string {
+  const lines: string[] = [];
+  lines.push(`/** ${doc} */`);
+  lines.push(`export function ${fn}(x: number, y: number): number {`);
+  if (t.I.some((i) => i < 0)) lines.push('  const ix = 1 / x;');
+  lines.push('  const iy = 1 / y;');
+  for (const l of powerChain('x', t.I)) lines.push(`  ${l}`);
+  for (const l of powerChain('y', t.J)) lines.push(`  ${l}`);
+  const terms = t.n.map((_, i) => `t${i}`);
+  t.n.forEach((n, i) => {
+    if (n * t.J[i]! !== 0) lines.push(`  const t${i} = ${product(t.I[i]!, t.J[i]!)};`);
+  });
+  lines.push(`  return (\n    ${sum(t.n.map((n, i) => n * t.J[i]!), terms)}\n  ) * iy;`);
+  lines.push('}');
+  return lines.join('\n');
+}
+
 /** A function filling out[0..2] with G = Σ n τᴶ, Gτ and Gττ (the ideal-gas parts of regions 2 and 5). */
 function idealFunction(fn: string, doc: string, J: number[], n: number[]): string {
   const lines: string[] = [];
@@ -169,9 +191,13 @@ export function renderKernels(): string {
     '',
     sumsFunction('region1Sums', 'Region 1 (Table 2): x = 7.1 − π, y = τ − 1.222.', r1),
     '',
+    tauSumFunction('region1TauSum', 'Region 1: γ_τ alone (out[3] of region1Sums, bit for bit).', r1),
+    '',
     idealFunction('region2IdealSums', 'Region 2 ideal-gas part (Table 10) without ln π: y = τ.', r2.J0, r2.n0),
     '',
     sumsFunction('region2ResidualSums', 'Region 2 residual part (Table 11): x = π, y = τ − 0.5.', r2),
+    '',
+    tauSumFunction('region2ResidualTauSum', 'Region 2 residual part: γʳ_τ alone (out[3] of region2ResidualSums, bit for bit).', r2),
     '',
     sumsFunction('region2MetastableSums', 'Metastable-vapour residual part (Table 16): x = π, y = τ − 0.5.', r2.metastable),
     '',

@@ -99,11 +99,30 @@ const valueCases: [string, Terms, Range, Range][] = [
   ['sr4Tsaths', sr4.Tsaths, [0.595, 0.881], [-0.505, -0.07]], // h 2000–2800 kJ/kg, s 5.2–9.2 kJ/(kg·K)
 ];
 
+/** Kernels of one derivative alone: bit for bit the matching output of a full kernel checked above. */
+const tauSumCases: [string, string, Range, Range][] = [
+  ['region1TauSum', 'region1Sums', [1.05, 7.1], [1.0, 3.9]],
+  ['region2ResidualTauSum', 'region2ResidualSums', [1e-4, 100], [0.01, 1.5]],
+];
+
 describe('IF97 kernels (src/water/if97/kernels.generated.ts) against a plain loop', () => {
   it('every exported kernel has a case here', () => {
-    const covered = new Set([...sumsCases, ...idealCases, ...valueCases].map((c) => c[0]));
+    const covered = new Set([...sumsCases, ...idealCases, ...valueCases, ...tauSumCases].map((c) => c[0]));
     expect(Object.keys(K).filter((k) => !covered.has(k))).toEqual([]);
     expect([...covered].filter((k) => !(k in K))).toEqual([]);
+  });
+
+  it.each(tauSumCases)('%s: Sy alone, bit for bit out[3] of %s', (name, full, xr, yr) => {
+    const one = (K as unknown as Record<string, (x: number, y: number) => number>)[name]!;
+    const all = (K as unknown as Record<string, (x: number, y: number, o: Float64Array) => void>)[full]!;
+    const o = new Float64Array(6);
+    fc.assert(
+      fc.property(fc.double({ min: xr[0], max: xr[1], noNaN: true }), fc.double({ min: yr[0], max: yr[1], noNaN: true }), (x, y) => {
+        all(x, y, o);
+        expect(one(x, y)).toBe(o[3]);
+      }),
+      { numRuns: 200 },
+    );
   });
 
   it.each(sumsCases)('%s: S and its five derivatives', (name, data, xr, yr) => {

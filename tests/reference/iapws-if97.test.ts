@@ -4,8 +4,8 @@
  * T in K, v in m³/kg, h and u in kJ/kg, s and cp in kJ/(kg·K), w in m/s.
  */
 import { describe, it } from 'vitest';
-import { region1 } from '../../src/water/if97/region1.js';
-import { region2, region2Metastable } from '../../src/water/if97/region2.js';
+import { region1, region1Enthalpy } from '../../src/water/if97/region1.js';
+import { region2, region2Enthalpy, region2Metastable } from '../../src/water/if97/region2.js';
 import { region3 } from '../../src/water/if97/region3.js';
 import { saturationPressure, saturationTemperature } from '../../src/water/if97/region4.js';
 import { region5 } from '../../src/water/if97/region5.js';
@@ -18,6 +18,7 @@ import { checkGibbs, checkRegion3, nine, TABLE_15, TABLE_33, TABLE_42, TABLE_5 }
 
 describe('Table 5: region 1', () => {
   checkGibbs(region1, TABLE_5);
+  it.each(TABLE_5)('the enthalpy alone (region1Enthalpy), T = %d K, p = %d MPa', (T, p, _v, h) => nine(region1Enthalpy(p * 1e6, T) / 1e3, h));
 });
 
 describe('Table 7: region 1 backward T(p, h)', () => {
@@ -38,6 +39,7 @@ describe('Table 9: region 1 backward T(p, s)', () => {
 
 describe('Table 15: region 2', () => {
   checkGibbs(region2, TABLE_15);
+  it.each(TABLE_15)('the enthalpy alone (region2Enthalpy), T = %d K, p = %d MPa', (T, p, _v, h) => nine(region2Enthalpy(p * 1e6, T) / 1e3, h));
 });
 
 describe('Table 18: metastable-vapour region', () => {

@@ -3,6 +3,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { KERNELS_PATH, renderKernels } from '../../scripts/generate-kernels.js';
 import * as K from '../../src/water/if97/kernels.generated.js';
+import { WaterProperties } from '../../src/water/if97/properties.js';
+import { region1, region1Enthalpy } from '../../src/water/if97/region1.js';
+import { region2, region2Enthalpy } from '../../src/water/if97/region2.js';
 import { compileTerms, sumTerms, sumValue } from './reference-sums.js';
 import { expectClose } from '../helpers/tolerance.js';
 
@@ -63,6 +66,27 @@ describe('src/water/if97/kernels.generated.ts', () => {
       fc.property(fc.double({ min: xr[0], max: xr[1], noNaN: true }), fc.double({ min: yr[0], max: yr[1], noNaN: true }), (x, y) => {
         fc.pre(y !== 0);
         expectClose(kernel(x, y), sumValue(terms, x, y), { rel: 1e-11, abs: 1e-9 });
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
+
+describe('the enthalpy-only functions (humid-air processes) against the full equations', () => {
+  const out = new WaterProperties();
+  // any (p, T) of the regions' ranges: 273.15–623.15 K up to 100 MPa (region 1), 273.15–1073.15 K (region 2)
+  it('region1Enthalpy is bit for bit region1(p, T).h', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e3, max: 100e6, noNaN: true }), fc.double({ min: 273.15, max: 623.15, noNaN: true }), (p, T) => {
+        expect(region1Enthalpy(p, T)).toBe(region1(p, T, out).h);
+      }),
+      { numRuns: 300 },
+    );
+  });
+  it('region2Enthalpy is bit for bit region2(p, T).h', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1, max: 100e6, noNaN: true }), fc.double({ min: 273.15, max: 1073.15, noNaN: true }), (p, T) => {
+        expect(region2Enthalpy(p, T)).toBe(region2(p, T, out).h);
       }),
       { numRuns: 300 },
     );

@@ -19,9 +19,8 @@
  * @module
  */
 import { Status, type StatusCode } from '../../core/status.js';
-import { WaterProperties } from '../../water/if97/properties.js';
-import { region1 } from '../../water/if97/region1.js';
-import { region2 } from '../../water/if97/region2.js';
+import { region1Enthalpy } from '../../water/if97/region1.js';
+import { region2Enthalpy } from '../../water/if97/region2.js';
 import { saturationPressure, saturationTemperature } from '../../water/if97/region4.js';
 import { brent, residual, RESIDUAL } from './root.js';
 import { CP_DRY_AIR, CP_VAPOR, H_VAPOR_0 } from './relations.js';
@@ -49,7 +48,7 @@ export const PROCESS_REASON = {
   heat: 109,
 } as const;
 
-/** Loads of one process (W), the water stream, and scratch for the IF97 calls. Reuse one instance. */
+/** Loads of one process (W) and the water stream. Reuse one instance. */
 export class ProcessLoads {
   /** ṁa (h(T2, W1) − h(T1, W1)), W. */
   sensible = 0;
@@ -69,8 +68,6 @@ export class ProcessLoads {
   waterTemperature = 0;
   /** Why the status is not ok ({@link REASON} or {@link PROCESS_REASON}). */
   reason = 0;
-  /** Scratch for the IF97 kernels. */
-  readonly scratch = new WaterProperties();
 }
 
 const T_WATER_MIN = 273.15;
@@ -87,8 +84,7 @@ function fail(loads: ProcessLoads, status: StatusCode, reason: number): StatusCo
 function liquidWater(p: number, T: number, loads: ProcessLoads): StatusCode {
   if (!(T >= T_WATER_MIN && T <= T_WATER_MAX)) return fail(loads, Status.outOfRange, PROCESS_REASON.waterTemperature);
   const ps = saturationPressure(T);
-  region1(p > ps ? p : ps, T, loads.scratch);
-  loads.waterEnthalpy = loads.scratch.h;
+  loads.waterEnthalpy = region1Enthalpy(p > ps ? p : ps, T);
   loads.waterTemperature = T;
   return Status.ok;
 }
@@ -310,8 +306,7 @@ export function steamHumidifier(inlet: HumidAirState, mda: number, target: numbe
   if (target !== TARGET.W && target !== TARGET.RH) return fail(loads, Status.invalidInput, PROCESS_REASON.target);
   if (!(pSteam > 0 && pSteam <= STEAM_P_MAX && TSteam >= 273.15 && TSteam <= STEAM_T_MAX)) return fail(loads, Status.outOfRange, PROCESS_REASON.steamState);
   if (pSteam >= saturationPressure(273.15) && TSteam < saturationTemperature(pSteam)) return fail(loads, Status.outOfRange, PROCESS_REASON.steamState);
-  region2(pSteam, TSteam, loads.scratch);
-  loads.waterEnthalpy = loads.scratch.h;
+  loads.waterEnthalpy = region2Enthalpy(pSteam, TSteam);
   loads.waterTemperature = TSteam;
   const s = humidifyAlongLine(inlet, loads.waterEnthalpy, target, value, wetBulb, out, loads);
   if (fatal(s)) return s;

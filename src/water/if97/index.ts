@@ -25,8 +25,8 @@ export { stateFromHS } from './hs.js';
 export { stateFromTX, stateFromPX } from './quality.js';
 export { stateFromTV } from './tv.js';
 export { saturationAtT, saturationAtP, saturationLinePressure, saturationTemperatureOnLine, P_SAT_MIN, P_SAT_13 } from './saturation.js';
-export { region1 } from './region1.js';
-export { region2, region2Metastable } from './region2.js';
+export { region1, region1Enthalpy } from './region1.js';
+export { region2, region2Enthalpy, region2Metastable } from './region2.js';
 export { region3, region3Pressure, region3Derivatives } from './region3.js';
 export { region5 } from './region5.js';
 // the compensated (double-double) basic equations: within 0.5 ulp of the exact equations, 20-40× the cost (docs/guide/accuracy.md)

@@ -246,6 +246,112 @@ export function region1Sums(x: number, y: number, out: Float64Array): void {
     1.227206585277049e-22 * t33) * ix * iy;
 }
 
+/** Region 1: γ_τ alone (out[3] of region1Sums, bit for bit). */
+export function region1TauSum(x: number, y: number): number {
+  const iy = 1 / y;
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x8 = x5 * x3;
+  const x10 = x8 * x2;
+  const x11 = x10 * x;
+  const x21 = x10 * x11;
+  const x23 = x21 * x2;
+  const x6 = x5 * x;
+  const x29 = x23 * x6;
+  const x30 = x29 * x;
+  const x31 = x30 * x;
+  const x32 = x31 * x;
+  const ym2 = iy * iy;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const ym3 = ym2 * iy;
+  const y4 = y3 * y;
+  const ym4 = ym3 * iy;
+  const y5 = y4 * y;
+  const ym5 = ym4 * iy;
+  const y6 = y5 * y;
+  const ym6 = ym5 * iy;
+  const ym7 = ym6 * iy;
+  const ym8 = ym7 * iy;
+  const ym9 = ym8 * iy;
+  const y10 = y6 * y4;
+  const ym11 = ym9 * ym2;
+  const y7 = y6 * y;
+  const y17 = y10 * y7;
+  const ym14 = ym11 * ym3;
+  const ym15 = ym14 * iy;
+  const ym29 = ym14 * ym15;
+  const ym31 = ym29 * ym2;
+  const ym38 = ym31 * ym7;
+  const ym39 = ym38 * iy;
+  const ym40 = ym39 * iy;
+  const ym41 = ym40 * iy;
+  const t0 = ym2;
+  const t1 = iy;
+  const t3 = y;
+  const t4 = y2;
+  const t5 = y3;
+  const t6 = y4;
+  const t7 = y5;
+  const t8 = x * ym9;
+  const t9 = x * ym7;
+  const t10 = x * iy;
+  const t12 = x * y;
+  const t13 = x * y3;
+  const t14 = x2 * ym3;
+  const t16 = x2 * y;
+  const t17 = x2 * y3;
+  const t18 = x2 * y17;
+  const t19 = x3 * ym4;
+  const t21 = x3 * y6;
+  const t22 = x4 * ym5;
+  const t23 = x4 * ym2;
+  const t24 = x4 * y10;
+  const t25 = x5 * ym8;
+  const t26 = x8 * ym11;
+  const t27 = x8 * ym6;
+  const t28 = x21 * ym29;
+  const t29 = x23 * ym31;
+  const t30 = x29 * ym38;
+  const t31 = x30 * ym39;
+  const t32 = x31 * ym40;
+  const t33 = x32 * ym41;
+  return (
+    -0.29265942426334 * t0 +
+    0.84548187169114 * t1 +
+    3.3855169168385 * t3 +
+    -1.91583926775744 * t4 +
+    0.47316115539684 * t5 +
+    -0.066465668798004 * t6 +
+    0.0040607314991784 * t7 +
+    -0.00254871721114236 * t8 +
+    0.00424944110961118 * t9 +
+    0.018990068218419 * t10 +
+    -0.021841717175414 * t12 +
+    -0.00015851507390979001 * t13 +
+    0.0014155296321980099 * t14 +
+    0.000047661393906987 * t16 +
+    -0.0000132425535992538 * t17 +
+    -1.235814937059098e-14 * t18 +
+    0.000126718579380216 * t19 +
+    -5.1123076872061805e-9 * t21 +
+    0.000011212640954 * t22 +
+    0.00000130342445791202 * t23 +
+    -1.4341729937924e-12 * t24 +
+    0.00000324135974880936 * t25 +
+    1.40077319158051e-8 * t26 +
+    1.0454922738380401e-9 * t27 +
+    1.9941018075703988e-17 * t28 +
+    -4.48827542684151e-19 * t29 +
+    -1.00075970318621e-21 * t30 +
+    4.65957282962769e-22 * t31 +
+    -7.2912378325616e-23 * t32 +
+    3.835020578990778e-24 * t33
+  ) * iy;
+}
+
 /** Region 2 ideal-gas part (Table 10) without ln π: y = τ. */
 export function region2IdealSums(y: number, out: Float64Array): void {
   const iy = 1 / y;
@@ -618,6 +724,134 @@ export function region2ResidualSums(x: number, y: number, out: Float64Array): vo
     4.560666901131807e-26 * t40 +
     5.319812673674688e-14 * t41 +
     -0.0013136263247976432 * t42) * ix * iy;
+}
+
+/** Region 2 residual part: γʳ_τ alone (out[3] of region2ResidualSums, bit for bit). */
+export function region2ResidualTauSum(x: number, y: number): number {
+  const iy = 1 / y;
+  const x2 = x * x;
+  const x3 = x2 * x;
+  const x4 = x3 * x;
+  const x5 = x4 * x;
+  const x6 = x5 * x;
+  const x7 = x6 * x;
+  const x8 = x7 * x;
+  const x9 = x8 * x;
+  const x10 = x9 * x;
+  const x16 = x10 * x6;
+  const x18 = x16 * x2;
+  const x20 = x18 * x2;
+  const x21 = x20 * x;
+  const x22 = x21 * x;
+  const x23 = x22 * x;
+  const x24 = x23 * x;
+  const y2 = y * y;
+  const y3 = y2 * y;
+  const y4 = y3 * y;
+  const y6 = y4 * y2;
+  const y7 = y6 * y;
+  const y8 = y7 * y;
+  const y10 = y8 * y2;
+  const y11 = y10 * y;
+  const y13 = y11 * y2;
+  const y14 = y13 * y;
+  const y16 = y14 * y2;
+  const y20 = y16 * y4;
+  const y21 = y20 * y;
+  const y25 = y21 * y4;
+  const y26 = y25 * y;
+  const y29 = y26 * y3;
+  const y35 = y29 * y6;
+  const y36 = y35 * y;
+  const y39 = y36 * y3;
+  const y40 = y39 * y;
+  const y48 = y40 * y8;
+  const y50 = y48 * y2;
+  const y53 = y50 * y3;
+  const y57 = y53 * y4;
+  const y58 = y57 * y;
+  const t1 = x * y;
+  const t2 = x * y2;
+  const t3 = x * y3;
+  const t4 = x * y6;
+  const t5 = x2 * y;
+  const t6 = x2 * y2;
+  const t7 = x2 * y4;
+  const t8 = x2 * y7;
+  const t9 = x2 * y36;
+  const t11 = x3 * y;
+  const t12 = x3 * y3;
+  const t13 = x3 * y6;
+  const t14 = x3 * y35;
+  const t15 = x4 * y;
+  const t16 = x4 * y2;
+  const t17 = x4 * y3;
+  const t18 = x5 * y7;
+  const t19 = x6 * y3;
+  const t20 = x6 * y16;
+  const t21 = x6 * y35;
+  const t23 = x7 * y11;
+  const t24 = x7 * y25;
+  const t25 = x8 * y8;
+  const t26 = x8 * y36;
+  const t27 = x9 * y13;
+  const t28 = x10 * y4;
+  const t29 = x10 * y10;
+  const t30 = x10 * y14;
+  const t31 = x16 * y29;
+  const t32 = x16 * y50;
+  const t33 = x18 * y57;
+  const t34 = x20 * y20;
+  const t35 = x20 * y35;
+  const t36 = x20 * y48;
+  const t37 = x21 * y21;
+  const t38 = x22 * y53;
+  const t39 = x23 * y39;
+  const t40 = x24 * y26;
+  const t41 = x24 * y40;
+  const t42 = x24 * y58;
+  return (
+    -0.017834862292358 * t1 +
+    -0.09199202739273 * t2 +
+    -0.172743777250296 * t3 +
+    -0.30195167236758 * t4 +
+    -0.000033032641670203 * t5 +
+    -0.0003789797503263 * t6 +
+    -0.015757110897342 * t7 +
+    -0.306581069554011 * t8 +
+    -0.0009602837249071321 * t9 +
+    4.3870667284435e-7 * t11 +
+    -0.00009683303171571 * t12 +
+    -0.009020354725288799 * t13 +
+    -1.423388874692715 * t14 +
+    -7.8847309559367e-10 * t15 +
+    2.558143570457e-8 * t16 +
+    0.0000014467611815552102 * t17 +
+    0.0000160454534363627 * t18 +
+    -5.0144299353183e-11 * t19 +
+    -0.033874355714168 * t20 +
+    -836.35096769364 * t21 +
+    -0.0000138839897890111 * t23 +
+    -0.9736710608934751 * t24 +
+    9.0049690883672e-11 * t25 +
+    -296.3208272327928 * t26 +
+    2.57526266427144e-7 * t27 +
+    4.1627860840696e-19 * t28 +
+    -1.0234747095929e-12 * t29 +
+    -1.40254511313154e-8 * t30 +
+    -2.345604350762565e-9 * t31 +
+    5.3465159397045 * t32 +
+    -19.18748282727747 * t33 +
+    1.78371690710842e-23 * t34 +
+    1.0720260906681199e-11 * t35 +
+    -0.0002016118449513984 * t36 +
+    -1.2401766233984191e-24 * t37 +
+    0.0002004828223513221 * t38 +
+    -4.97975748452559e-14 * t39 +
+    1.900277875471586e-27 * t40 +
+    2.21658861403112e-15 * t41 +
+    -0.0000547344301999018 * t42
+  ) * iy;
 }
 
 /** Metastable-vapour residual part (Table 16): x = π, y = τ − 0.5. */

@@ -10,7 +10,7 @@
 import { pStar, TStar } from '../../../data/if97/region1.json';
 import { R_IF97 } from './constants.js';
 import type { WaterProperties } from './properties.js';
-import { region1Sums } from './kernels.generated.js';
+import { region1Sums, region1TauSum } from './kernels.generated.js';
 
 const P_STAR = pStar;
 const T_STAR = TStar;
@@ -47,4 +47,18 @@ export function region1(p: number, T: number, out: WaterProperties): WaterProper
   out.cv = R_IF97 * (-tau * tau * gTauTau + (a * a) / gPiPi);
   out.w = Math.sqrt((RT * gPi * gPi) / ((a * a) / (tau * tau * gTauTau) - gPiPi));
   return out;
+}
+
+/**
+ * The specific enthalpy alone at (p [Pa], T [K]), J/kg, from γ_τ (Table 3: h = RTτγ_τ): bit for bit
+ * {@link region1}'s `h`, for callers (humid-air processes: condensate and spray water) that need no
+ * other property and would otherwise bundle the five other sums. Same range as {@link region1}.
+ * @example
+ * ```ts
+ * region1Enthalpy(3e6, 300);   //=> 115331.273 (J/kg; IF97 Table 5)
+ * ```
+ */
+export function region1Enthalpy(p: number, T: number): number {
+  const tau = T_STAR / T;
+  return R_IF97 * T * tau * region1TauSum(7.1 - p / P_STAR, tau - 1.222);
 }

@@ -13,7 +13,8 @@
 import { metastable, n0, pStar, TStar } from '../../../data/if97/region2.json';
 import { fillFromIdealAndResidual } from './gibbs-ideal-residual.js';
 import type { WaterProperties } from './properties.js';
-import { region2IdealSums, region2MetastableSums, region2ResidualSums } from './kernels.generated.js';
+import { R_IF97 } from './constants.js';
+import { region2IdealSums, region2MetastableSums, region2ResidualSums, region2ResidualTauSum } from './kernels.generated.js';
 
 const P_STAR = pStar;
 const T_STAR = TStar;
@@ -66,4 +67,20 @@ export function region2Metastable(p: number, T: number, out: WaterProperties): W
   const tau = T_STAR / T;
   region2MetastableSums(pi, tau - 0.5, r);
   return fill(p, T, pi, tau, true, out);
+}
+
+/**
+ * The specific enthalpy alone at (p [Pa], T [K]), J/kg, from γ°_τ + γʳ_τ (Table 12: h = RTτγ_τ):
+ * bit for bit {@link region2}'s `h`, for callers (humid-air processes: steam for a humidifier) that
+ * need no other property and would otherwise bundle the residual part's five other sums. Same range
+ * as {@link region2}.
+ * @example
+ * ```ts
+ * region2Enthalpy(0.0035e6, 700);   //=> 3335683.75 (J/kg; IF97 Table 15)
+ * ```
+ */
+export function region2Enthalpy(p: number, T: number): number {
+  const tau = T_STAR / T;
+  region2IdealSums(tau, g);
+  return R_IF97 * T * tau * (g[1]! + region2ResidualTauSum(p / P_STAR, tau - 0.5));
 }
