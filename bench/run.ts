@@ -24,6 +24,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Bench } from 'tinybench';
 import { checksum, region1BenchInputs } from '../scripts/generate-c-reference.js';
 import { region1, WaterProperties } from '../src/water/if97/index.js';
+import { region1Sums } from '../src/water/if97/kernels.generated.js';
 import { waterBatch } from '../src/water/index.js';
 import { cases } from './cases.js';
 
@@ -107,6 +108,13 @@ interface Native {
   ratioToC?: number;
   ratioToCChecked?: number;
   bitForBit?: boolean;
+  /** The term sums alone (region1Sums over the same states): C and TypeScript, ns per state, and whether their sums of γ_τ agree bit for bit. */
+  kernel?: { cNs: number; jsNs: number; bitForBit: boolean };
+}
+
+/** The 16 hex digits of a double's bits. */
+function bitsOf(x: number): string {
+  return new BigUint64Array(new Float64Array([x]).buffer)[0]!.toString(16).padStart(16, '0');
 }
 
 /** The region 1 batch against the C build of the same equations (see the header). */
@@ -144,24 +152,56 @@ function nativeRuns(compiler: string, exe: string): Native {
   single();
   const hBits = checksum(out.h);
   const wBits = checksum(out.w);
+  // the term sums alone, as the C program's kernel loop runs them: γ_τ of every state added up in order
+  const g = new Float64Array(6);
+  let kernelSum = 0;
+  const kernel = () => {
+    let sum = 0;
+    for (let i = 0; i < n; i++) {
+      region1Sums(7.1 - p[i]! / 16530000, 1386 / T[i]! - 1.222, g);
+      sum += g[3]!;
+    }
+    kernelSum = sum;
+  };
   const cPlain: number[] = [];
   const cChecked: number[] = [];
+  const cKernel: number[] = [];
   const batch: number[] = [];
+  const jsKernel: number[] = [];
   let bitForBit = true;
+  let kernelBitForBit = true;
   for (let r = 0; r < rounds; r++) {
-    const c = JSON.parse(execFileSync(exe, [String(n), String(reps)], { encoding: 'utf8' })) as { plainNs: number; checkedNs: number; hBits: string; wBits: string };
+    const c = JSON.parse(execFileSync(exe, [String(n), String(reps)], { encoding: 'utf8' })) as { plainNs: number; checkedNs: number; kernelNs: number; hBits: string; wBits: string; kernelBits: string };
     cPlain.push(c.plainNs);
     cChecked.push(c.checkedNs);
+    cKernel.push(c.kernelNs);
     bitForBit &&= c.hBits === hBits && c.wBits === wBits;
     const js: number[] = [];
-    for (let k = 0; k < reps; k++) js.push(cpuNsPerState(() => waterBatch({ p, T }, props, out), n));
+    const jk: number[] = [];
+    for (let k = 0; k < reps; k++) {
+      js.push(cpuNsPerState(() => waterBatch({ p, T }, props, out), n));
+      jk.push(cpuNsPerState(kernel, n));
+    }
+    kernelBitForBit &&= bitsOf(kernelSum) === c.kernelBits;
     batch.push(mid(js));
+    jsKernel.push(mid(jk));
   }
   const singleRuns: number[] = [];
   for (let k = 0; k < reps; k++) singleRuns.push(cpuNsPerState(single, n));
   const cPlainNs = mid(cPlain);
   const batchNs = mid(batch);
-  return { compiler, states: n, cPlainNs, cCheckedNs: mid(cChecked), batchNs, singleNs: mid(singleRuns), ratioToC: batchNs / cPlainNs, ratioToCChecked: batchNs / mid(cChecked), bitForBit };
+  return {
+    compiler,
+    states: n,
+    cPlainNs,
+    cCheckedNs: mid(cChecked),
+    batchNs,
+    singleNs: mid(singleRuns),
+    ratioToC: batchNs / cPlainNs,
+    ratioToCChecked: batchNs / mid(cChecked),
+    bitForBit,
+    kernel: { cNs: mid(cKernel), jsNs: mid(jsKernel), bitForBit: kernelBitForBit },
+  };
 }
 
 const native = nativeComparison();
@@ -172,6 +212,11 @@ else {
     `native comparison (${native.compiler} -O2, ${native.states} region 1 states, v h u s cp w, CPU time, medians): C ${native.cPlainNs!.toFixed(1)} ns/state ` +
       `(with the region test ${native.cCheckedNs!.toFixed(1)}), waterBatch ${native.batchNs!.toFixed(1)} ns/state: ${native.ratioToC!.toFixed(2)}× the C build ` +
       `(target 1.2×: ${native.ratioToC! <= 1.2 ? 'met' : `missed by ${(native.ratioToC! / 1.2).toFixed(2)}×`}); C results ${native.bitForBit ? 'equal region1 bit for bit' : 'DIFFER from region1'}`,
+  );
+  const k = native.kernel!;
+  console.log(
+    `  where the time goes: the term sums alone (region1Sums) C ${k.cNs.toFixed(1)}, TypeScript ${k.jsNs.toFixed(1)} ns/state (${(k.jsNs / k.cNs).toFixed(2)}×, sums ${k.bitForBit ? 'equal bit for bit' : 'DIFFER'}); ` +
+      `the rest of a state (relations, region test, copies into the columns, status) C ${(native.cPlainNs! - k.cNs).toFixed(1)}, waterBatch ${(native.batchNs! - k.jsNs).toFixed(1)} ns/state`,
   );
 }
 

@@ -19,6 +19,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as K from '../../src/water/if97/kernels.generated.js';
 import * as F from '../../src/fluids/kernels.generated.js';
+import { certainlyRegion1 } from '../../src/water/if97/pt.js';
+import { region1 } from '../../src/water/if97/region1.js';
+import { WaterProperties } from '../../src/water/if97/properties.js';
 import { fluidKernelNames, readFluidCoefficients } from '../../scripts/generate-kernels.js';
 import { compileTerms, sumTerms, sumValue } from '../water/reference-sums.js';
 import { referenceIdeal, referenceResidual } from '../fluids/reference-helmholtz.js';
@@ -107,9 +110,42 @@ const tauSumCases: [string, string, Range, Range][] = [
 
 describe('IF97 kernels (src/water/if97/kernels.generated.ts) against a plain loop', () => {
   it('every exported kernel has a case here', () => {
-    const covered = new Set([...sumsCases, ...idealCases, ...valueCases, ...tauSumCases].map((c) => c[0]));
+    const covered = new Set([...sumsCases, ...idealCases, ...valueCases, ...tauSumCases].map((c) => c[0]).concat('region1Rows'));
     expect(Object.keys(K).filter((k) => !covered.has(k))).toEqual([]);
     expect([...covered].filter((k) => !(k in K))).toEqual([]);
+  });
+
+  // the batch's region 1 block: its sums are region1Sums' (checked against the loop above), its relations region1's
+  it('region1Rows: the elements certainlyRegion1 accepts are marked and get region1(p, T) bit for bit; the others are marked 0, their rows untouched', () => {
+    const props = new WaterProperties();
+    const pressure = fc.oneof(fc.double({ min: 1e6, max: 110e6, noNaN: true }), fc.constantFrom(16.6e6, 100e6, NaN, -1));
+    const temperature = fc.oneof(fc.double({ min: 250, max: 700, noNaN: true }), fc.constantFrom(273.15, 623.15, NaN));
+    fc.assert(
+      fc.property(fc.array(fc.tuple(pressure, temperature), { minLength: 1, maxLength: 40 }), fc.boolean(), (elements, wantK) => {
+        const n = elements.length + 3;
+        const P = new Float64Array(n);
+        const T = new Float64Array(n);
+        elements.forEach(([p, t], j) => {
+          P[j + 3] = p;
+          T[j + 3] = t;
+        });
+        const mask = new Uint8Array(elements.length).fill(7);
+        const rows = new Float64Array(12 * elements.length).fill(-1);
+        const count = K.region1Rows(P, T, 3, n, mask, rows, wantK);
+        expect(count).toBe(elements.filter(([p, t]) => certainlyRegion1(p, t)).length);
+        elements.forEach(([p, t], j) => {
+          const row = Array.from(rows.subarray(12 * j, 12 * j + 12));
+          if (!certainlyRegion1(p, t)) {
+            expect(mask[j]).toBe(0);
+            return expect(row).toEqual(new Array(12).fill(-1));
+          }
+          expect(mask[j]).toBe(1);
+          const o = region1(p, t, props);
+          expect(row).toEqual([o.T, o.p, o.v, o.rho, o.u, o.h, o.s, o.cp, o.cv, o.w, wantK ? o.cp / o.cv : NaN, NaN]);
+        });
+      }),
+      { numRuns: 100 },
+    );
   });
 
   it.each(tauSumCases)('%s: Sy alone, bit for bit out[3] of %s', (name, full, xr, yr) => {

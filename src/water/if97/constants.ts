@@ -66,3 +66,9 @@ export const T_LINEAR_SATURATION_ZONE = 1e-6;
 export const CRITICAL_EXPONENT_BETA = 0.325;
 /** Temperature window around T_c where a region 3 density search on a branch may fall back to the single root of a loop-free isotherm, K. */
 export const T_LOOP_FREE_WINDOW = 1e-2;
+
+/**
+ * Above this pressure (Pa) every state up to 623.15 K lies in region 1 without computing p_s(T): the
+ * saturation pressure of Eq. 30 peaks at 16.529 MPa there (p_s(623.15 K), IF97 Section 4).
+ */
+export const P_REGION1_WITHOUT_SATURATION = 16.6e6;

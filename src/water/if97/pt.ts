@@ -6,7 +6,7 @@
  */
 import { Status, type StatusCode } from '../../core/status.js';
 import { finishSinglePhase, regionOfPT } from './classify.js';
-import { P_MAX, T_13, T_MIN } from './constants.js';
+import { P_MAX, P_REGION1_WITHOUT_SATURATION, T_13, T_MIN } from './constants.js';
 import { defaultContext, type SolverContext } from './context.js';
 import { region1 } from './region1.js';
 import { region2 } from './region2.js';
@@ -39,11 +39,7 @@ export function stateFromPT(p: number, T: number, out: WaterState, ctx: SolverCo
   return finishSinglePhase(out, region);
 }
 
-/**
- * Above this pressure (Pa) every state up to 623.15 K lies in region 1 without computing p_s(T): the
- * saturation pressure of Eq. 30 peaks at 16.529 MPa there (p_s(623.15 K), IF97 Section 4).
- */
-export const P_REGION1_WITHOUT_SATURATION = 16.6e6;
+export { P_REGION1_WITHOUT_SATURATION };
 
 /**
  * True when (p, T) is in region 1 by bounds alone (p ≥ 16.6 MPa, T ≤ 623.15 K): the same answer as
