@@ -50,7 +50,7 @@ const ptCodes = new Uint8Array(BLOCK);
  */
 function ptLoop(ctx: SolverContext, a: Float64Array, b: Float64Array, fields: Int32Array, wantK: boolean, columns: readonly Float64Array[], status: Uint8Array): void {
   const n = a.length;
-  const m = fields.length;
+  const slots = fields.length <= SLOTS ? slotsOf(fields, columns) : undefined;
   for (let start = 0; start < n; start += BLOCK) {
     const end = Math.min(n, start + BLOCK);
     if (region1Rows(a, b, start, end, ptMask, ptRows, wantK) < end - start) {
@@ -61,30 +61,54 @@ function ptLoop(ctx: SolverContext, a: Float64Array, b: Float64Array, fields: In
         if (code === Status.ok) copyState(ptRows, r, wantK);
       }
     }
-    if (m <= SLOTS) slotsFromRows(start, end, fields, columns, status);
+    if (slots !== undefined) slotsFromRows(start, end, fields, columns, slots, status);
     else columnsFromRows(start, end, fields, columns, status);
   }
+}
+
+/** Up to six requested columns and their row fields in fixed slots (slots past the request repeat the first). */
+interface Slots {
+  readonly c0: Float64Array;
+  readonly c1: Float64Array;
+  readonly c2: Float64Array;
+  readonly c3: Float64Array;
+  readonly c4: Float64Array;
+  readonly c5: Float64Array;
+  readonly f0: number;
+  readonly f1: number;
+  readonly f2: number;
+  readonly f3: number;
+  readonly f4: number;
+  readonly f5: number;
+}
+
+/** The slots of a request of at most six properties (one object per batch call). */
+function slotsOf(fields: Int32Array, columns: readonly Float64Array[]): Slots {
+  const m = fields.length;
+  const slot = (k: number) => (k < m ? k : 0);
+  return {
+    c0: columns[0]!,
+    c1: columns[slot(1)]!,
+    c2: columns[slot(2)]!,
+    c3: columns[slot(3)]!,
+    c4: columns[slot(4)]!,
+    c5: columns[slot(5)]!,
+    f0: fields[0]!,
+    f1: fields[slot(1)]!,
+    f2: fields[slot(2)]!,
+    f3: fields[slot(3)]!,
+    f4: fields[slot(4)]!,
+    f5: fields[slot(5)]!,
+  };
 }
 
 /**
  * The columns and statuses of a (p, T) block from its rows, for up to six properties: fixed slots (slots
  * past the request repeat the first column), each element's values read once and written once.
  */
-function slotsFromRows(start: number, end: number, fields: Int32Array, columns: readonly Float64Array[], status: Uint8Array): void {
+function slotsFromRows(start: number, end: number, fields: Int32Array, columns: readonly Float64Array[], slots: Slots, status: Uint8Array): void {
   const m = fields.length;
-  const slot = (k: number) => (k < m ? k : 0);
-  const c0 = columns[0]!;
-  const c1 = columns[slot(1)]!;
-  const c2 = columns[slot(2)]!;
-  const c3 = columns[slot(3)]!;
-  const c4 = columns[slot(4)]!;
-  const c5 = columns[slot(5)]!;
-  const f0 = fields[0]!;
-  const f1 = fields[slot(1)]!;
-  const f2 = fields[slot(2)]!;
-  const f3 = fields[slot(3)]!;
-  const f4 = fields[slot(4)]!;
-  const f5 = fields[slot(5)]!;
+  const { c0, c1, c2, c3, c4, c5, f0, f1, f2, f3, f4, f5 } = slots;
   for (let i = start, j = 0, r = 0; i < end; i++, j++, r += WIDTH) {
     let code: number = ptMask[j] === 1 ? Status.ok : ptCodes[j]!;
     if (code === Status.ok) {
@@ -212,19 +236,7 @@ function fusedLoop(pair: Pair, ctx: SolverContext, a: Float64Array, b: Float64Ar
   }
   const n = a.length;
   if (m <= SLOTS) {
-    const slot = (j: number) => (j < m ? j : 0);
-    const c0 = columns[0]!;
-    const c1 = columns[slot(1)]!;
-    const c2 = columns[slot(2)]!;
-    const c3 = columns[slot(3)]!;
-    const c4 = columns[slot(4)]!;
-    const c5 = columns[slot(5)]!;
-    const f0 = fields[0]!;
-    const f1 = fields[slot(1)]!;
-    const f2 = fields[slot(2)]!;
-    const f3 = fields[slot(3)]!;
-    const f4 = fields[slot(4)]!;
-    const f5 = fields[slot(5)]!;
+    const { c0, c1, c2, c3, c4, c5, f0, f1, f2, f3, f4, f5 } = slotsOf(fields, columns);
     for (let i = 0; i < n; i++) {
       const x = a[i]!;
       const y = second[i]!;
