@@ -7,27 +7,19 @@
  *
  * @module
  */
-import file from '../../../data/if97/backward-region3.json';
+import data from '../../../data/if97/backward-region3.json';
 import * as K from './kernels.generated.js';
 import { S_CRITICAL } from './constants.js';
 
-/**
- * What this module reads of data/if97/backward-region3.json (the coefficients I, J, n are in the
- * kernels). In the built package (tsup.config.ts, `jsonAsText`) the import is JSON text, parsed on
- * the first call that needs it: V8 only scans a string at import, where the file's 13 kB of number
- * arrays as an object literal were compiled and built on every start. Run from the sources (vitest,
- * tsx) the import is the parsed object already. Only this module may import the file.
- */
-interface Subregion {
+const [a1, a2, a3, a4] = data.h3ab as [number, number, number, number];
+
+type Fn = (x: number, y: number) => number;
+interface Spec {
   readonly star: readonly number[];
   readonly shift: readonly number[];
 }
-type Name = 'T3aPH' | 'T3bPH' | 'v3aPH' | 'v3bPH' | 'T3aPS' | 'T3bPS' | 'v3aPS' | 'v3bPS';
-type BackwardRegion3File = { readonly h3ab: readonly number[] } & { readonly [N in Name]: Subregion };
-
-type Fn = (x: number, y: number) => number;
 /** Evaluates value = star[0] · Σ(π + shift[0], y/star[2] + shift[1]) with π = p/(star[1] MPa). */
-function make(spec: Subregion, kernel: Fn, yScale: number): (p: number, y: number) => number {
+function make(spec: Spec, kernel: Fn, yScale: number): (p: number, y: number) => number {
   const [vStar, pStar, yStar] = spec.star as [number, number, number];
   const [dx, dy] = spec.shift as [number, number];
   const pDiv = pStar * 1e6;
@@ -35,39 +27,19 @@ function make(spec: Subregion, kernel: Fn, yScale: number): (p: number, y: numbe
   return (p, y) => vStar * kernel(p / pDiv + dx, y / yDiv + dy);
 }
 
-/** The boundary's coefficients and the eight equations, built once from the data. */
-interface Equations extends Readonly<Record<Name, (p: number, y: number) => number>> {
-  /** h_3ab(p) = (a1 + a2 π + a3 π² + a4 π³) kJ/kg (Table 2). */
-  readonly a1: number;
-  readonly a2: number;
-  readonly a3: number;
-  readonly a4: number;
-}
-let equations: Equations | undefined;
-function built(): Equations {
-  const data = (typeof file === 'string' ? JSON.parse(file) : file) as BackwardRegion3File;
-  const [a1, a2, a3, a4] = data.h3ab as [number, number, number, number];
-  return {
-    a1,
-    a2,
-    a3,
-    a4,
-    T3aPH: make(data.T3aPH, K.backwardT3aPH, 1e3),
-    T3bPH: make(data.T3bPH, K.backwardT3bPH, 1e3),
-    v3aPH: make(data.v3aPH, K.backwardv3aPH, 1e3),
-    v3bPH: make(data.v3bPH, K.backwardv3bPH, 1e3),
-    T3aPS: make(data.T3aPS, K.backwardT3aPS, 1e3),
-    T3bPS: make(data.T3bPS, K.backwardT3bPS, 1e3),
-    v3aPS: make(data.v3aPS, K.backwardv3aPS, 1e3),
-    v3bPS: make(data.v3bPS, K.backwardv3bPS, 1e3),
-  };
-}
+const T3aPH = make(data.T3aPH, K.backwardT3aPH, 1e3);
+const T3bPH = make(data.T3bPH, K.backwardT3bPH, 1e3);
+const v3aPH = make(data.v3aPH, K.backwardv3aPH, 1e3);
+const v3bPH = make(data.v3bPH, K.backwardv3bPH, 1e3);
+const T3aPS = make(data.T3aPS, K.backwardT3aPS, 1e3);
+const T3bPS = make(data.T3bPS, K.backwardT3bPS, 1e3);
+const v3aPS = make(data.v3aPS, K.backwardv3aPS, 1e3);
+const v3bPS = make(data.v3bPS, K.backwardv3bPS, 1e3);
 
 /** The 3a/3b boundary h_3ab(p) in J/kg, p in Pa (SR3-03 Eq. 1). */
 export function h3abEnthalpy(p: number): number {
-  const e = (equations ??= built());
   const pi = p / 1e6;
-  return (e.a1 + pi * (e.a2 + pi * (e.a3 + pi * e.a4))) * 1e3;
+  return (a1 + pi * (a2 + pi * (a3 + pi * a4))) * 1e3;
 }
 
 /**
@@ -78,8 +50,7 @@ export function h3abEnthalpy(p: number): number {
  * ```
  */
 export function region3TemperaturePH(p: number, h: number): number {
-  const e = (equations ??= built());
-  return h <= h3abEnthalpy(p) ? e.T3aPH(p, h) : e.T3bPH(p, h);
+  return h <= h3abEnthalpy(p) ? T3aPH(p, h) : T3bPH(p, h);
 }
 
 /**
@@ -90,8 +61,7 @@ export function region3TemperaturePH(p: number, h: number): number {
  * ```
  */
 export function region3VolumePH(p: number, h: number): number {
-  const e = (equations ??= built());
-  return h <= h3abEnthalpy(p) ? e.v3aPH(p, h) : e.v3bPH(p, h);
+  return h <= h3abEnthalpy(p) ? v3aPH(p, h) : v3bPH(p, h);
 }
 
 /**
@@ -102,8 +72,7 @@ export function region3VolumePH(p: number, h: number): number {
  * ```
  */
 export function region3TemperaturePS(p: number, s: number): number {
-  const e = (equations ??= built());
-  return s <= S_CRITICAL ? e.T3aPS(p, s) : e.T3bPS(p, s);
+  return s <= S_CRITICAL ? T3aPS(p, s) : T3bPS(p, s);
 }
 
 /**
@@ -114,6 +83,5 @@ export function region3TemperaturePS(p: number, s: number): number {
  * ```
  */
 export function region3VolumePS(p: number, s: number): number {
-  const e = (equations ??= built());
-  return s <= S_CRITICAL ? e.v3aPS(p, s) : e.v3bPS(p, s);
+  return s <= S_CRITICAL ? v3aPS(p, s) : v3bPS(p, s);
 }
