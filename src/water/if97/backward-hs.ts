@@ -6,11 +6,10 @@
  *
  * @module
  */
-// by name: the bundle carries the B2ab coefficients alone (the equations' coefficients are in the kernels)
-import { b2ab } from '../../../data/if97/backward-hs.json';
+import data from '../../../data/if97/backward-hs.json';
 import { backward1HS, backward2aHS, backward2bHS, backward2cHS } from './kernels.generated.js';
 
-const [n1, n2, n3, n4] = b2ab as [number, number, number, number];
+const [n1, n2, n3, n4] = data.b2ab as [number, number, number, number];
 
 /**
  * Region 1: p(h, s) in Pa, h in J/kg, s in J/(kg·K) (SR2-01 Eq. 1).

@@ -6,11 +6,10 @@
  *
  * @module
  */
-// by name: the bundle carries the B2bc coefficients alone (the equations' coefficients are in the kernels)
-import { b2bc } from '../../../data/if97/backward-region2.json';
+import data2 from '../../../data/if97/backward-region2.json';
 import { backward1PH, backward2aPH, backward2bPH, backward2cPH } from './kernels.generated.js';
 
-const [b1, b2, b3, b4, b5] = b2bc as [number, number, number, number, number];
+const [b1, b2, b3, b4, b5] = data2.b2bc as [number, number, number, number, number];
 
 /**
  * Region 1: T(p, h) in K, p in Pa, h in J/kg (Eq. 11).

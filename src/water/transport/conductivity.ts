@@ -15,36 +15,37 @@
  *
  * @module
  */
-// by name: the bundle carries the coefficients, not the file's provenance text and verification tables
-import { critical as C, dilute as DILUTE, range as RANGE, reference as REF, residual as RESIDUAL } from '../../../data/transport/water-conductivity.json';
+import data from '../../../data/transport/water-conductivity.json';
 import { Status, type StatusCode } from '../../core/status.js';
 import { steppedPressureLimit } from './pressure-steps.js';
 import { correlationLength, CriticalEnhancementInputs, enhancementInputsValid } from './critical.js';
 import { reducedViscosityAtLength } from './viscosity.js';
 
-const L = DILUTE.L;
+const REF = data.reference;
+const L = data.dilute.L;
 const L0 = L[0]!;
 const L1 = L[1]!;
 const L2 = L[2]!;
 const L3 = L[3]!;
 const L4 = L[4]!;
-const ROWS = RESIDUAL.Lij.length;
-const COLS = RESIDUAL.Lij[0]!.length;
+const ROWS = data.residual.Lij.length;
+const COLS = data.residual.Lij[0]!.length;
 /** L_ij row by row, i = 0..4 (powers of 1/T̄ − 1), j = 0..5 (powers of ρ̄ − 1). */
-const LIJ = Float64Array.from(RESIDUAL.Lij.flat());
+const LIJ = Float64Array.from(data.residual.Lij.flat());
+const C = data.critical;
 const LAMBDA_CAPITAL = C.Lambda;
 const QD = 1 / C.qDInverse;
 const Y_MIN = C.yMin;
 
 /** Lower temperature limit offered here, K: the release starts at the melting line; 273.15 K is IF97's lower limit. */
-export const CONDUCTIVITY_T_MIN = RANGE.Tmin;
+export const CONDUCTIVITY_T_MIN = data.range.Tmin;
 /** Upper temperature limit of IAPWS R15-11, 1173.15 K. */
-export const CONDUCTIVITY_T_MAX = RANGE.Tmax;
+export const CONDUCTIVITY_T_MAX = data.range.Tmax;
 /**
  * Pressure limits of IAPWS R15-11 by temperature, [upper T of the band in K, highest p in Pa]:
  * 1000 MPa to 398.15 K, 200 MPa to 523.15 K, 150 MPa to 673.15 K, 100 MPa to 1173.15 K.
  */
-export const CONDUCTIVITY_PRESSURE_LIMITS: readonly (readonly [number, number])[] = RANGE.pressureSteps.map(([T, p]) => [T!, p!] as const);
+export const CONDUCTIVITY_PRESSURE_LIMITS: readonly (readonly [number, number])[] = data.range.pressureSteps.map(([T, p]) => [T!, p!] as const);
 
 /** Thermal conductivity and its parts, filled by {@link thermalConductivity}. Reuse one instance. */
 export class ConductivityResult {

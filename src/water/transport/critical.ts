@@ -11,9 +11,10 @@
  *
  * @module
  */
-// by name: the bundle carries the coefficients, not the file's provenance text and verification tables
-import { critical as C, reference as REF } from '../../../data/transport/water-viscosity.json';
+import data from '../../../data/transport/water-viscosity.json';
 
+const C = data.critical;
+const REF = data.reference;
 /** Reference temperature of the critical enhancements, T_R = 1.5 T* = 970.644 K (R12-08 Table 3). */
 export const T_REFERENCE = C.TRbar * REF.T;
 /** p* / ρ*, Pa·m³/kg: converts (∂ρ/∂p)_T in kg/(m³·Pa) to ζ = (∂ρ̄/∂p̄)_T̄. */

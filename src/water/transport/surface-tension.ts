@@ -9,14 +9,16 @@
  *
  * @module
  */
-// by name: the bundle carries the coefficients, not the file's provenance text and verification tables
-import { B, b as SMALL_B, mu as EXPONENT, Tc, Tmin } from '../../../data/transport/water-surface-tension.json';
+import data from '../../../data/transport/water-surface-tension.json';
 import { Status, type StatusCode } from '../../core/status.js';
 
+const B = data.B;
+const SMALL_B = data.b;
+const EXPONENT = data.mu;
 /** Lower limit of IAPWS R1-76(2014): the triple point, 273.16 K. */
-export const SURFACE_TENSION_T_MIN = Tmin;
+export const SURFACE_TENSION_T_MIN = data.Tmin;
 /** Upper limit of IAPWS R1-76(2014): the critical temperature, 647.096 K (σ = 0 there). */
-export const SURFACE_TENSION_T_MAX = Tc;
+export const SURFACE_TENSION_T_MAX = data.Tc;
 
 /** The surface tension, filled by {@link surfaceTension}. Reuse one instance. */
 export class SurfaceTensionResult {

@@ -13,21 +13,22 @@
  *
  * @module
  */
-// by name: the bundle carries the coefficients, not the file's provenance text and verification tables
-import { critical as C, dilute as DILUTE, range as RANGE, reference as REF, residual as RESIDUAL } from '../../../data/transport/water-viscosity.json';
+import data from '../../../data/transport/water-viscosity.json';
 import { Status, type StatusCode } from '../../core/status.js';
 import { steppedPressureLimit } from './pressure-steps.js';
 import { correlationLength, CriticalEnhancementInputs, enhancementInputsValid } from './critical.js';
 
-const H = DILUTE.H;
+const REF = data.reference;
+const H = data.dilute.H;
 const H0 = H[0]!;
 const H1 = H[1]!;
 const H2 = H[2]!;
 const H3 = H[3]!;
-const ROWS = RESIDUAL.Hij.length;
-const COLS = RESIDUAL.Hij[0]!.length;
+const ROWS = data.residual.Hij.length;
+const COLS = data.residual.Hij[0]!.length;
 /** H_ij row by row, i = 0..5 (powers of 1/T̄ − 1), j = 0..6 (powers of ρ̄ − 1). */
-const HIJ = Float64Array.from(RESIDUAL.Hij.flat());
+const HIJ = Float64Array.from(data.residual.Hij.flat());
+const C = data.critical;
 const X_MU = C.xMu;
 const QC = 1 / C.qCInverse;
 const QD = 1 / C.qDInverse;
@@ -36,14 +37,14 @@ const SERIES_LIMIT = C.seriesLimit;
 /** The viscosity unit of the release's reduced values, μ* = 1 µPa·s = 1e-6 Pa·s (Eq. 4). */
 export const MU_REFERENCE = REF.mu;
 /** Lower temperature limit offered here, K: the release starts at the melting line; 273.15 K is IF97's lower limit. */
-export const VISCOSITY_T_MIN = RANGE.Tmin;
+export const VISCOSITY_T_MIN = data.range.Tmin;
 /** Upper temperature limit of IAPWS R12-08, 1173.15 K. */
-export const VISCOSITY_T_MAX = RANGE.Tmax;
+export const VISCOSITY_T_MAX = data.range.Tmax;
 /**
  * Pressure limits of IAPWS R12-08 by temperature, [upper T of the band in K, highest p in Pa]:
  * 1000 MPa to 433.15 K, 500 MPa to 873.15 K, 300 MPa to 1173.15 K (stable fluid states).
  */
-export const VISCOSITY_PRESSURE_LIMITS: readonly (readonly [number, number])[] = RANGE.pressureSteps.map(([T, p]) => [T!, p!] as const);
+export const VISCOSITY_PRESSURE_LIMITS: readonly (readonly [number, number])[] = data.range.pressureSteps.map(([T, p]) => [T!, p!] as const);
 /**
  * The window in which μ̄2 exceeds 1.02 (as recalled from R12-08): outside it, leaving the enhancement out
  * changes μ by less than 2 %.
