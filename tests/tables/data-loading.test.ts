@@ -2,12 +2,13 @@
  * The built package ships the generated steam tables of heatstate/tables/water (data/water-tables/*.json)
  * as JSON text (tsup.config.ts, `jsonAsText`), parsed on first use by src/tables/water.ts. These
  * tests bundle that module with the build's plugin and check that the bundle holds strings, not
- * object literals, and that the tables it builds are exactly those of the sources.
+ * object literals, and that the tables it builds are exactly those of the sources; and, for every
+ * file the build ships as text, that the text parses to exactly the file.
  */
-import { build } from 'esbuild';
+import { build, type OnLoadArgs, type OnLoadResult, type PluginBuild } from 'esbuild';
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
-import { join } from 'node:path';
+import { join, resolve } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
 import { jsonAsText, jsonAsTextPlugin } from '../../tsup.config.js';
@@ -48,5 +49,23 @@ describe('water tables data loading (the build ships the data as JSON text)', ()
     expect(a.superheated().lookup('h', { p: '1 MPa', T: '300 °C' }).value.si).toBe(waterTables.superheated().lookup('h', { p: '1 MPa', T: '300 °C' }).value.si);
     // parsed and built once
     expect(a.superheated()).toBe(a.superheated());
+  });
+});
+
+/** The module text the build's plugin loads for a data file (its onLoad callback, called directly). */
+function pluginModule(path: string): string {
+  let load: ((args: OnLoadArgs) => OnLoadResult) | undefined;
+  const fake = { onResolve: () => undefined, onLoad: (_: unknown, cb: typeof load) => void (load = cb) } as unknown as PluginBuild;
+  void jsonAsTextPlugin(root).setup(fake);
+  return load!({ path: resolve(root, path), namespace: 'heatstate-json-text', suffix: '', pluginData: undefined, with: {} }).contents as string;
+}
+
+describe('data shipped as JSON text', () => {
+  it.each(Object.keys(jsonAsText))('%s: the text the build ships parses to exactly the file (deep-equal)', (file) => {
+    const m = /^export default ("(?:[^"\\]|\\.)*");\n$/s.exec(pluginModule(file));
+    expect(m, 'a module whose only export is a string literal').not.toBeNull();
+    const text = JSON.parse(m![1]!) as unknown;
+    expect(typeof text).toBe('string');
+    expect(JSON.parse(text as string)).toStrictEqual(readJson(file));
   });
 });
