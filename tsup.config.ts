@@ -65,13 +65,22 @@ function emitDeclarations(): Record<string, string> {
 /**
  * Data files the build ships as JSON text, each with the one module allowed to import it (paths from
  * the repository root). That module's default import is then a string, which it parses with
- * `JSON.parse` on first use (src/incompressible/data-files.ts): V8 only scans a string at import,
- * where a large object literal is compiled and built on every start. Any other importer stops the
- * build (it would get text where it expects an object).
+ * `JSON.parse` on first use (src/incompressible/data-files.ts, src/tables/water.ts): V8 only scans
+ * a string at import, where a large object literal is compiled and built on every start. Any other
+ * importer stops the build (it would get text where it expects an object).
  */
 export const jsonAsText: Readonly<Record<string, string>> = {
   'data/incompressible.json': 'src/incompressible/data-files.ts',
   'data/incompressible/brines.json': 'src/incompressible/data-files.ts',
+  // the generated steam tables of heatstate/tables/water: about 180 kB of number arrays
+  'data/water-tables/saturation-by-T-si.json': 'src/tables/water.ts',
+  'data/water-tables/saturation-by-T-us.json': 'src/tables/water.ts',
+  'data/water-tables/saturation-by-p-si.json': 'src/tables/water.ts',
+  'data/water-tables/saturation-by-p-us.json': 'src/tables/water.ts',
+  'data/water-tables/superheated-vapor-si.json': 'src/tables/water.ts',
+  'data/water-tables/superheated-vapor-us.json': 'src/tables/water.ts',
+  'data/water-tables/compressed-liquid-si.json': 'src/tables/water.ts',
+  'data/water-tables/compressed-liquid-us.json': 'src/tables/water.ts',
 };
 
 /** The esbuild plugin that applies {@link jsonAsText}: the file's JSON, re-serialised without spaces, as a string export. */

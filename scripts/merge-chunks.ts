@@ -86,14 +86,16 @@ export function planMerges(files: ReadonlyMap<string, FileNode>, entries: readon
   const alive = (): number[] => members.map((m, i) => (m.length > 0 ? i : -1)).filter((i) => i >= 0);
   const namesOf = (g: number): string[] => members[g]!.flatMap((f) => files.get(f)!.exports ?? []);
   const sizeOf = (g: number): number => members[g]!.reduce((s, f) => s + files.get(f)!.size, 0);
-  const edgesOf = (g: number, assign: (f: string) => number): Set<number> => {
+  const edgesOf = (g: number, fs: readonly string[], assign: (f: string) => number): Set<number> => {
     const out = new Set<number>();
-    for (const f of members[g]!) for (const d of files.get(f)!.deps) if (assign(d) !== g) out.add(assign(d));
+    for (const f of fs) for (const d of files.get(f)!.deps) if (assign(d) !== g) out.add(assign(d));
     return out;
   };
   // reach of each entry (groups it loads) and whether the group graph is acyclic, under an assignment
-  const evaluate = (assign: (f: string) => number, groups: number[]): { reach: Map<string, Set<number>>; acyclic: boolean } => {
-    const edges = new Map(groups.map((g) => [g, edgesOf(g, assign)]));
+  // whose groups hold the files `membersOf` gives (a candidate merge: a group holds its partner's
+  // files too, so that the partner's imports count for every entry that loads the merged file)
+  const evaluate = (assign: (f: string) => number, groups: number[], membersOf: (g: number) => readonly string[] = (g) => members[g]!): { reach: Map<string, Set<number>>; acyclic: boolean } => {
+    const edges = new Map(groups.map((g) => [g, edgesOf(g, membersOf(g), assign)]));
     const reach = new Map<string, Set<number>>();
     for (const e of entries) {
       const seen = new Set<number>();
@@ -149,6 +151,7 @@ export function planMerges(files: ReadonlyMap<string, FileNode>, entries: readon
         const { reach, acyclic } = evaluate(
           assign,
           groups.filter((g) => g !== b),
+          (g) => (g === a ? [...members[a]!, ...members[b]!] : members[g]!),
         );
         if (!acyclic) continue;
         const size = (g: number): number => (g === a ? sizeOf(a) + sizeOf(b) : sizeOf(g));

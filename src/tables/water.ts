@@ -4,6 +4,12 @@
  * in it (`data.interpolationError`). A separate entry, so that only callers who want the tables load
  * their data.
  *
+ * In the built package (tsup.config.ts, `jsonAsText`) the eight data imports below are JSON text,
+ * parsed by `JSON.parse` when a table is first asked for: V8 only scans a string at import, where
+ * these 180 kB of number arrays as object literals were compiled and built on every start. Run from
+ * the sources (vitest, tsx) the imports are the parsed objects already. Only this module may import
+ * these files (the build refuses any other importer).
+ *
  * @packageDocumentation
  */
 import satTSi from '../../data/water-tables/saturation-by-T-si.json';
@@ -23,15 +29,20 @@ export type SaturationColumn = 'T' | 'p' | 'vf' | 'vg' | 'uf' | 'ufg' | 'ug' | '
 /** Columns of the grid tables. */
 export type GridColumn = 'v' | 'u' | 'h' | 's';
 
+/** The value of a data import: parsed from its text in the build, the object itself from the sources. */
+function parsed(imported: unknown): unknown {
+  return typeof imported === 'string' ? JSON.parse(imported) : imported;
+}
+
 const cache = new Map<string, PropertyTable | PropertyGrid>();
 function table(id: string, data: unknown): PropertyTable<SaturationColumn> {
   let t = cache.get(id);
-  if (!t) cache.set(id, (t = new PropertyTable(data as TableData)));
+  if (!t) cache.set(id, (t = new PropertyTable(parsed(data) as TableData)));
   return t as PropertyTable<SaturationColumn>;
 }
 function grid(id: string, data: unknown): PropertyGrid<GridColumn, 'T', 'p'> {
   let g = cache.get(id);
-  if (!g) cache.set(id, (g = new PropertyGrid(data as GridData)));
+  if (!g) cache.set(id, (g = new PropertyGrid(parsed(data) as GridData)));
   return g as PropertyGrid<GridColumn, 'T', 'p'>;
 }
 
