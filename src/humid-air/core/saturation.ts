@@ -88,10 +88,10 @@ function newtonFrost(c: number, u: number, steps: number): number {
 }
 
 /**
- * A start table for the frost point, computed once from Eq. 6 itself (no new data): u = Tt/T at
- * equally spaced c = ln(p/pt) from 150 K to 273.15 K, with du/dc = 1/g'(u), for cubic Hermite
- * interpolation. The start is then within 3e-10 of the root in u (measured), and one Newton step
- * reaches double precision.
+ * A start table for the frost point, computed from Eq. 6 itself (no new data) on the first frost
+ * point asked for, not at import (48 Newton solves): u = Tt/T at equally spaced c = ln(p/pt) from
+ * 150 K to 273.15 K, with du/dc = 1/g'(u), for cubic Hermite interpolation. The start is then within
+ * 3e-10 of the root in u (measured), and one Newton step reaches double precision.
  */
 const FROST_NODES = 48;
 const FROST_C_LO = A1 * (TT / 150) ** C1 + A2 * (TT / 150) ** C2 + A3 * (TT / 150) ** C3;
@@ -99,12 +99,17 @@ const FROST_C_HI = Math.log(P_ICE_AT_WATER) - LN_PT;
 const FROST_H = (FROST_C_HI - FROST_C_LO) / FROST_NODES;
 const FROST_U = new Float64Array(FROST_NODES + 1);
 const FROST_SLOPE = new Float64Array(FROST_NODES + 1);
-for (let k = 0; k <= FROST_NODES; k++) {
-  const c = FROST_C_LO + k * FROST_H;
-  const u = newtonFrost(c, 1 + c / SLOPE_AT_TRIPLE, 8);
-  const L = Math.log(u);
-  FROST_U[k] = u;
-  FROST_SLOPE[k] = u / (C1 * A1 * Math.exp(C1 * L) + C2 * A2 * Math.exp(C2 * L) + C3 * A3 * Math.exp(C3 * L));
+let frostTableBuilt = false;
+
+function buildFrostTable(): void {
+  for (let k = 0; k <= FROST_NODES; k++) {
+    const c = FROST_C_LO + k * FROST_H;
+    const u = newtonFrost(c, 1 + c / SLOPE_AT_TRIPLE, 8);
+    const L = Math.log(u);
+    FROST_U[k] = u;
+    FROST_SLOPE[k] = u / (C1 * A1 * Math.exp(C1 * L) + C2 * A2 * Math.exp(C2 * L) + C3 * A3 * Math.exp(C3 * L));
+  }
+  frostTableBuilt = true;
 }
 
 /**
@@ -116,6 +121,7 @@ function frostPoint(pw: number): number {
   const c = Math.log(pw) - LN_PT;
   let u: number;
   if (c >= FROST_C_LO && c <= FROST_C_HI) {
+    if (!frostTableBuilt) buildFrostTable();
     const x = (c - FROST_C_LO) / FROST_H;
     let k = Math.floor(x);
     if (k >= FROST_NODES) k = FROST_NODES - 1;
