@@ -126,20 +126,13 @@ export function renderFactorsModule(): string {
   }
   lines.push('];');
   lines.push('');
-  // the compound spellings once each, in the order forEachCompoundSpelling visits them (the registry
-  // reads COMPOUND_FACTOR_LIST in that order and derives the keys itself; COMPOUND_FACTORS, the same
-  // numbers by key, is for readers and tests and is left out of bundles, since nothing in src/ imports it)
+  // the compound spellings once each, by canonical key (the registry looks a compound unit's key up here)
   const compound: [string, number][] = [];
   forEachCompoundSpelling(UNIT_SPELLINGS, data.gauge.units, lookup, (key, terms) => compound.push([key, nearestDouble(exactFactorOf(terms, data))]));
   lines.push('/** Compound units by canonical key (sorted prefixed symbols with exponents), factor to SI. */');
   lines.push('export const COMPOUND_FACTORS: Readonly<Record<string, number>> = {');
   for (const [key, f] of compound) lines.push(`  ${JSON.stringify(key)}: ${String(f)},`);
   lines.push('};');
-  lines.push('');
-  lines.push('/** The factors of {@link COMPOUND_FACTORS} in the order of `forEachCompoundSpelling` (src/units/atoms.ts), without their keys. */');
-  lines.push('export const COMPOUND_FACTOR_LIST: readonly number[] = [');
-  for (const [key, f] of compound) lines.push(`  ${String(f)}, // ${key === '' ? '(empty key: a ratio of equal dimensions, such as kg/kg)' : key}`);
-  lines.push('];');
   lines.push('');
   lines.push('/** Offsets of the relative temperature scales, in their own degrees: T/K = t/°C + 273.15; T/°R = t/°F + 459.67 (exact). */');
   lines.push('export const TEMPERATURE_OFFSETS: Readonly<Record<string, number>> = {');

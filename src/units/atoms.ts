@@ -90,8 +90,8 @@ export function combinedDims(terms: readonly ResolvedTerm[]): DimensionVector {
  * (dimension by dimension, as listed) that is not `1`, a difference (`Δ…`, `delta …`), a gauge unit or
  * a single unprefixed atom, once per canonical key. `each` receives the key and the resolved terms.
  *
- * The factor generator stores the exact factors in this order (`COMPOUND_FACTOR_LIST`); the registry
- * pairs them with their keys on first use, so the keys themselves do not ship in a bundle.
+ * The factor generator (scripts/generate-factors.ts) writes their exact factors by key
+ * (`COMPOUND_FACTORS`), which the registry looks up.
  */
 export function forEachCompoundSpelling(
   spellings: Readonly<Record<string, readonly string[]>>,
