@@ -10,7 +10,9 @@
  * (generated from data/if97 by scripts/generate-c-reference.ts) is built with -O2 and timed against
  * `waterBatch` over the same region 1 states, alternating runs, process CPU time; the C results are
  * checked bit for bit against `region1`. Without a compiler it says "no compiler" and goes on.
- * Last, cold start: the import of each built entry, as the difference to a bare `node` start.
+ * Last, cold start: the import of each built entry, as the difference to a bare `node` start, and the
+ * import with a first call (unit text read, data built on first use) of the water, humid-air and
+ * ideal-gas entries.
  *
  * Modes: the default (figures for bench/results.json), `--quick` (shorter, still figures worth a
  * glance) and `--smoke` (tests/bench.test.ts: proves that every case, the native comparison and
@@ -231,11 +233,12 @@ function processMs(args: string[]): number {
  * Cold start of a built entry: a fresh Node process that imports it, minus a bare `node` start,
  * alternating the two, median of the differences over `runs` pairs (≥ 10 for figures; one in smoke mode).
  */
-function coldStart(entry: string, runs: number, file?: URL): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
+function coldStart(entry: string, runs: number, file?: URL, call?: string): { entry: string; medianMs: number; bareMs: number; runs: number[] } | { entry: string; skipped: string } {
   const url = file ?? new URL(`../dist/${entry}.js`, import.meta.url);
   if (!existsSync(url)) return { entry, skipped: 'dist/ not built: run `npm run build` (npm run bench does)' };
   const bare = ['--input-type=module', '-e', ''];
-  const load = ['--input-type=module', '-e', `await import(${JSON.stringify(url.href)});`];
+  // with `call`: the import, then that first call on the module's exports (`m`)
+  const load = ['--input-type=module', '-e', call === undefined ? `await import(${JSON.stringify(url.href)});` : `const m = await import(${JSON.stringify(url.href)}); ${call};`];
   const diffs: number[] = [];
   const bares: number[] = [];
   if (!smoke) processMs(load); // the file system cache
@@ -258,6 +261,14 @@ writeFileSync(emptyModule, 'export {};\n');
 const floor = coldStart('empty ES module', plan.coldRuns, emptyModule);
 rmSync(emptyDir, { recursive: true, force: true });
 const floorMs = 'medianMs' in floor ? floor.medianMs : NaN;
+// what a serverless function's first request pays: the import and the first call, with its unit text
+// read and its data built on first use
+const FIRST_CALLS: Record<string, string> = {
+  'water/index': "m.water.state({ p: '1 MPa', T: '500 K' }).h.in('kJ/kg')",
+  'humid-air/index': "m.humidAir.state({ T: '30 °C', RH: 0.5 }).Tdp.in('°C')",
+  'ideal-gas/index': "m.idealGas('N2').cp('300 K').in('kJ/(kg·K)')",
+};
+const firstCalls = Object.entries(FIRST_CALLS).map(([entry, call]) => ({ call, ...coldStart(entry, plan.coldRuns, undefined, call) }));
 console.log('');
 console.log(`cold start: import of an empty ES module, median ${floorMs.toFixed(1)} ms over a bare node start (the floor of every figure below)`);
 for (const c of cold) {
@@ -271,10 +282,16 @@ for (const c of cold) {
   }
 }
 
+for (const c of firstCalls) {
+  const name = `heatstate/${c.entry.replace('/index', '')}`;
+  if ('medianMs' in c) console.log(`first call: import of ${name} and ${c.call}, median ${c.medianMs.toFixed(1)} ms over a bare node start, ${(c.medianMs - floorMs).toFixed(1)} ms over the empty module, ${c.runs.length} runs`);
+  else console.log(`first call of ${name}: skipped (${c.skipped})`);
+}
+
 const cpu = os.cpus()[0]?.model ?? 'unknown';
 const outPath = process.env.HEATSTATE_BENCH_OUT ?? fileURLToPath(new URL('./results.json', import.meta.url));
 writeFileSync(
   outPath,
-  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, coldStartFloorMs: floorMs, rows }, null, 2)}\n`,
+  `${JSON.stringify({ date: new Date().toISOString(), node: process.version, platform: `${os.platform()} ${os.arch()}`, cpu, cores: os.cpus().length, quick, smoke, cases: cases.map((c) => c.name), native, coldStart: cold, coldStartFloorMs: floorMs, firstCalls, rows }, null, 2)}\n`,
 );
 console.log(`\nwrote ${outPath} (${cpu}, ${os.cpus().length} cores, Node ${process.version})`);

@@ -34,6 +34,10 @@ describe('bench/ (figures only: nothing here asserts a time)', () => {
     expect(results.coldStart.map((c) => c.entry)).toEqual(['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index']);
     // one pair of processes per entry: the difference is a number (it may be noise), never a skip
     for (const c of results.coldStart) expect(Number.isFinite(c.medianMs), `${c.entry}: ${c.skipped ?? ''}`).toBe(true);
+    // the first calls (import and one facade call) of three entries, each a number
+    const firstCalls = (results as unknown as { firstCalls: { entry: string; medianMs?: number; skipped?: string }[] }).firstCalls;
+    expect(firstCalls.map((c) => c.entry)).toEqual(['water/index', 'humid-air/index', 'ideal-gas/index']);
+    for (const c of firstCalls) expect(Number.isFinite(c.medianMs), `${c.entry}: ${c.skipped ?? ''}`).toBe(true);
     // the floor the entries are read against: an empty ES module, measured the same way
     expect(Number.isFinite((results as unknown as { coldStartFloorMs: number }).coldStartFloorMs)).toBe(true);
   }, 300_000);
