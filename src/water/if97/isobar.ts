@@ -272,6 +272,11 @@ export function stateOnIsobar(p: number, target: number, by: Matched, out: Water
     return gasSide(p, target, by, TB, 5, out, ctx);
   }
   const TB = b23Temperature(p);
+  // above the critical pressure there is no dome: an answer of the region 3 fast path strictly between
+  // 623.15 K and T_B23(p) is the flash's answer (h and s rise with T along an isobar, so the target
+  // lies between the region 3 values at the two boundaries), and the same one the path below finds
+  // after computing those two boundary states (two density solves at (p, T)), which it skips
+  if (newtonRegion3(p, target, by, T_13 + 2e-9, TB - 2e-9, 0, out, ctx) === Status.ok) return labelSide(out, 0);
   if (!region3At(p, TB, 0, ctx.scratchB, ctx)) return Status.noConvergence;
   if (target <= valueOf(ctx.scratchB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out, ctx);
   return gasSide(p, target, by, TB, 5, out, ctx);
