@@ -44,8 +44,8 @@ const ptCodes = new Uint8Array(BLOCK);
  * The fused loop for (p, T), block by block: the elements in region 1 by bounds alone (the test of
  * `certainlyRegion1`) get their rows from the generated `region1Rows`, whose loop holds the term sums
  * itself: the sums kernel is too large for the engine to inline, and calling it per element with its
- * output array, then the state object in between, cost about a fifth of a batch state (105 → 84 ns in
- * a same-run comparison). The others go through `stateFromPT`. (p, T) never gives a two-phase state.
+ * output array, then the state object in between, cost about a fifth of a batch state (92–104 → 80–82
+ * ns in same-run comparisons). The others go through `stateFromPT`. (p, T) never gives a two-phase state.
  * Then the requested columns are filled from the rows.
  */
 function ptLoop(ctx: SolverContext, a: Float64Array, b: Float64Array, fields: Int32Array, wantK: boolean, columns: readonly Float64Array[], status: Uint8Array): void {
