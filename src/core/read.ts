@@ -191,7 +191,9 @@ export function readFlag(input: unknown, parameter: string): boolean {
 export function readOptions<T extends object>(input: unknown, parameter: string, known: readonly string[]): Partial<T> {
   if (input === undefined) return {};
   if (typeof input !== 'object' || input === null || Array.isArray(input)) {
-    throw new InvalidInputError('input.invalid', parameter, `${parameter} must be an object; got ${describeValue(input)}`);
+    // an index in the options' place is most often an array's map or forEach calling the function
+    const hint = Number.isInteger(input) ? ' (map and forEach pass the element index as the second argument: write list.map((x) => f(x)))' : '';
+    throw new InvalidInputError('input.invalid', parameter, `${parameter} must be an object; got ${describeValue(input)}${hint}`);
   }
   for (const key of Object.keys(input)) {
     if (!known.includes(key)) throw new InvalidInputError('input.invalid', `${parameter}.${key}`, `unknown option "${key}"; ${parameter} takes ${known.map((k) => `"${k}"`).join(', ')}`);

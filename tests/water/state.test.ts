@@ -177,6 +177,14 @@ describe('property-based round trips in every region (fast-check)', () => {
 });
 
 describe('bad input', () => {
+  it('an index where the options go (pairs.map(water.state)) says why: map passes the index (common practice)', () => {
+    // TypeScript refuses the call (an index is not options); JavaScript callers meet it at run time
+    const pairs: unknown[] = [{ p: '1 MPa', T: '500 K' }];
+    expect(() => pairs.map(water.state as (pair: unknown, index: number) => unknown)).toThrow(
+      'options must be an object; got 0 (map and forEach pass the element index as the second argument: write list.map((x) => f(x)))',
+    );
+    expect(() => water.state({ p: '1 MPa', T: '500 K' }, 'fast' as never)).toThrow(/^options must be an object; got "fast"$/);
+  });
   it('outside IF97 the error names the range', () => {
     try {
       water.state({ T: '2400 K', p: '1 MPa' });
