@@ -37,12 +37,12 @@ function parsed(imported: unknown): unknown {
 const cache = new Map<string, PropertyTable | PropertyGrid>();
 function table(id: string, data: unknown): PropertyTable<SaturationColumn> {
   let t = cache.get(id);
-  if (!t) cache.set(id, (t = new PropertyTable(parsed(data) as TableData)));
+  if (!t) cache.set(id, (t = new PropertyTable(parsed(data) as TableData, true)));
   return t as PropertyTable<SaturationColumn>;
 }
 function grid(id: string, data: unknown): PropertyGrid<GridColumn, 'T', 'p'> {
   let g = cache.get(id);
-  if (!g) cache.set(id, (g = new PropertyGrid(parsed(data) as GridData)));
+  if (!g) cache.set(id, (g = new PropertyGrid(parsed(data) as GridData, true)));
   return g as PropertyGrid<GridColumn, 'T', 'p'>;
 }
 
