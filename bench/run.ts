@@ -252,7 +252,7 @@ function coldStart(entry: string, runs: number, file?: URL, call?: string): { en
 }
 
 // targets: 15 ms for the root entry, 8 ms for each subpath (the difference to a bare node start)
-const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index'].map((e) => coldStart(e, plan.coldRuns));
+const cold = ['index', 'units/index', 'ideal-gas/index', 'water/index', 'tables/index', 'tables/water/index'].map((e) => coldStart(e, plan.coldRuns));
 // the floor: an empty ES module measured the same way (Node's own work to load any module after a
 // bare start, which no library can remove), printed beside the entries so they can be read against it
 const emptyDir = mkdtempSync(join(os.tmpdir(), 'heatstate-cold-'));
