@@ -3,7 +3,8 @@
  *
  * - src/water/if97/kernels.generated.ts: the IF97 term sums (basic equations, R7-97 backward
  *   equations, SR2-01 p(h, s), SR3-03 region 3 T and v, SR4-04 h-s equations) Σ nᵢ·xᴵⁱ·yᴶⁱ (and
- *   their first and second derivatives) from data/if97;
+ *   their first and second derivatives) from data/if97; the τ-derivatives alone of regions 1 and 2
+ *   (for the enthalpy); and region 1's batch block `region1Rows` (the sums and relations in a loop);
  * - src/fluids/kernels.generated.ts: for every loadable fluid in data/fluids, the residual
  *   Helmholtz energy αʳ(δ, τ) of a reference equation of state with αʳ_δ, αʳ_δδ, αʳ_τ, αʳ_ττ,
  *   αʳ_δτ in one pass (term shapes n δᵈ τᵗ, n δᵈ τᵗ exp(−δᶜ), Gaussian bells
@@ -12,7 +13,8 @@
  *
  * Powers are built by short multiplication chains (each needed power from two already built),
  * each term's xᴵ·yᴶ is formed once, and the derivative sums carry the constants n·I, n·I·(I−1), …
- * inline; they are divided by x, x², y, y², x·y at the end. No Math.pow, no arrays, no loops.
+ * inline; they are divided by x, x², y, y², x·y at the end. No Math.pow, no arrays, and no loops
+ * except the element loop of `region1Rows`.
  *
  * Run: `npm run kernels`. tests/water/kernels-generated.test.ts fails if the committed module
  * differs from this script's output, and checks every kernel against a plain loop evaluation.
@@ -139,10 +141,11 @@ function tauSumFunction(fn: string, doc: string, t: Terms): string {
 
 /**
  * The region 1 rows of a batch block: for each element i of [start, end) in region 1 by bounds alone
- * (p ≥ 16.6 MPa, T ≤ 623.15 K, the test of `certainlyRegion1`), marked 1 in `mask`, the twelve fields T, p, v, ρ, u, h, s, cp, cv, w, k (cp/cv when `wantK`, else NaN), x (NaN) at
- * rows[12·(i − start) …]. The term sums are {@link sumsFunction}'s, written inside the loop (a kernel
- * this size is not inlined by the JavaScript engine; the call per element with its output array and
- * the state object in between took about a fifth of a batch state), followed by the relations of IAPWS R7-97(2012) Table 3 in
+ * (p ≥ 16.6 MPa, T ≤ 623.15 K, the test of `certainlyRegion1`), mask 1 and the twelve fields T, p, v,
+ * ρ, u, h, s, cp, cv, w, k (cp/cv when `wantK`, else NaN) and x (NaN) at rows[12·(i − start) …].
+ * The term sums are {@link sumsFunction}'s, written inside the loop: the JavaScript engine does not
+ * inline a kernel this size, and the call per element with its output array and the state object in
+ * between took about a fifth of a batch state. The relations of IAPWS R7-97(2012) Table 3 follow in
  * the order and form of src/water/if97/region1.ts, so every value is bit for bit `region1`'s
  * (tests/numeric/kernel-oracle.test.ts, tests/batch/batch.test.ts).
  */
@@ -169,7 +172,7 @@ function region1RowsFunction(t: Terms, pStar: number, TStar: number): string {
   lines.push('    const x = 7.1 - pi;');
   lines.push('    const y = tau - 1.222;');
   const body = sumsFunction('region1Sums', '', t).split('\n');
-  for (const l of body.slice(2, -1)) lines.push(`  ${l.replace(/^  out\[(\d)\] =/, '  const g$1 =').replace(/^    /, '    ')}`);
+  for (const l of body.slice(2, -1)) lines.push(`  ${l.replace(/^  out\[(\d)\] =/, '  const g$1 =')}`);
   lines.push('    const gamma = g0;');
   lines.push('    const gPi = -g1;');
   lines.push('    const gPiPi = g2;');
