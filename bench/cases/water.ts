@@ -6,7 +6,7 @@
  */
 import { BATCH_STATES, consume, type BenchCase } from '../kit.js';
 import { region1BenchInputs } from '../../scripts/generate-c-reference.js';
-import { b23Pressure, stateFromHS, stateFromPH, stateFromPS, stateFromPT, stateFromPX, WaterState } from '../../src/water/if97/index.js';
+import { b23Pressure, b23Temperature, saturationTemperature, stateFromHS, stateFromPH, stateFromPS, stateFromPT, stateFromPX, WaterState } from '../../src/water/if97/index.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { waterBatch } from '../../src/water/index.js';
 
@@ -45,6 +45,20 @@ const region3b = (() => {
     const t = 650 + ((i * 104729) % 997) / 997 * 50;
     const q = b23Pressure(t) + 0.2e6 + ((i * 7919) % 991) / 991 * 12e6;
     if (stateFromPT(q, t, st) === 0 && st.region === 3 && st.s > 4.412e3) {
+      p.push(q);
+      T.push(t);
+    }
+  }
+  return states(N, (i) => p[i]!, (i) => T[i]!);
+})();
+// region 3 below the critical pressure: 16.6 … 22 MPa, liquid and vapour sides, 0.05 K clear of T_s(p)
+const region3Subcritical = (() => {
+  const p: number[] = [];
+  const T: number[] = [];
+  for (let i = 0; p.length < N; i++) {
+    const q = 16.6e6 + ((i * 7919) % 991) / 991 * 5.4e6;
+    const t = 623.2 + ((i * 104729) % 997) / 997 * (b23Temperature(q) - 623.3);
+    if (stateFromPT(q, t, st) === 0 && st.region === 3 && Math.abs(t - saturationTemperature(q)) > 0.05) {
       p.push(q);
       T.push(t);
     }
@@ -100,6 +114,7 @@ export const cases: BenchCase[] = [
   },
   { name: 'water: (p, T) in region 3, core', fn: loop(N, (i) => consume(stateFromPT(region3.p[i]!, region3.T[i]!, st, ctx) + st.h)), perCall: N, targetNs: 1000 },
   { name: 'water: (p, h) in region 3, core', fn: loop(N, (i) => consume(stateFromPH(region3.p[i]!, region3.h[i]!, st, ctx) + st.T)), perCall: N, targetNs: 3000 },
+  { name: 'water: (p, h) in region 3 below p_c (16.6 to 22 MPa), core', fn: loop(N, (i) => consume(stateFromPH(region3Subcritical.p[i]!, region3Subcritical.h[i]!, st, ctx) + st.T)), perCall: N, targetNs: 3000 },
   { name: 'water: (p, s) in region 3, core', fn: loop(N, (i) => consume(stateFromPS(region3.p[i]!, region3.s[i]!, st, ctx) + st.T)), perCall: N, targetNs: 3000 },
   { name: 'water: (h, s) in region 1, core', fn: loop(N, (i) => consume(stateFromHS(region1.h[i]!, region1.s[i]!, st, ctx) + st.p)), perCall: N, targetNs: 1500 },
   { name: 'water: (h, s) in region 2, core', fn: loop(N, (i) => consume(stateFromHS(region2.h[i]!, region2.s[i]!, st, ctx) + st.p)), perCall: N, targetNs: 1500 },
