@@ -95,24 +95,44 @@ function sum(coefficients: number[], terms: string[]): string {
   return parts.length === 0 ? '0' : parts.join(' +\n    ').replace(/\+ -/g, '- ');
 }
 
+/**
+ * The statements before a term sum: 1/x (when `ix`), 1/y, the power chains of x and y for every
+ * exponent of `t` (the same chains whichever terms are kept, so that a kernel of some sums gives the
+ * full kernel's values bit for bit), and tᵢ = xᴵⁱ·yᴶⁱ for the terms `keep` accepts.
+ */
+function sumPrelude(t: Terms, ix: boolean, keep: (i: number) => boolean = () => true): string[] {
+  const lines: string[] = [];
+  if (ix) lines.push('  const ix = 1 / x;');
+  lines.push('  const iy = 1 / y;');
+  for (const l of powerChain('x', t.I)) lines.push(`  ${l}`);
+  for (const l of powerChain('y', t.J)) lines.push(`  ${l}`);
+  t.n.forEach((_, i) => {
+    if (keep(i)) lines.push(`  const t${i} = ${product(t.I[i]!, t.J[i]!)};`);
+  });
+  return lines;
+}
+
+/** The six sums S, Sx, Sxx, Sy, Syy, Sxy over the prelude's terms, as expressions (each on its own lines). */
+function sumExpressions(t: Terms): string[] {
+  const terms = t.n.map((_, i) => `t${i}`);
+  const k = (f: (I: number, J: number, n: number) => number) => t.n.map((n, i) => f(t.I[i]!, t.J[i]!, n));
+  return [
+    `${sum(k((_I, _J, n) => n), terms)}`,
+    `(${sum(k((I, _J, n) => n * I), terms)}) * ix`,
+    `(${sum(k((I, _J, n) => n * I * (I - 1)), terms)}) * ix * ix`,
+    `(${sum(k((_I, J, n) => n * J), terms)}) * iy`,
+    `(${sum(k((_I, J, n) => n * J * (J - 1)), terms)}) * iy * iy`,
+    `(${sum(k((I, J, n) => n * I * J), terms)}) * ix * iy`,
+  ];
+}
+
 /** A function filling out[0..5] with S, Sx, Sxx, Sy, Syy, Sxy (also the body of the C reference, scripts/generate-c-reference.ts). */
 export function sumsFunction(fn: string, doc: string, t: Terms): string {
   const lines: string[] = [];
   lines.push(`/** ${doc} */`);
   lines.push(`export function ${fn}(x: number, y: number, out: Float64Array): void {`);
-  lines.push('  const ix = 1 / x;');
-  lines.push('  const iy = 1 / y;');
-  for (const l of powerChain('x', t.I)) lines.push(`  ${l}`);
-  for (const l of powerChain('y', t.J)) lines.push(`  ${l}`);
-  const terms = t.n.map((_, i) => `t${i}`);
-  t.n.forEach((_, i) => lines.push(`  const t${i} = ${product(t.I[i]!, t.J[i]!)};`));
-  const k = (f: (I: number, J: number, n: number) => number) => t.n.map((n, i) => f(t.I[i]!, t.J[i]!, n));
-  lines.push(`  out[0] =\n    ${sum(k((_I, _J, n) => n), terms)};`);
-  lines.push(`  out[1] =\n    (${sum(k((I, _J, n) => n * I), terms)}) * ix;`);
-  lines.push(`  out[2] =\n    (${sum(k((I, _J, n) => n * I * (I - 1)), terms)}) * ix * ix;`);
-  lines.push(`  out[3] =\n    (${sum(k((_I, J, n) => n * J), terms)}) * iy;`);
-  lines.push(`  out[4] =\n    (${sum(k((_I, J, n) => n * J * (J - 1)), terms)}) * iy * iy;`);
-  lines.push(`  out[5] =\n    (${sum(k((I, J, n) => n * I * J), terms)}) * ix * iy;`);
+  lines.push(...sumPrelude(t, true));
+  sumExpressions(t).forEach((e, k) => lines.push(`  out[${k}] =\n    ${e};`));
   lines.push('}');
   return lines.join('\n');
 }
@@ -126,15 +146,9 @@ function tauSumFunction(fn: string, doc: string, t: Terms): string {
   const lines: string[] = [];
   lines.push(`/** ${doc} */`);
   lines.push(`export function ${fn}(x: number, y: number): number {`);
-  if (t.I.some((i) => i < 0)) lines.push('  const ix = 1 / x;');
-  lines.push('  const iy = 1 / y;');
-  for (const l of powerChain('x', t.I)) lines.push(`  ${l}`);
-  for (const l of powerChain('y', t.J)) lines.push(`  ${l}`);
-  const terms = t.n.map((_, i) => `t${i}`);
-  t.n.forEach((n, i) => {
-    if (n * t.J[i]! !== 0) lines.push(`  const t${i} = ${product(t.I[i]!, t.J[i]!)};`);
-  });
-  lines.push(`  return (\n    ${sum(t.n.map((n, i) => n * t.J[i]!), terms)}\n  ) * iy;`);
+  const coefficients = t.n.map((n, i) => n * t.J[i]!);
+  lines.push(...sumPrelude(t, t.I.some((i) => i < 0), (i) => coefficients[i] !== 0));
+  lines.push(`  return (\n    ${sum(coefficients, t.n.map((_, i) => `t${i}`))}\n  ) * iy;`);
   lines.push('}');
   return lines.join('\n');
 }
@@ -171,8 +185,9 @@ function region1RowsFunction(t: Terms, pStar: number, TStar: number): string {
   lines.push(`    const tau = ${String(TStar)} / T;`);
   lines.push('    const x = 7.1 - pi;');
   lines.push('    const y = tau - 1.222;');
-  const body = sumsFunction('region1Sums', '', t).split('\n');
-  for (const l of body.slice(2, -1)) lines.push(`  ${l.replace(/^  out\[(\d)\] =/, '  const g$1 =')}`);
+  // the statements and sums of region1Sums, indented into the loop
+  for (const l of sumPrelude(t, true)) lines.push(`  ${l}`);
+  sumExpressions(t).forEach((e, k) => lines.push(`    const g${k} =\n      ${e.replace(/\n/g, '\n  ')};`));
   lines.push('    const gamma = g0;');
   lines.push('    const gPi = -g1;');
   lines.push('    const gPiPi = g2;');

@@ -107,9 +107,6 @@ function newtonRegion3(p: number, target: number, by: Matched, Tlo: number, Thi:
  * the dome the target lies on, from the saturated values) labels the phase.
  */
 function solveRegion3(p: number, target: number, by: Matched, Tlo: number, Thi: number, branch: 0 | 1 | 2, out: WaterState, ctx: SolverContext): StatusCode {
-  // a fast-path answer strictly above 623.15 K puts the target above the region 3 value there (h and s
-  // rise with T along the isobar), so the gap test below would not apply: skip its density solve
-  if (Tlo === T_13 && newtonRegion3(p, target, by, T_13 + 2e-9, Thi, branch, out, ctx) === Status.ok) return labelSide(out, branch);
   if (Tlo === T_13 && region3At(p, Tlo, branch, ctx.scratchB, ctx) && valueOf(ctx.scratchB, by) > target) {
     return polishT(1, p, target, by, T_13, T_MIN, T_13 + 5, out);
   }
@@ -150,8 +147,27 @@ function labelSide(out: WaterState, branch: 0 | 1 | 2): StatusCode {
   return Status.ok;
 }
 
-/** Below this pressure (Pa, 0.1 % under p_c) the subcritical region 3 fast path of {@link stateOnIsobar} is tried. */
+/** Below p_c, {@link region3Inside} is tried up to this pressure (Pa, 0.1 % under p_c), clear of the critical point. */
 const P_SIDES_FAST_MAX = P_CRITICAL * (1 - 1e-3);
+
+/**
+ * The region 3 fast path ({@link newtonRegion3}) when its answer lies strictly inside region 3 at p:
+ * between 623.15 K and T_B23(p) (`TB`), and below p_c also strictly on one side of T_s(p) on that
+ * side's density branch (a stable state). h and s rise with T along the isobar, so the target then
+ * lies between the region 3 values at the edges and on that side of the saturated value: the answer
+ * the general path of {@link stateOnIsobar} reaches after computing those states (density solves),
+ * which this skips. True with `out` filled and labelled; false to take the general path.
+ */
+function region3Inside(p: number, target: number, by: Matched, TB: number, out: WaterState, ctx: SolverContext): boolean {
+  if (p < P_CRITICAL && !(p < P_SIDES_FAST_MAX)) return false;
+  if (newtonRegion3(p, target, by, T_13 + 2e-9, TB - 2e-9, 0, out, ctx) !== Status.ok) return false;
+  if (p >= P_CRITICAL) return true;
+  const Ts = saturationTemperatureOnLine(p);
+  const side = out.T < Ts - 2e-9 && out.rho >= RHO_CRITICAL ? 1 : out.T > Ts + 2e-9 && out.rho < RHO_CRITICAL ? 2 : 0;
+  if (side === 0) return false;
+  labelSide(out, side);
+  return true;
+}
 
 /** Pressures within this distance of p_c (Pa, 1e-5 relative) may need {@link region3ByDensity}. */
 const NEAR_CRITICAL_PRESSURE = 1e-5 * P_CRITICAL;
@@ -263,18 +279,9 @@ export function stateOnIsobar(p: number, target: number, by: Matched, out: Water
   if (belowFloor(target, valueAt(1, p, T_MIN, by, ctx))) return Status.outOfRange;
   const end1 = valueAt(1, p, T_13, by, ctx);
   if (target <= end1) return polishT(1, p, target, by, backwardRegion1(p, target, by), T_MIN, T_13, out);
+  const TB = b23Temperature(p);
+  if (region3Inside(p, target, by, TB, out, ctx)) return Status.ok;
   if (p < P_CRITICAL) {
-    // either side of the dome, away from the critical point: a fast-path answer strictly below T_s(p)
-    // on the liquid branch, or strictly between T_s(p) and T_B23(p) on the vapour branch, is a stable
-    // state whose target lies on that side of the saturated value (h and s rise with T along the
-    // isobar): the answer the path below reaches after computing both saturated phases
-    if (p < P_SIDES_FAST_MAX) {
-      const Tsat = saturationTemperatureOnLine(p);
-      if (newtonRegion3(p, target, by, T_13 + 2e-9, b23Temperature(p) - 2e-9, 0, out, ctx) === Status.ok) {
-        if (out.T < Tsat - 2e-9 && out.rho >= RHO_CRITICAL) return labelSide(out, 1);
-        if (out.T > Tsat + 2e-9 && out.rho < RHO_CRITICAL) return labelSide(out, 2);
-      }
-    }
     const liq = ctx.satLiquid;
     const vap = ctx.satVapor;
     const status = saturationAtP(p, liq, vap, ctx);
@@ -282,21 +289,11 @@ export function stateOnIsobar(p: number, target: number, by: Matched, out: Water
     const Ts = liq.T;
     if (target <= valueOf(liq, by)) return solveRegion3(p, target, by, T_13, Ts, 1, out, ctx);
     if (target < valueOf(vap, by)) return mixPhases((target - valueOf(liq, by)) / (valueOf(vap, by) - valueOf(liq, by)), liq, vap, out);
-    const TB = b23Temperature(p);
-    // a vapour-side fast-path answer strictly below T_B23(p) puts the target below the region 3 value
-    // there: the same answer the division below reaches after a density solve at (p, T_B23)
-    if (newtonRegion3(p, target, by, Ts, TB - 2e-9, 2, out, ctx) === Status.ok) return labelSide(out, 2);
     // region 3 owns T ≤ T_B23(p): divide by its value there (IF97's regions differ slightly on the line)
     if (!region3At(p, TB, 2, ctx.scratchB, ctx)) return Status.noConvergence;
     if (target <= valueOf(ctx.scratchB, by)) return solveRegion3(p, target, by, Ts, TB, 2, out, ctx);
     return gasSide(p, target, by, TB, 5, out, ctx);
   }
-  const TB = b23Temperature(p);
-  // above the critical pressure there is no dome: an answer of the region 3 fast path strictly between
-  // 623.15 K and T_B23(p) is the flash's answer (h and s rise with T along an isobar, so the target
-  // lies between the region 3 values at the two boundaries), and the same one the path below finds
-  // after computing those two boundary states (two density solves at (p, T)), which it skips
-  if (newtonRegion3(p, target, by, T_13 + 2e-9, TB - 2e-9, 0, out, ctx) === Status.ok) return labelSide(out, 0);
   if (!region3At(p, TB, 0, ctx.scratchB, ctx)) return Status.noConvergence;
   if (target <= valueOf(ctx.scratchB, by)) return solveRegion3(p, target, by, T_13, TB, 0, out, ctx);
   return gasSide(p, target, by, TB, 5, out, ctx);
