@@ -140,7 +140,12 @@ describe('humidAirBatch fused loop', () => {
             const fused = humidAirBatch({ [k1]: a, [k2]: b, p } as never, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
             const oracle = generic(pair, a, b, p, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
             expect([...fused.status]).toEqual([...oracle.status]);
-            for (const prop of wanted) for (let i = 0; i < rows.length; i++) expect(Object.is(fused[prop]![i], oracle[prop]![i])).toBe(true);
+            // every element compared, the differing ones listed (one assertion per property, not per element)
+            for (const prop of wanted) {
+              const differ: string[] = [];
+              for (let i = 0; i < rows.length; i++) if (!Object.is(fused[prop]![i], oracle[prop]![i])) differ.push(`${i}: ${fused[prop]![i]} vs ${oracle[prop]![i]}`);
+              expect(differ, prop).toEqual([]);
+            }
           }
         },
       ),
