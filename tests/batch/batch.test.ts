@@ -99,9 +99,60 @@ describe('idealGasBatch', () => {
   it('s without pressures is a malformed call', () => {
     expect(() => idealGasBatch(idealGas('air'), { T: new Float64Array(2) }, ['s'])).toThrow(InvalidInputError);
   });
+  // the fused loop (src/ideal-gas/batch.ts) against the runner's own loop over the same model
+  const gases = [idealGas('N2'), idealGas('CO2', { basis: 'molar' }), idealGas('air'), mixture({ N2: 0.79, O2: 0.21 }), idealGas('H2O', { extrapolate: true })] as ReturnType<typeof idealGas>[];
+  const allProps = ['cp', 'cv', 'k', 'h', 'hSensible', 'u', 's', 'sStandard'] as const;
+  const temperature = fc.oneof(
+    { weight: 12, arbitrary: fc.double({ min: 150, max: 6500, noNaN: true }) },
+    { weight: 1, arbitrary: fc.constantFrom(NaN, Infinity, -Infinity, 0, -1, 5e-324, 1e-300, 1e300, 200, 6000) },
+  );
+  const pressure = fc.oneof({ weight: 12, arbitrary: fc.double({ min: 1, max: 1e8, noNaN: true }) }, { weight: 1, arbitrary: fc.constantFrom(NaN, Infinity, 0, -1e5, 5e-324) });
+  it('the fused loop equals the runner over the per-element core bit for bit: statuses, values, NaN for bad elements (fast-check)', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 0, max: gases.length - 1 }),
+        fc.array(fc.tuple(temperature, pressure), { minLength: 1, maxLength: 600 }),
+        fc.array(fc.constantFrom(...allProps), { minLength: 1, maxLength: 9 }),
+        fc.boolean(),
+        (g, rows, props, withP) => {
+          const gas = gases[g]!;
+          const T = Float64Array.from(rows, (r) => r[0]);
+          const p = Float64Array.from(rows, (r) => r[1]);
+          const wanted = withP ? props : props.filter((k) => k !== 's');
+          if (wanted.length === 0) return;
+          const inputs = withP ? { T, p } : { T };
+          const fused = idealGasBatch(gas, inputs, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
+          const generic = runBatch(idealGasBatchModel(gas, false), inputs, wanted) as unknown as Record<string, Float64Array> & { status: Uint8Array };
+          expect(Array.from(fused.status)).toEqual(Array.from(generic.status));
+          for (const prop of wanted) expect(same(fused[prop]!, generic[prop]!), prop).toBe(true);
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+  it('the non-finite rule: an extrapolating gas at a denormal temperature gives invalidInput and NaN in every column, as the runner does', () => {
+    // h = R·T·h°/(R̄T) overflows for T = 5e-324 K (1/T is infinite) while cp stays finite
+    const gas = idealGas('N2', { extrapolate: true });
+    const T = Float64Array.of(300, 5e-324, 400);
+    const fused = idealGasBatch(gas, { T }, ['cp', 'h']);
+    const generic = runBatch(idealGasBatchModel(gas, false), { T }, ['cp', 'h']);
+    expect(Array.from(fused.status)).toEqual([0, 3, 0]);
+    expect(Array.from(generic.status)).toEqual([0, 3, 0]);
+    expect(Number.isNaN(fused.cp[1]!) && Number.isNaN(fused.h[1]!)).toBe(true);
+    expect(same(fused.h, generic.h) && same(fused.cp, generic.cp)).toBe(true);
+  });
+  it('the same results from a second batch of the same gas (its model is kept between calls)', () => {
+    const gas = idealGas('air');
+    const T = Float64Array.of(300, 9000, 1200);
+    const first = idealGasBatch(gas, { T }, ['cp', 'h']);
+    const second = idealGasBatch(gas, { T }, ['cp', 'h']);
+    expect(same(first.h, second.h) && same(first.cp, second.cp)).toBe(true);
+    expect(Array.from(second.status)).toEqual([0, 1, 0]);
+  });
 });
 
 import { runBatch, type BatchModel } from '../../src/core/batch.js';
+import { idealGasBatchModel } from '../../src/ideal-gas/batch.js';
 import { SolverContext } from '../../src/water/if97/context.js';
 import { stateFromPS } from '../../src/water/if97/index.js';
 import { PHASE } from '../../src/water/if97/water-state.js';
