@@ -9,7 +9,9 @@
  * Then, when a C compiler is present (gcc, cc or clang), the native comparison: bench/c/region1.c
  * (generated from data/if97 by scripts/generate-c-reference.ts) is built with -O2 and timed against
  * `waterBatch` over the same region 1 states, alternating runs, process CPU time; the C results are
- * checked bit for bit against `region1`. Without a compiler it says "no compiler" and goes on.
+ * checked bit for bit against `region1`. It prints the ratio of the medians and the ratio of the
+ * fastest rounds of each, on which the 1.2× target is judged (the C program's figure moves between
+ * runs on a shared host). Without a compiler it says "no compiler" and goes on.
  * Last, cold start: the import of each built entry, as the difference to a bare `node` start, and the
  * import with a first call (unit text read, data built on first use) of the water, humid-air and
  * ideal-gas entries.
@@ -108,6 +110,13 @@ interface Native {
   batchNs?: number;
   singleNs?: number;
   ratioToC?: number;
+  /**
+   * The fastest round of each against each other: C's fastest median of a round over the batch's.
+   * On this shared host the C program's own figure moves between runs (61–62 against 84–93 ns per
+   * state in runs minutes apart, while the batch in the parent stayed at 75–77 ns), which can put the
+   * median ratio under 1 without the batch getting faster; the fastest rounds are the least disturbed.
+   */
+  ratioToCFastest?: number;
   ratioToCChecked?: number;
   bitForBit?: boolean;
   /** The term sums alone (region1Sums over the same states): C and TypeScript, ns per state, and whether their sums of γ_τ agree bit for bit. */
@@ -200,6 +209,7 @@ function nativeRuns(compiler: string, exe: string): Native {
     batchNs,
     singleNs: mid(singleRuns),
     ratioToC: batchNs / cPlainNs,
+    ratioToCFastest: Math.min(...batch) / Math.min(...cPlain),
     ratioToCChecked: batchNs / mid(cChecked),
     bitForBit,
     kernel: { cNs: mid(cKernel), jsNs: mid(jsKernel), bitForBit: kernelBitForBit },
@@ -212,8 +222,9 @@ if (native.skipped !== undefined) console.log(`native comparison: ${native.skipp
 else {
   console.log(
     `native comparison (${native.compiler} -O2, ${native.states} region 1 states, v h u s cp w, CPU time, medians): C ${native.cPlainNs!.toFixed(1)} ns/state ` +
-      `(with the region test ${native.cCheckedNs!.toFixed(1)}), waterBatch ${native.batchNs!.toFixed(1)} ns/state: ${native.ratioToC!.toFixed(2)}× the C build ` +
-      `(target 1.2×: ${native.ratioToC! <= 1.2 ? 'met' : `missed by ${(native.ratioToC! / 1.2).toFixed(2)}×`}); C results ${native.bitForBit ? 'equal region1 bit for bit' : 'DIFFER from region1'}`,
+      `(with the region test ${native.cCheckedNs!.toFixed(1)}), waterBatch ${native.batchNs!.toFixed(1)} ns/state: ${native.ratioToC!.toFixed(2)}× the C build, ` +
+      `${native.ratioToCFastest!.toFixed(2)}× between the fastest rounds of each (target 1.2×, judged on the fastest rounds: ${native.ratioToCFastest! <= 1.2 ? 'met' : `missed by ${(native.ratioToCFastest! / 1.2).toFixed(2)}×`}); ` +
+      `C results ${native.bitForBit ? 'equal region1 bit for bit' : 'DIFFER from region1'}`,
   );
   const k = native.kernel!;
   console.log(
