@@ -111,7 +111,7 @@ interface Native {
   singleNs?: number;
   ratioToC?: number;
   /**
-   * The fastest round of each against each other: C's fastest median of a round over the batch's.
+   * The fastest round of each against each other: the batch's fastest round (median of its repetitions) over C's.
    * On this shared host the C program's own figure moves between runs (61–62 against 84–93 ns per
    * state in runs minutes apart, while the batch in the parent stayed at 75–77 ns), which can put the
    * median ratio under 1 without the batch getting faster; the fastest rounds are the least disturbed.

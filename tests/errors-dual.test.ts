@@ -6,7 +6,7 @@
 import { createRequire } from 'node:module';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { builtDist } from './helpers/dist.js';
+import { builtDist, importBuiltRoot } from './helpers/dist.js';
 
 const dist = fileURLToPath(new URL('../dist/', import.meta.url));
 
@@ -14,7 +14,7 @@ beforeAll(() => builtDist());
 
 describe('error classes across the ESM and CommonJS builds', () => {
   it('instanceof holds both ways, for the base class and each kind, and not across kinds', async () => {
-    const esm = (await import(/* @vite-ignore */ `${dist}index.js`)) as typeof import('../src/index.js');
+    const esm = await importBuiltRoot();
     const cjs = createRequire(import.meta.url)(`${dist}index.cjs`) as typeof import('../src/index.js');
     expect(esm.OutOfRangeError).not.toBe(cjs.OutOfRangeError); // two copies really are loaded
     const fromCjs = (() => {
@@ -42,7 +42,7 @@ describe('error classes across the ESM and CommonJS builds', () => {
     expect(new Error('plain')).not.toBeInstanceOf(esm.HeatstateError);
   });
   it('a subclass of a user keeps the ordinary instanceof', async () => {
-    const esm = (await import(/* @vite-ignore */ `${dist}index.js`)) as typeof import('../src/index.js');
+    const esm = await importBuiltRoot();
     class MyRangeError extends esm.OutOfRangeError {}
     const mine = new MyRangeError({ quantity: 'T', value: 1, min: 2, max: 3, unit: 'K', scope: 'test' });
     expect(mine).toBeInstanceOf(MyRangeError);

@@ -3,7 +3,7 @@ import { readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { builtDist } from './helpers/dist.js';
+import { builtDist, importBuiltRoot } from './helpers/dist.js';
 import { expectClose } from './helpers/tolerance.js';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -21,8 +21,6 @@ const run = (file: string, env: Record<string, string> = {}) =>
     timeout: 120_000,
     env: { ...process.env, TSX_TSCONFIG_PATH: join(root, 'tests/helpers/tsconfig.examples.json'), ...env },
   });
-/** The built package, which the examples load: their printed numbers are compared with its own. */
-const dist = async () => (await import(/* @vite-ignore */ pathToFileURL(join(root, 'dist/index.js')).href)) as typeof import('../src/index.js');
 
 // examples import the built package ('heatstate/...') as users do: they need this run's dist/
 beforeAll(() => builtDist(), 300_000);
@@ -48,11 +46,12 @@ describe('examples/', () => {
 
   it('demo.ts (npm start) prints each result in SI and US units and the caution', async () => {
     const out = run('examples/demo.ts');
+    // the printed numbers are compared with the built package's own, which the examples load
     expect(out).toMatch(/heat duty\s+402\.\d kW\s+13\d{5} Btu\/h/);
     expect(out).toMatch(/temperature rise.*30 ΔK\s+54 Δ°F/);
     // the pump step takes v at the pump's 85 °C: its Δh = v·Δp agrees with the isentropic pump of
     // IAPWS-IF97 (R7-97) within 0.1 % (v at 25 °C would make it 2.8 % low)
-    const { water, quantity } = await dist();
+    const { water, quantity } = await importBuiltRoot();
     const inlet = water.state({ T: '85 °C', p: quantity(2.5, 'barg') });
     const isentropic = water.state({ p: quantity(95, 'psig'), s: inlet.s }).h.si - inlet.h.si;
     const pump = /Δh = v·Δp\s+(\d+\.\d+) kJ\/kg/.exec(out);
@@ -65,7 +64,7 @@ describe('examples/', () => {
 
   it('node-script.ts computes a turbine in both unit systems, matching the library', async () => {
     const out = run('examples/node-script.ts');
-    const { water, quantity } = await dist();
+    const { water, quantity } = await importBuiltRoot();
     const inlet = water.state({ p: quantity(30, 'barg'), T: '400 °C' });
     expect(out).toContain(`${Number(inlet.h.in('kJ/kg').toPrecision(4))} kJ/kg`);
     expect(out).toContain(`${Number(inlet.h.in('Btu/lbm').toPrecision(4))} Btu/lbm`);
@@ -74,7 +73,7 @@ describe('examples/', () => {
 
   it('metering/metering.ts turns the sensor CSV into heat flow with the batch API', async () => {
     const out = run('examples/metering/metering.ts');
-    const { water } = await dist();
+    const { water } = await importBuiltRoot();
     // first reading: 7.9 barg, 201.5 °C, 1.42 kg/s, condensate returned at 8 barg and 60 °C
     const q = 1.42 * (water.state({ p: '7.9 barg', T: '201.5 °C' }).h.si - water.state({ p: '8 barg', T: '60 °C' }).h.si);
     expect(out).toMatch(new RegExp(`^\\s+0\\s+891\\.3\\s+201\\.5\\s+1\\.42\\s+\\d+\\.\\d\\s+${(q / 1e3).toFixed(0)}$`, 'm'));
@@ -89,7 +88,7 @@ describe('examples/', () => {
 
   it('air-handler.ts prints the coil and reheat loads that the facade computes, and the caution', async () => {
     const out = run('examples/air-handler.ts');
-    const { humidAir } = await dist();
+    const { humidAir } = await importBuiltRoot();
     const mixed = humidAir.mix([
       { state: humidAir.state({ T: '33 °C', RH: 0.4 }), flow: '1.2 kg/s' },
       { state: humidAir.state({ T: '24 °C', RH: 0.5 }), flow: '3.6 kg/s' },

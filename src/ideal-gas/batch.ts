@@ -31,7 +31,8 @@ export const IDEAL_GAS_BATCH_STATUS = Status;
 /**
  * The batch model of a gas: `solve` checks an element's T (and p) and the readers are the per-call
  * formulas. With `fused` (the default), each input set also has {@link fusedLoop}; without it the
- * runner's generic loop does the work (the reference tests/batch/batch.test.ts compares against).
+ * runner's generic loop does the work (the reference that tests/batch/batch.test.ts compares the fused
+ * loop with).
  * @internal
  */
 export function idealGasBatchModel<B extends Basis>(gas: IdealGas<B>, fused = true): BatchModel<GasPoint, IdealGasBatchProperty> {

@@ -4,6 +4,7 @@
  * in its `beforeAll` and never builds on its own.
  */
 import { existsSync, readFileSync } from 'node:fs';
+import { fileURLToPath, pathToFileURL } from 'node:url';
 import { inject } from 'vitest';
 
 let ready: Promise<void> | undefined;
@@ -22,4 +23,11 @@ export function builtDist(timeoutMs = 240_000): Promise<void> {
     if (result.code !== 0) throw new Error(`npm run build (tsup) failed with exit code ${result.code}:\n${result.output}`);
   })();
   return ready;
+}
+
+/** The built root entry (dist/index.js) as a user's `import 'heatstate'` loads it, typed as the source's; after this run's build. */
+export async function importBuiltRoot(): Promise<typeof import('../../src/index.js')> {
+  await builtDist();
+  const file = fileURLToPath(new URL('../../dist/index.js', import.meta.url));
+  return (await import(/* @vite-ignore */ pathToFileURL(file).href)) as typeof import('../../src/index.js');
 }
